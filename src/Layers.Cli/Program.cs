@@ -1,1 +1,3 @@
-return 0;
+using Layers.Cli.Commands;
+
+return CliApp.Build(Console.Out, Console.Error).Parse(args).Invoke();

@@ -1,0 +1,28 @@
+using System.CommandLine;
+using Layers.Core.Reports;
+
+namespace Layers.Cli.Commands;
+
+/// <summary><c>layers check CASE</c>: validates a case and prints its stack in consistent units, without solving.</summary>
+internal static class CheckCommand
+{
+    public static Command Create(TextWriter output, TextWriter error)
+    {
+        var caseFile = CaseArgument.Create();
+        var command = new Command("check", "Validate a case file and print the stack in consistent units, without solving.");
+        command.Arguments.Add(caseFile);
+        command.SetAction(parseResult =>
+        {
+            var read = CaseArgument.ReadOrReport(parseResult.GetValue(caseFile)!, error);
+            if (read?.Case is not { } simulation)
+            {
+                return ExitCodes.InvalidInput;
+            }
+
+            output.Write(StackText.Table(simulation));
+            output.WriteLine("valid");
+            return ExitCodes.Success;
+        });
+        return command;
+    }
+}

@@ -1,0 +1,39 @@
+using Layers.Core.Domain;
+
+namespace Layers.Core.Analytics;
+
+/// <summary>
+/// Equilibrium of a closed system (faces closed or finite compartments): u = c / K is uniform, and one mass balance
+/// fixes it, u_eq = (sum of initial masses) / (sum of capacities), with capacity h K for a layer and (V/A) K for a
+/// compartment; then c_eq = K u_eq in every medium. This is the N-medium form of the partition equilibrium
+/// c_A = K c_B with conservation of mass (Crank, The Mathematics of Diffusion, 2nd ed., ch. 4.3.2, the limit
+/// t -> infinity of the limited-volume problem, generalised to many media).
+/// </summary>
+public sealed record ClosedSystemEquilibrium(double ContinuousVariable)
+{
+    /// <summary>Computes the equilibrium of a closed case.</summary>
+    /// <exception cref="ArgumentException">When a face is a bath (the system is open).</exception>
+    public static ClosedSystemEquilibrium Of(SimulationCase simulation)
+    {
+        if (!simulation.IsClosed)
+        {
+            throw new ArgumentException("A case with a bath is open; use SteadyStateStack.", nameof(simulation));
+        }
+
+        var mass = simulation.Stack.InitialMassPerArea;
+        var capacity = simulation.Stack.Layers.Sum(layer => layer.ThicknessMeters * layer.PartitionCoefficient);
+        foreach (var face in new[] { simulation.Left, simulation.Right })
+        {
+            if (face is CompartmentFace compartment)
+            {
+                mass += compartment.InitialMassPerArea;
+                capacity += compartment.VolumePerAreaMeters * compartment.PartitionCoefficient;
+            }
+        }
+
+        return new ClosedSystemEquilibrium(mass / capacity);
+    }
+
+    /// <summary>Equilibrium concentration in a medium with partition coefficient K, kg/m3.</summary>
+    public double ConcentrationIn(double partitionCoefficient) => partitionCoefficient * ContinuousVariable;
+}

@@ -1,0 +1,185 @@
+using System.Text.Json;
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.TimeStepping;
+using Layers.Core.Units;
+
+namespace Layers.Core.Cases;
+
+/// <summary>
+/// Reads a JSON case file into a validated <see cref="SimulationCase"/> in SI units, or into the complete list of
+/// its errors, each with its JSON path. The format is described in docs/case-format.md and docs/case.schema.json.
+/// </summary>
+public static class CaseReader
+{
+    private static readonly string[] TopKeys =
+    [
+        "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
+        "duration", "reportTimes", "extraOutputTimes", "numerics",
+    ];
+
+    private static readonly string[] ReferenceKeys = ["name", "density"];
+    private static readonly string[] NumericsKeys = ["cells", "minimumCellsPerLayer", "relativeTolerance"];
+
+    private static readonly JsonDocumentOptions ParseOptions = new()
+    {
+        AllowTrailingCommas = true,
+        CommentHandling = JsonCommentHandling.Skip,
+    };
+
+    /// <summary>Reads a case file from disk.</summary>
+    public static CaseReadResult ReadFile(string path)
+    {
+        string text;
+        try
+        {
+            text = File.ReadAllText(path);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            return new CaseReadResult(path, null, [new CaseError("$", $"cannot read the file: {exception.Message}")]);
+        }
+
+        return ReadText(text, path);
+    }
+
+    /// <summary>Reads a case from JSON text; <paramref name="fileName"/> names it in messages and gives the default title.</summary>
+    public static CaseReadResult ReadText(string json, string fileName)
+    {
+        JsonDocument document;
+        try
+        {
+            document = JsonDocument.Parse(json, ParseOptions);
+        }
+        catch (JsonException exception)
+        {
+            var error = new CaseError("$", $"not valid JSON: {FirstSentence(exception.Message)}", (exception.LineNumber ?? 0) + 1, (exception.BytePositionInLine ?? 0) + 1);
+            return new CaseReadResult(fileName, null, [error]);
+        }
+
+        using (document)
+        {
+            var errors = new List<CaseError>();
+            var simulation = Read(document.RootElement, fileName, new ReadContext(errors));
+            return errors.Count == 0
+                ? new CaseReadResult(fileName, simulation, errors)
+                : new CaseReadResult(fileName, null, errors);
+        }
+    }
+
+    private static SimulationCase? Read(JsonElement rootElement, string fileName, ReadContext context)
+    {
+        if (JsonFields.Open(rootElement, "$", context.Errors, TopKeys) is not { } root)
+        {
+            return null;
+        }
+
+        root.Text("$schema");
+        var title = root.Text("title") ?? Path.GetFileNameWithoutExtension(fileName);
+        root.Text("description");
+        var referenceName = ReadBasisAndReference(root, context);
+        var layers = LayerReader.Read(root, context);
+        var left = FaceReader.Read(root, "left", context);
+        var right = FaceReader.Read(root, "right", context);
+        var (duration, durationUnit) = TimesReader.Duration(root, context);
+        var reports = TimesReader.List(root, "reportTimes", duration, ascending: true, context);
+        var extra = TimesReader.List(root, "extraOutputTimes", duration, ascending: false, context);
+        var (grid, solver) = ReadNumerics(root, context);
+        if (context.Errors.Count > 0 || left is null || right is null || duration is not { } end)
+        {
+            return null;
+        }
+
+        return new SimulationCase
+        {
+            Title = title,
+            Stack = new LayerStack(layers),
+            Left = left,
+            Right = right,
+            ReferenceMedium = referenceName,
+            DurationSeconds = end,
+            ReportTimesSeconds = (IReadOnlyList<double>?)reports ?? TimesReader.DefaultReportFractions.Select(fraction => fraction * end).ToArray(),
+            ExtraOutputTimesSeconds = extra?.Order().ToArray() ?? [],
+            Grid = grid,
+            Solver = solver,
+            Display = Display(root, durationUnit!, context),
+        };
+    }
+
+    private static string ReadBasisAndReference(JsonFields root, ReadContext context)
+    {
+        switch (root.Text("partitionBasis"))
+        {
+            case null or "volume":
+                break;
+            case "mass":
+                context.Basis = PartitionBasis.Mass;
+                break;
+            case var other:
+                root.Error("partitionBasis", $"expected \"volume\" or \"mass\"; got \"{other}\"");
+                break;
+        }
+
+        var name = "reference medium";
+        if (root.Member("referenceMedium") is { } element
+            && JsonFields.Open(element, root.PathOf("referenceMedium"), context.Errors, ReferenceKeys) is { } reference)
+        {
+            name = reference.Text("name") ?? name;
+            context.ReferenceDensity = ReadContext.Positive(reference, "density", Dimension.MassConcentration, required: false);
+        }
+
+        if (context.Basis == PartitionBasis.Mass && context.ReferenceDensity is null)
+        {
+            root.Error("referenceMedium", "needs \"density\" because partitionBasis is \"mass\"");
+        }
+
+        return name;
+    }
+
+    private static (GridOptions Grid, SolverOptions Solver) ReadNumerics(JsonFields root, ReadContext context)
+    {
+        var grid = new GridOptions();
+        var solver = new SolverOptions();
+        if (root.Member("numerics") is not { } element
+            || JsonFields.Open(element, root.PathOf("numerics"), context.Errors, NumericsKeys) is not { } numerics)
+        {
+            return (grid, solver);
+        }
+
+        grid = grid with
+        {
+            TotalCells = numerics.Integer("cells") ?? grid.TotalCells,
+            MinimumCellsPerLayer = numerics.Integer("minimumCellsPerLayer") ?? grid.MinimumCellsPerLayer,
+        };
+        solver = solver with { RelativeTolerance = numerics.Number("relativeTolerance") ?? solver.RelativeTolerance };
+        foreach (var (setting, message) in grid.Problems().Concat(solver.Problems()))
+        {
+            numerics.Error(setting, message);
+        }
+
+        return (grid, solver);
+    }
+
+    private static DisplayUnits Display(JsonFields root, UnitDefinition durationUnit, ReadContext context)
+    {
+        var depth = root.Member("layers") is { ValueKind: JsonValueKind.Array } layers
+            && layers.GetArrayLength() > 0
+            && layers[0].TryGetProperty("thickness", out var thickness)
+            && QuantityParser.TryParse(thickness.GetString(), out var quantity, out _)
+                ? quantity.Unit
+                : UnitTable.Get("m");
+        var concentration = context.FirstConcentrationUnit is { Dimension: Dimension.MassConcentration } unit
+            ? unit
+            : UnitTable.Get("mg/L");
+        var perArea = concentration.Symbol.StartsWith("ug", StringComparison.Ordinal) || concentration.Symbol.StartsWith("ng", StringComparison.Ordinal)
+            ? UnitTable.Get("ug/cm2")
+            : UnitTable.Get("mg/dm2");
+        return new DisplayUnits { Time = durationUnit, Depth = depth, Concentration = concentration, MassPerArea = perArea };
+    }
+
+    private static string FirstSentence(string message)
+    {
+        var end = message.IndexOf(". ", StringComparison.Ordinal);
+        return end > 0 ? message[..(end + 1)] : message;
+    }
+}

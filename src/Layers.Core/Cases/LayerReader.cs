@@ -1,0 +1,66 @@
+using System.Text.Json;
+using Layers.Core.Domain;
+using Layers.Core.Units;
+
+namespace Layers.Core.Cases;
+
+/// <summary>Reads the <c>layers</c> array.</summary>
+internal static class LayerReader
+{
+    private static readonly string[] Keys =
+        ["name", "thickness", "diffusionCoefficient", "partitionCoefficient", "initialConcentration", "density"];
+
+    public static List<Layer> Read(JsonFields root, ReadContext context)
+    {
+        var layers = new List<Layer>();
+        if (root.Member("layers", required: true) is not { } array)
+        {
+            return layers;
+        }
+
+        if (array.ValueKind != JsonValueKind.Array || array.GetArrayLength() == 0)
+        {
+            root.Error("layers", $"expected a non-empty array of layers; found {JsonFields.Describe(array)}");
+            return layers;
+        }
+
+        var names = new HashSet<string>(StringComparer.Ordinal);
+        var index = 0;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{root.Path}.layers[{index++}]";
+            if (JsonFields.Open(element, path, context.Errors, Keys) is not { } fields)
+            {
+                continue;
+            }
+
+            var name = fields.Text("name", required: true);
+            if (name is not null && (name.Trim().Length == 0 || !names.Add(name)))
+            {
+                fields.Error("name", name.Trim().Length == 0 ? "must not be empty" : $"\"{name}\" is used by an earlier layer; names must be unique");
+            }
+
+            if (ReadLayer(fields, context, name) is { } layer)
+            {
+                layers.Add(layer);
+            }
+        }
+
+        return layers;
+    }
+
+    private static Layer? ReadLayer(JsonFields fields, ReadContext context, string? name)
+    {
+        var thickness = ReadContext.Positive(fields, "thickness", Dimension.Length, required: true);
+        var diffusivity = ReadContext.Positive(fields, "diffusionCoefficient", Dimension.Diffusivity, required: true);
+        var density = ReadContext.Positive(fields, "density", Dimension.MassConcentration, required: false);
+        var k = context.PartitionCoefficient(fields, density);
+        var concentration = context.Concentration(fields, "initialConcentration", density);
+        if (name is null || thickness is null || diffusivity is null || k is null || concentration is null)
+        {
+            return null;
+        }
+
+        return new Layer(name, thickness.Value, diffusivity.Value, k.Value, concentration.Value, density);
+    }
+}

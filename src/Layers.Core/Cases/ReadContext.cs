@@ -1,0 +1,97 @@
+using Layers.Core.Units;
+
+namespace Layers.Core.Cases;
+
+/// <summary>
+/// What the readers of the parts of a case share: the error list, the partition basis and the reference density,
+/// and the conversions that depend on them. Every unit conversion of the case happens here or in
+/// <see cref="Quantity.SiValue"/>, once.
+/// </summary>
+internal sealed class ReadContext
+{
+    public static readonly Dimension[] ConcentrationDimensions = [Dimension.MassConcentration, Dimension.MassFraction];
+
+    public ReadContext(List<CaseError> errors) => Errors = errors;
+
+    public List<CaseError> Errors { get; }
+
+    public PartitionBasis Basis { get; set; } = PartitionBasis.Volume;
+
+    public double? ReferenceDensity { get; set; }
+
+    /// <summary>Unit of the first concentration given in the case, for display.</summary>
+    public UnitDefinition? FirstConcentrationUnit { get; set; }
+
+    /// <summary>Reads a strictly positive quantity.</summary>
+    public static double? Positive(JsonFields fields, string key, Dimension dimension, bool required)
+    {
+        var quantity = fields.Quantity(key, [dimension], required);
+        if (quantity is { } value && !(value.SiValue > 0))
+        {
+            fields.Error(key, $"must be > 0; got \"{value}\"");
+            return null;
+        }
+
+        return quantity?.SiValue;
+    }
+
+    /// <summary>Reads a partition coefficient (default 1) and converts it to the volume basis.</summary>
+    public double? PartitionCoefficient(JsonFields fields, double? densityKgPerCubicMeter)
+    {
+        var k = fields.Number("partitionCoefficient") ?? 1;
+        if (!(k > 0))
+        {
+            fields.Error("partitionCoefficient", $"must be > 0; got {k.ToString(System.Globalization.CultureInfo.InvariantCulture)}");
+            return null;
+        }
+
+        if (Basis == PartitionBasis.Volume)
+        {
+            return k;
+        }
+
+        if (densityKgPerCubicMeter is not { } density)
+        {
+            fields.Error("density", "is required because partitionBasis is \"mass\" (K is converted with the densities)");
+            return null;
+        }
+
+        return ReferenceDensity is { } reference ? k * density / reference : null;
+    }
+
+    /// <summary>
+    /// Reads a concentration (default 0) as mass per volume; a mass fraction is multiplied by the density of its
+    /// medium. Negative values are rejected.
+    /// </summary>
+    public double? Concentration(JsonFields fields, string key, double? densityKgPerCubicMeter)
+    {
+        if (fields.Quantity(key, ConcentrationDimensions) is not { } quantity)
+        {
+            return fields.Has(key) ? null : 0;
+        }
+
+        if (!(quantity.SiValue >= 0))
+        {
+            fields.Error(key, $"must be >= 0; got \"{quantity}\"");
+            return null;
+        }
+
+        if (quantity.SiValue > 0)
+        {
+            FirstConcentrationUnit ??= quantity.Unit;
+        }
+
+        if (quantity.Dimension == Dimension.MassConcentration)
+        {
+            return quantity.SiValue;
+        }
+
+        if (densityKgPerCubicMeter is not { } density)
+        {
+            fields.Error(key, $"\"{quantity}\" is a mass fraction; give \"density\" here too (e.g. \"0.92 g/cm3\") to convert it to mass per volume");
+            return null;
+        }
+
+        return quantity.SiValue * density;
+    }
+}

@@ -1,0 +1,62 @@
+using System.Text.Json;
+using Layers.Core.Units;
+
+namespace Layers.Core.Cases;
+
+/// <summary>Reads <c>duration</c>, <c>reportTimes</c> and <c>extraOutputTimes</c>.</summary>
+internal static class TimesReader
+{
+    /// <summary>Default report times as fractions of the duration.</summary>
+    public static readonly double[] DefaultReportFractions = [0.01, 0.1, 0.25, 0.5, 1];
+
+    public static (double? Duration, UnitDefinition? Unit) Duration(JsonFields root, ReadContext context)
+    {
+        var quantity = root.Quantity("duration", [Dimension.Time], required: true);
+        if (quantity is { } value && !(value.SiValue > 0))
+        {
+            root.Error("duration", $"must be > 0; got \"{value}\"");
+            return (null, null);
+        }
+
+        return (quantity?.SiValue, quantity?.Unit);
+    }
+
+    /// <summary>Reads a list of times within (0, duration]; report times must also be strictly ascending.</summary>
+    public static List<double>? List(JsonFields root, string key, double? duration, bool ascending, ReadContext context)
+    {
+        if (root.Member(key) is not { } array)
+        {
+            return null;
+        }
+
+        if (array.ValueKind != JsonValueKind.Array)
+        {
+            root.Error(key, $"expected an array of times such as [\"1 d\", \"10 d\"]; found {JsonFields.Describe(array)}");
+            return null;
+        }
+
+        var times = new List<double>();
+        var index = 0;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{root.PathOf(key)}[{index++}]";
+            if (JsonFields.ParseQuantity(element, path, [Dimension.Time], context.Errors) is not { } time)
+            {
+                continue;
+            }
+
+            if (!(time.SiValue > 0) || (duration is { } end && time.SiValue > end * (1 + 1e-12)))
+            {
+                context.Errors.Add(new CaseError(path, $"must be > 0 and not later than the duration; got \"{time}\""));
+            }
+            else if (ascending && times.Count > 0 && time.SiValue <= times[^1])
+            {
+                context.Errors.Add(new CaseError(path, $"must be later than the previous time; got \"{time}\""));
+            }
+
+            times.Add(time.SiValue);
+        }
+
+        return times;
+    }
+}

@@ -1,0 +1,98 @@
+using Layers.Core.Domain;
+
+namespace Layers.Core.Discretization;
+
+/// <summary>
+/// The semi-discrete equations Cap du/dt = -A u + s over a chain of nodes: an optional well-mixed compartment node,
+/// the cells of the stack, an optional compartment node at the other end. Per unit contact area throughout.
+/// </summary>
+/// <remarks>
+/// Node n exchanges with node n+1 through the conductance G[n] = 1 / R[n] (see <see cref="SeriesResistance"/>), so
+/// A is symmetric tridiagonal with zero row sums apart from bath couplings, which conserves mass exactly.
+/// A bath adds G_bath to the diagonal of its end node and G_bath u_bath to s. Storage of a cell is h K, of a
+/// compartment (V/A) K.
+/// </remarks>
+public sealed class DiffusionSystem
+{
+    internal DiffusionSystem(
+        Grid grid,
+        double[] capacity,
+        double[] conductance,
+        BathCoupling left,
+        BathCoupling right,
+        int firstCellNode)
+    {
+        Grid = grid;
+        Capacity = capacity;
+        Conductance = conductance;
+        LeftBath = left;
+        RightBath = right;
+        FirstCellNode = firstCellNode;
+    }
+
+    /// <summary>The mesh of the stack.</summary>
+    public Grid Grid { get; }
+
+    /// <summary>Storage per node, m (per unit area): h K for cells, (V/A) K for compartments.</summary>
+    public double[] Capacity { get; }
+
+    /// <summary>Conductance between node n and node n+1, m/s. Length = node count - 1.</summary>
+    public double[] Conductance { get; }
+
+    /// <summary>Coupling of the first node to a bath on the left (zero conductance when there is none).</summary>
+    public BathCoupling LeftBath { get; }
+
+    /// <summary>Coupling of the last node to a bath on the right (zero conductance when there is none).</summary>
+    public BathCoupling RightBath { get; }
+
+    /// <summary>Index of the node of the first cell (1 when a compartment sits on the left, else 0).</summary>
+    public int FirstCellNode { get; }
+
+    /// <summary>Number of unknowns.</summary>
+    public int NodeCount => Capacity.Length;
+
+    /// <summary>Node index of the compartment on a side, or -1 when that side has none.</summary>
+    public int CompartmentNode(Side side, SimulationCase simulation)
+    {
+        if (simulation.Face(side) is not CompartmentFace)
+        {
+            return -1;
+        }
+
+        return side == Side.Left ? 0 : NodeCount - 1;
+    }
+
+    /// <summary>
+    /// Rate of change of stored mass at every node, r = s - A u (kg/m2/s), written into <paramref name="rate"/>.
+    /// </summary>
+    public void Residual(ReadOnlySpan<double> u, Span<double> rate)
+    {
+        var last = NodeCount - 1;
+        for (var n = 0; n <= last; n++)
+        {
+            rate[n] = 0;
+        }
+
+        for (var n = 0; n < last; n++)
+        {
+            var flux = Conductance[n] * (u[n] - u[n + 1]);
+            rate[n] -= flux;
+            rate[n + 1] += flux;
+        }
+
+        rate[0] += LeftBath.InflowRate(u[0]);
+        rate[last] += RightBath.InflowRate(u[last]);
+    }
+
+    /// <summary>Mass per unit area held by all nodes for a state u, kg/m2.</summary>
+    public double TotalMass(ReadOnlySpan<double> u)
+    {
+        var sum = 0.0;
+        for (var n = 0; n < NodeCount; n++)
+        {
+            sum += Capacity[n] * u[n];
+        }
+
+        return sum;
+    }
+}

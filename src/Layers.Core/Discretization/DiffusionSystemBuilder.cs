@@ -1,0 +1,69 @@
+using Layers.Core.Domain;
+
+namespace Layers.Core.Discretization;
+
+/// <summary>Assembles a <see cref="DiffusionSystem"/> from a case and its mesh.</summary>
+public static class DiffusionSystemBuilder
+{
+    /// <summary>Assembles the system and returns it with the initial state u(0).</summary>
+    public static (DiffusionSystem System, double[] InitialState) Build(SimulationCase simulation, Grid grid)
+    {
+        var stack = simulation.Stack;
+        var hasLeftCompartment = simulation.Left is CompartmentFace;
+        var hasRightCompartment = simulation.Right is CompartmentFace;
+        var first = hasLeftCompartment ? 1 : 0;
+        var nodeCount = grid.CellCount + first + (hasRightCompartment ? 1 : 0);
+        var capacity = new double[nodeCount];
+        var initial = new double[nodeCount];
+        var halfResistance = new double[grid.CellCount];
+
+        for (var cell = 0; cell < grid.CellCount; cell++)
+        {
+            var layer = stack.Layers[grid.LayerOfCell[cell]];
+            var width = grid.WidthsMeters[cell];
+            capacity[first + cell] = width * layer.PartitionCoefficient;
+            initial[first + cell] = layer.InitialContinuousVariable;
+            halfResistance[cell] = SeriesResistance.HalfCell(
+                width, layer.DiffusivitySquareMetersPerSecond, layer.PartitionCoefficient);
+        }
+
+        var conductance = new double[nodeCount - 1];
+        for (var cell = 0; cell < grid.CellCount - 1; cell++)
+        {
+            conductance[first + cell] = 1 / (halfResistance[cell] + halfResistance[cell + 1]);
+        }
+
+        if (simulation.Left is CompartmentFace leftCompartment)
+        {
+            capacity[0] = leftCompartment.VolumePerAreaMeters * leftCompartment.PartitionCoefficient;
+            initial[0] = leftCompartment.InitialConcentrationKgPerCubicMeter / leftCompartment.PartitionCoefficient;
+            conductance[0] = 1 / (halfResistance[0] + FilmResistance(leftCompartment));
+        }
+
+        if (simulation.Right is CompartmentFace rightCompartment)
+        {
+            var last = nodeCount - 1;
+            capacity[last] = rightCompartment.VolumePerAreaMeters * rightCompartment.PartitionCoefficient;
+            initial[last] = rightCompartment.InitialConcentrationKgPerCubicMeter / rightCompartment.PartitionCoefficient;
+            conductance[last - 1] = 1 / (halfResistance[^1] + FilmResistance(rightCompartment));
+        }
+
+        var leftBath = Coupling(simulation.Left, halfResistance[0]);
+        var rightBath = Coupling(simulation.Right, halfResistance[^1]);
+        return (new DiffusionSystem(grid, capacity, conductance, leftBath, rightBath, first), initial);
+    }
+
+    private static double FilmResistance(CompartmentFace compartment)
+        => SeriesResistance.Film(compartment.FilmCoefficientMetersPerSecond, compartment.PartitionCoefficient);
+
+    private static BathCoupling Coupling(FaceCondition face, double halfCellResistance)
+    {
+        if (face is not BathFace bath)
+        {
+            return BathCoupling.None;
+        }
+
+        var film = SeriesResistance.Film(bath.FilmCoefficientMetersPerSecond, bath.PartitionCoefficient);
+        return new BathCoupling(1 / (halfCellResistance + film), bath.ContinuousVariable);
+    }
+}

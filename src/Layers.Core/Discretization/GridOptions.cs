@@ -1,0 +1,39 @@
+namespace Layers.Core.Discretization;
+
+/// <summary>Mesh settings. Defaults reach 0.1 % relative error on the verification cases.</summary>
+public sealed record GridOptions
+{
+    /// <summary>Target total number of cells over the stack. Default 240; admissible 8 to 200 000.</summary>
+    public int TotalCells { get; init; } = 240;
+
+    /// <summary>Minimum number of cells in every layer, however thin. Default 12; admissible 4 to 10 000.</summary>
+    public int MinimumCellsPerLayer { get; init; } = 12;
+
+    /// <summary>
+    /// Ratio between neighbouring cell widths inside a layer, cells being smallest at both edges of the layer
+    /// (interfaces and faces, where steep gradients live at early times). Default 1.08; admissible 1 to 1.5.
+    /// </summary>
+    public double GradingRatio { get; init; } = 1.08;
+
+    /// <summary>Largest allowed ratio between the widest and the narrowest cell of one layer. Default 20.</summary>
+    public double MaximumWidthRatio { get; init; } = 20;
+
+    /// <summary>Lists every setting outside its admissible range, as (setting, message) pairs.</summary>
+    public IEnumerable<(string Setting, string Message)> Problems()
+    {
+        if (TotalCells is < 8 or > 200_000)
+        {
+            yield return ("cells", $"must be from 8 to 200000; got {TotalCells}");
+        }
+
+        if (MinimumCellsPerLayer is < 4 or > 10_000)
+        {
+            yield return ("minimumCellsPerLayer", $"must be from 4 to 10000; got {MinimumCellsPerLayer}");
+        }
+
+        if (!(GradingRatio >= 1 && GradingRatio <= 1.5))
+        {
+            yield return ("gradingRatio", $"must be from 1 to 1.5; got {GradingRatio}");
+        }
+    }
+}

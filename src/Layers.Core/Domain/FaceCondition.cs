@@ -1,0 +1,74 @@
+namespace Layers.Core.Domain;
+
+/// <summary>
+/// What touches one face of the stack. A closed set of kinds: <see cref="ClosedFace"/>, <see cref="BathFace"/>
+/// and <see cref="CompartmentFace"/>. How each kind enters the discrete equations is in
+/// <see cref="Discretization.DiffusionSystemBuilder"/>.
+/// </summary>
+public abstract record FaceCondition
+{
+    private protected FaceCondition()
+    {
+    }
+
+    /// <summary>Short name of the kind, as written in case files.</summary>
+    public abstract string KindName { get; }
+}
+
+/// <summary>No flux through the face: an outer film surface, a patch backing, a symmetry plane.</summary>
+public sealed record ClosedFace : FaceCondition
+{
+    /// <inheritdoc />
+    public override string KindName => "closed";
+}
+
+/// <summary>
+/// An unlimited external medium held at a fixed concentration (0 is a perfect sink), optionally behind a
+/// liquid-side film with mass-transfer coefficient k, which adds the resistance 1 / (k K) in the u = c/K variable.
+/// </summary>
+/// <param name="Name">Name used in reports.</param>
+/// <param name="ConcentrationKgPerCubicMeter">Concentration in the bath, kg/m3.</param>
+/// <param name="PartitionCoefficient">K of the bath medium relative to the reference medium (volume basis).</param>
+/// <param name="FilmCoefficientMetersPerSecond">Film mass-transfer coefficient, m/s; null for a perfectly mixed bath.</param>
+public sealed record BathFace(
+    string Name,
+    double ConcentrationKgPerCubicMeter,
+    double PartitionCoefficient,
+    double? FilmCoefficientMetersPerSecond) : FaceCondition
+{
+    /// <inheritdoc />
+    public override string KindName => "bath";
+
+    /// <summary>The bath's value of the interface-continuous variable, u = c / K.</summary>
+    public double ContinuousVariable => ConcentrationKgPerCubicMeter / PartitionCoefficient;
+}
+
+/// <summary>
+/// A finite, well-mixed medium (a food, a simulant, a donor or receptor solution) whose concentration changes by
+/// the flux it receives through the contact area.
+/// </summary>
+/// <param name="Name">Name used in reports.</param>
+/// <param name="VolumeCubicMeters">Volume of the medium, m3.</param>
+/// <param name="ContactAreaSquareMeters">Area of the face in contact with the stack, m2.</param>
+/// <param name="PartitionCoefficient">K of the medium relative to the reference medium (volume basis).</param>
+/// <param name="InitialConcentrationKgPerCubicMeter">Initial concentration in the medium, kg/m3.</param>
+/// <param name="FilmCoefficientMetersPerSecond">Film mass-transfer coefficient on the medium's side, m/s; null for none.</param>
+/// <param name="DensityKgPerCubicMeter">Density of the medium, kg/m3, when given (for mass-fraction outputs).</param>
+public sealed record CompartmentFace(
+    string Name,
+    double VolumeCubicMeters,
+    double ContactAreaSquareMeters,
+    double PartitionCoefficient,
+    double InitialConcentrationKgPerCubicMeter,
+    double? FilmCoefficientMetersPerSecond,
+    double? DensityKgPerCubicMeter = null) : FaceCondition
+{
+    /// <inheritdoc />
+    public override string KindName => "compartment";
+
+    /// <summary>Volume per unit contact area, m: the compartment's depth if it were a slab over the contact area.</summary>
+    public double VolumePerAreaMeters => VolumeCubicMeters / ContactAreaSquareMeters;
+
+    /// <summary>Initial mass per unit contact area, kg/m2.</summary>
+    public double InitialMassPerArea => InitialConcentrationKgPerCubicMeter * VolumePerAreaMeters;
+}

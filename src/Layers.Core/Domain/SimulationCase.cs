@@ -1,0 +1,49 @@
+using Layers.Core.Discretization;
+using Layers.Core.TimeStepping;
+
+namespace Layers.Core.Domain;
+
+/// <summary>
+/// Everything the solver needs, already validated and in SI units: the solver's one input.
+/// </summary>
+public sealed record SimulationCase
+{
+    /// <summary>Short title for reports.</summary>
+    public required string Title { get; init; }
+
+    /// <summary>The stack of layers, left to right.</summary>
+    public required LayerStack Stack { get; init; }
+
+    /// <summary>What touches the left face.</summary>
+    public required FaceCondition Left { get; init; }
+
+    /// <summary>What touches the right face.</summary>
+    public required FaceCondition Right { get; init; }
+
+    /// <summary>Name of the medium the partition coefficients refer to (K = c / c_reference at equilibrium).</summary>
+    public string ReferenceMedium { get; init; } = "reference medium";
+
+    /// <summary>Simulated duration, s.</summary>
+    public required double DurationSeconds { get; init; }
+
+    /// <summary>Times at which full results (profiles, amounts) are reported, s, ascending, within the duration.</summary>
+    public required IReadOnlyList<double> ReportTimesSeconds { get; init; }
+
+    /// <summary>Extra times at which amounts are written to the time series, s, ascending, within the duration.</summary>
+    public IReadOnlyList<double> ExtraOutputTimesSeconds { get; init; } = [];
+
+    /// <summary>Mesh settings.</summary>
+    public GridOptions Grid { get; init; } = new();
+
+    /// <summary>Time-stepping settings.</summary>
+    public SolverOptions Solver { get; init; } = new();
+
+    /// <summary>Units the user wrote, used only to present results in familiar units.</summary>
+    public DisplayUnits Display { get; init; } = new();
+
+    /// <summary>The face condition on the given side.</summary>
+    public FaceCondition Face(Side side) => side == Side.Left ? Left : Right;
+
+    /// <summary>True when no mass can enter or leave: no face is a bath.</summary>
+    public bool IsClosed => Left is not BathFace && Right is not BathFace;
+}

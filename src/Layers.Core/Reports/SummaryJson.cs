@@ -1,0 +1,156 @@
+using System.Text;
+using System.Text.Json;
+using Layers.Core.Domain;
+using Layers.Core.Results;
+
+namespace Layers.Core.Reports;
+
+/// <summary>
+/// summary.json: the key results in SI units (kg, m, s, kg/m3, kg/m2, kg/(m2 s)), every key naming its unit.
+/// The keys are listed in docs/outputs.md. Arrays indexed like <c>reportTimesSeconds</c> hold one value per report
+/// time. The output is deterministic: no clock readings, invariant formatting.
+/// </summary>
+public static class SummaryJson
+{
+    /// <summary>The JSON text for a result.</summary>
+    /// <param name="result">The solved case.</param>
+    /// <param name="caseFile">The case file path as given by the user.</param>
+    public static string Write(SimulationResult result, string caseFile)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            json.WriteStartObject();
+            WriteHeader(json, result, caseFile);
+            json.WriteStartArray("reportTimesSeconds");
+            result.Reports.ToList().ForEach(report => json.WriteNumberValue(report.Sample.TimeSeconds));
+            json.WriteEndArray();
+            WriteLayers(json, result);
+            json.WriteStartObject("faces");
+            WriteFace(json, "left", result, Side.Left);
+            WriteFace(json, "right", result, Side.Right);
+            json.WriteEndObject();
+            WriteMassBalance(json, result);
+            SummaryJsonFinalState.Write(json, result);
+            WriteSolver(json, result);
+            json.WriteEndObject();
+        }
+
+        return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+    }
+
+    private static void WriteHeader(Utf8JsonWriter json, SimulationResult result, string caseFile)
+    {
+        json.WriteStartObject("tool");
+        json.WriteString("name", ToolInfo.Name);
+        json.WriteString("version", ToolInfo.Version);
+        json.WriteEndObject();
+        json.WriteStartObject("case");
+        json.WriteString("title", result.Case.Title);
+        json.WriteString("file", Path.GetFileName(caseFile));
+        json.WriteString("referenceMedium", result.Case.ReferenceMedium);
+        json.WriteNumber("durationSeconds", result.Case.DurationSeconds);
+        json.WriteEndObject();
+        json.WriteString("caution", CautionText.Paragraph);
+    }
+
+    private static void WriteLayers(Utf8JsonWriter json, SimulationResult result)
+    {
+        json.WriteStartArray("layers");
+        var stack = result.Case.Stack;
+        for (var i = 0; i < stack.Count; i++)
+        {
+            var layer = stack.Layers[i];
+            json.WriteStartObject();
+            json.WriteString("name", layer.Name);
+            json.WriteNumber("thicknessMeters", layer.ThicknessMeters);
+            json.WriteNumber("diffusionCoefficientSquareMetersPerSecond", layer.DiffusivitySquareMetersPerSecond);
+            json.WriteNumber("partitionCoefficientVolumeBasis", layer.PartitionCoefficient);
+            json.WriteNumber("initialConcentrationKgPerCubicMeter", layer.InitialConcentrationKgPerCubicMeter);
+            WriteSeries(json, "massPerAreaKgPerSquareMeter", result, sample => sample.LayerMassPerArea[i]);
+            WriteSeries(json, "meanConcentrationKgPerCubicMeter", result, sample => sample.LayerMassPerArea[i] / layer.ThicknessMeters);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+    }
+
+    private static void WriteFace(Utf8JsonWriter json, string key, SimulationResult result, Side side)
+    {
+        var face = result.Case.Face(side);
+        json.WriteStartObject(key);
+        json.WriteString("kind", face.KindName);
+        if (face is CompartmentFace or BathFace)
+        {
+            json.WriteString("name", TimeSeriesCsv.FaceName(face));
+            FaceSample Pick(StateSample sample) => (side == Side.Left ? sample.Left : sample.Right)!;
+            WriteSeries(json, "transferredMassPerAreaKgPerSquareMeter", result, sample => Pick(sample).TransferredIntoMediumPerArea);
+            WriteSeries(json, "concentrationKgPerCubicMeter", result, sample => Pick(sample).ConcentrationKgPerCubicMeter);
+            if (face is CompartmentFace compartment)
+            {
+                json.WriteNumber("contactAreaSquareMeters", compartment.ContactAreaSquareMeters);
+                json.WriteNumber("volumeCubicMeters", compartment.VolumeCubicMeters);
+                WriteSeries(json, "transferredMassKg", result, sample => Pick(sample).TransferredIntoMediumPerArea * compartment.ContactAreaSquareMeters);
+                WriteSeries(json, "fractionOfEquilibrium", result, sample => Pick(sample).FractionOfEquilibrium);
+            }
+        }
+
+        json.WriteEndObject();
+    }
+
+    private static void WriteMassBalance(Utf8JsonWriter json, SimulationResult result)
+    {
+        json.WriteStartObject("massBalance");
+        json.WriteNumber("initialMassPerAreaKgPerSquareMeter", result.TimeSeries[0].LayerMassPerArea.Sum()
+            + (result.Case.Left is CompartmentFace left ? left.InitialMassPerArea : 0)
+            + (result.Case.Right is CompartmentFace right ? right.InitialMassPerArea : 0));
+        json.WriteNumber("worstRelativeError", result.WorstMassBalanceError);
+        WriteSeries(json, "relativeErrorAtReportTimes", result, sample => sample.MassBalanceError);
+        json.WriteEndObject();
+    }
+
+    private static void WriteSolver(Utf8JsonWriter json, SimulationResult result)
+    {
+        var statistics = result.Statistics;
+        json.WriteStartObject("solver");
+        json.WriteString("method", "finite volumes in u = c/K, TR-BDF2 with adaptive steps");
+        json.WriteNumber("cells", result.Grid.CellCount);
+        json.WriteNumber("unknowns", statistics.Unknowns);
+        json.WriteNumber("acceptedSteps", statistics.AcceptedSteps);
+        json.WriteNumber("rejectedSteps", statistics.RejectedSteps);
+        json.WriteNumber("smallestStepSeconds", statistics.SmallestStepSeconds);
+        json.WriteNumber("largestStepSeconds", statistics.LargestStepSeconds);
+        json.WriteNumber("relativeTolerance", result.Case.Solver.RelativeTolerance);
+        json.WriteString("stopReason", JsonNamingPolicy.CamelCase.ConvertName(statistics.StopReason.ToString()));
+        json.WriteEndObject();
+    }
+
+    internal static void WriteSeries(Utf8JsonWriter json, string key, SimulationResult result, Func<StateSample, double?> value)
+    {
+        json.WriteStartArray(key);
+        foreach (var report in result.Reports)
+        {
+            WriteNullable(json, value(report.Sample));
+        }
+
+        json.WriteEndArray();
+    }
+
+    internal static void WriteNullable(Utf8JsonWriter json, double? value)
+    {
+        if (value is { } number && double.IsFinite(number))
+        {
+            json.WriteNumberValue(number);
+        }
+        else
+        {
+            json.WriteNullValue();
+        }
+    }
+
+    internal static void WriteNullable(Utf8JsonWriter json, string key, double? value)
+    {
+        json.WritePropertyName(key);
+        WriteNullable(json, value);
+    }
+}

@@ -1,0 +1,36 @@
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.TimeStepping;
+
+namespace Layers.Core.Results;
+
+/// <summary>Everything one solve produced.</summary>
+public sealed record SimulationResult
+{
+    /// <summary>The case that was solved.</summary>
+    public required SimulationCase Case { get; init; }
+
+    /// <summary>The mesh used.</summary>
+    public required Grid Grid { get; init; }
+
+    /// <summary>Integral quantities at t = 0 and at every output time (report, extra and a dense log-spaced grid).</summary>
+    public required IReadOnlyList<StateSample> TimeSeries { get; init; }
+
+    /// <summary>Full results at the report times, in order.</summary>
+    public required IReadOnlyList<ReportPoint> Reports { get; init; }
+
+    /// <summary>The final state and the times to approach it.</summary>
+    public required FinalStateSummary FinalState { get; init; }
+
+    /// <summary>Steady permeation figures, when the case has two baths at different levels.</summary>
+    public PermeationSummary? Permeation { get; init; }
+
+    /// <summary>Largest |mass balance error| over all output times (relative).</summary>
+    public required double WorstMassBalanceError { get; init; }
+
+    /// <summary>Solver counters.</summary>
+    public required SolverStatistics Statistics { get; init; }
+
+    /// <summary>True when the time loop reached the end of the duration.</summary>
+    public bool Completed => Statistics.StopReason == StopReason.Completed;
+}

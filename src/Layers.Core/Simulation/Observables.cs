@@ -1,0 +1,93 @@
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.Results;
+using Layers.Core.TimeStepping;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>Turns a state vector into the quantities people read: masses, concentrations, fractions, profiles.</summary>
+internal sealed class Observables
+{
+    private readonly SimulationCase _case;
+    private readonly DiffusionSystem _system;
+    private readonly FinalStateTarget _final;
+    private readonly double[] _initialState;
+    private readonly double _initialMass;
+    private readonly double _initialDistance;
+
+    public Observables(SimulationCase simulation, DiffusionSystem system, ReadOnlySpan<double> initialState, FinalStateTarget final)
+    {
+        _case = simulation;
+        _system = system;
+        _final = final;
+        _initialState = initialState.ToArray();
+        _initialMass = system.TotalMass(initialState);
+        _initialDistance = DistanceToFinal(initialState);
+    }
+
+    /// <summary>1 - distance(u, final) / distance(u0, final), with distance the capacity-weighted L1 norm.</summary>
+    public double FractionOfFinalState(ReadOnlySpan<double> state)
+        => _initialDistance > 0 ? 1 - (DistanceToFinal(state) / _initialDistance) : 1;
+
+    /// <summary>Fraction of the way to equilibrium of a compartment's content, or null if it does not change.</summary>
+    public double? CompartmentFraction(Side side, ReadOnlySpan<double> state)
+    {
+        var node = _system.CompartmentNode(side, _case);
+        if (node < 0)
+        {
+            return null;
+        }
+
+        var change = _final.NodeValues[node] - _initialState[node];
+        var scale = Math.Max(Math.Abs(_final.NodeValues[node]), Math.Abs(_initialState[node]));
+        return Math.Abs(change) > 1e-12 * scale ? (state[node] - _initialState[node]) / change : null;
+    }
+
+    public StateSample Sample(double time, ReadOnlySpan<double> state, BathTotals baths)
+    {
+        var grid = _system.Grid;
+        var layerMass = new double[_case.Stack.Count];
+        for (var cell = 0; cell < grid.CellCount; cell++)
+        {
+            var node = _system.FirstCellNode + cell;
+            layerMass[grid.LayerOfCell[cell]] += _system.Capacity[node] * state[node];
+        }
+
+        var exchanged = baths.LeftPerArea + baths.RightPerArea;
+        var reference = Math.Max(Math.Abs(_initialMass), Math.Abs(baths.LeftPerArea) + Math.Abs(baths.RightPerArea));
+        var imbalance = _system.TotalMass(state) - _initialMass - exchanged;
+        return new StateSample(
+            time,
+            layerMass,
+            Face(Side.Left, state, baths.LeftPerArea),
+            Face(Side.Right, state, baths.RightPerArea),
+            FractionOfFinalState(state),
+            reference > 0 ? imbalance / reference : 0);
+    }
+
+    private FaceSample? Face(Side side, ReadOnlySpan<double> state, double bathInflow)
+    {
+        switch (_case.Face(side))
+        {
+            case CompartmentFace compartment:
+                var node = _system.CompartmentNode(side, _case);
+                var transferred = _system.Capacity[node] * (state[node] - _initialState[node]);
+                return new FaceSample(transferred, compartment.PartitionCoefficient * state[node], CompartmentFraction(side, state));
+            case BathFace bath:
+                return new FaceSample(-bathInflow, bath.ConcentrationKgPerCubicMeter, null);
+            default:
+                return null;
+        }
+    }
+
+    private double DistanceToFinal(ReadOnlySpan<double> state)
+    {
+        var sum = 0.0;
+        for (var n = 0; n < state.Length; n++)
+        {
+            sum += _system.Capacity[n] * Math.Abs(state[n] - _final.NodeValues[n]);
+        }
+
+        return sum;
+    }
+}

@@ -1,0 +1,90 @@
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.Results;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// Concentration profiles per layer, with the values on each side of every face reconstructed from flux continuity:
+/// the face value of u is the resistance-weighted mean of its two neighbours, u_f = (u_a/R_a + u_b/R_b)/(1/R_a + 1/R_b),
+/// where R are the half-cell (and film) resistances; each side then reads c = K u_f with its own K, which shows the
+/// partition jump.
+/// </summary>
+internal sealed class ProfileBuilder
+{
+    private readonly SimulationCase _case;
+    private readonly DiffusionSystem _system;
+    private readonly double[] _halfResistance;
+
+    public ProfileBuilder(SimulationCase simulation, DiffusionSystem system)
+    {
+        _case = simulation;
+        _system = system;
+        var grid = system.Grid;
+        _halfResistance = new double[grid.CellCount];
+        for (var cell = 0; cell < grid.CellCount; cell++)
+        {
+            var layer = simulation.Stack.Layers[grid.LayerOfCell[cell]];
+            _halfResistance[cell] = SeriesResistance.HalfCell(
+                grid.WidthsMeters[cell], layer.DiffusivitySquareMetersPerSecond, layer.PartitionCoefficient);
+        }
+    }
+
+    public IReadOnlyList<LayerProfile> Build(ReadOnlySpan<double> state)
+    {
+        var grid = _system.Grid;
+        var cells = state.Slice(_system.FirstCellNode, grid.CellCount);
+        var profiles = new List<LayerProfile>(_case.Stack.Count);
+        for (var layerIndex = 0; layerIndex < _case.Stack.Count; layerIndex++)
+        {
+            var layer = _case.Stack.Layers[layerIndex];
+            var first = grid.FirstCell(layerIndex);
+            var count = grid.CellsIn(layerIndex);
+            var positions = new double[count + 2];
+            var concentrations = new double[count + 2];
+            positions[0] = _case.Stack.LeftEdgeMeters(layerIndex);
+            concentrations[0] = layer.PartitionCoefficient * FaceValue(cells, state, first - 1, first);
+            for (var i = 0; i < count; i++)
+            {
+                positions[i + 1] = grid.CentresMeters[first + i];
+                concentrations[i + 1] = layer.PartitionCoefficient * cells[first + i];
+            }
+
+            positions[^1] = positions[0] + layer.ThicknessMeters;
+            concentrations[^1] = layer.PartitionCoefficient * FaceValue(cells, state, first + count - 1, first + count);
+            profiles.Add(new LayerProfile(layerIndex, layer.Name, positions, concentrations));
+        }
+
+        return profiles;
+    }
+
+    /// <summary>u on the face between cell a and cell b; an index of -1 or CellCount means the outer face.</summary>
+    private double FaceValue(ReadOnlySpan<double> cells, ReadOnlySpan<double> state, int a, int b)
+    {
+        if (a < 0)
+        {
+            return OuterFaceValue(cells[0], _halfResistance[0], _case.Left, state[0]);
+        }
+
+        if (b >= cells.Length)
+        {
+            return OuterFaceValue(cells[^1], _halfResistance[^1], _case.Right, state[^1]);
+        }
+
+        var weightA = 1 / _halfResistance[a];
+        var weightB = 1 / _halfResistance[b];
+        return ((cells[a] * weightA) + (cells[b] * weightB)) / (weightA + weightB);
+    }
+
+    private static double OuterFaceValue(double cellValue, double halfResistance, FaceCondition face, double endNodeValue)
+    {
+        var (outside, film) = face switch
+        {
+            BathFace bath => (bath.ContinuousVariable, SeriesResistance.Film(bath.FilmCoefficientMetersPerSecond, bath.PartitionCoefficient)),
+            CompartmentFace compartment => (endNodeValue, SeriesResistance.Film(compartment.FilmCoefficientMetersPerSecond, compartment.PartitionCoefficient)),
+            _ => (cellValue, 0.0),
+        };
+        var flux = (outside - cellValue) / (halfResistance + film);
+        return cellValue + (flux * halfResistance);
+    }
+}

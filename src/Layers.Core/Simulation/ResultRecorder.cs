@@ -1,0 +1,126 @@
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.Results;
+using Layers.Core.TimeStepping;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// Observer of the time loop that keeps the time series, the report points, the times to approach the final state
+/// and, for steady permeation, the cumulative amount from which the lag time is read.
+/// </summary>
+internal sealed class ResultRecorder : ITimeLoopObserver
+{
+    /// <summary>Fraction of the final state beyond which the lag-time intercept is read.</summary>
+    public const double SteadyEnough = 0.9999;
+
+    private readonly SimulationCase _case;
+    private readonly DiffusionSystem _system;
+    private readonly Observables _observables;
+    private readonly ProfileBuilder _profiles;
+    private readonly FinalStateTarget _final;
+    private readonly List<StateSample> _samples = [];
+    private readonly List<ReportPoint> _reports = [];
+    private readonly CrossingTracker _systemTracker;
+    private readonly CrossingTracker? _leftTracker;
+    private readonly CrossingTracker? _rightTracker;
+    private double _systemFraction;
+
+    public ResultRecorder(SimulationCase simulation, DiffusionSystem system, ReadOnlySpan<double> initialState, FinalStateTarget final)
+    {
+        _case = simulation;
+        _system = system;
+        _final = final;
+        _observables = new Observables(simulation, system, initialState, final);
+        _profiles = new ProfileBuilder(simulation, system);
+        _systemFraction = _observables.FractionOfFinalState(initialState);
+        _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction);
+        _leftTracker = TrackerFor(Side.Left, initialState);
+        _rightTracker = TrackerFor(Side.Right, initialState);
+    }
+
+    public IReadOnlyList<StateSample> Samples => _samples;
+
+    public IReadOnlyList<ReportPoint> Reports => _reports;
+
+    public double WorstMassBalanceError { get; private set; }
+
+    /// <summary>Lag-time intercept t - Q/J, once steady enough.</summary>
+    public double? LagTimeSeconds { get; private set; }
+
+    /// <summary>Flux into the receiving bath at the end of the duration, kg/m2/s.</summary>
+    public double FluxAtEnd { get; private set; }
+
+    public bool WantsMoreTime => !_systemTracker.AllReached
+        || _leftTracker is { AllReached: false }
+        || _rightTracker is { AllReached: false }
+        || (_final.Kind == FinalStateKind.SteadyPermeation && LagTimeSeconds is null);
+
+    public void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+    {
+        var sample = _observables.Sample(timeSeconds, state, bathInflow);
+        _samples.Add(sample);
+        WorstMassBalanceError = Math.Max(WorstMassBalanceError, Math.Abs(sample.MassBalanceError));
+        if (OutputSchedule.IsReportTime(_case, timeSeconds))
+        {
+            _reports.Add(new ReportPoint(sample, _profiles.Build(state)));
+        }
+
+        if (timeSeconds >= _case.DurationSeconds * (1 - 1e-12))
+        {
+            FluxAtEnd = ReceivingBathOutflowRate(state);
+        }
+    }
+
+    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+    {
+        _systemFraction = _observables.FractionOfFinalState(state);
+        _systemTracker.Observe(timeSeconds, _systemFraction);
+        Observe(_leftTracker, Side.Left, timeSeconds, state);
+        Observe(_rightTracker, Side.Right, timeSeconds, state);
+        if (_final.Kind == FinalStateKind.SteadyPermeation && LagTimeSeconds is null && _systemFraction >= SteadyEnough)
+        {
+            var flux = Math.Abs(_final.Steady!.FluxKgPerSquareMeterSecond);
+            var received = _final.Steady.FluxKgPerSquareMeterSecond > 0 ? -bathInflow.RightPerArea : -bathInflow.LeftPerArea;
+            LagTimeSeconds = timeSeconds - (received / flux);
+        }
+    }
+
+    public FinalStateSummary Summary(double horizonSeconds) => new(
+        _final.Kind,
+        Enumerable.Range(0, _case.Stack.Count).Select(layer => _final.LayerEdges(_case, layer)).ToArray(),
+        _final.MediumConcentration(_case.Left, Side.Left),
+        _final.MediumConcentration(_case.Right, Side.Right),
+        Times(_systemTracker)!,
+        Times(_leftTracker),
+        Times(_rightTracker),
+        horizonSeconds);
+
+    private static ThresholdTimes? Times(CrossingTracker? tracker)
+        => tracker is null ? null : new ThresholdTimes(tracker.Times[0], tracker.Times[1], tracker.Times[2]);
+
+    private CrossingTracker? TrackerFor(Side side, ReadOnlySpan<double> initialState)
+        => _observables.CompartmentFraction(side, initialState) is { } fraction
+            ? new CrossingTracker(ThresholdTimes.Levels, fraction)
+            : null;
+
+    private void Observe(CrossingTracker? tracker, Side side, double time, ReadOnlySpan<double> state)
+    {
+        if (tracker is not null && _observables.CompartmentFraction(side, state) is { } fraction)
+        {
+            tracker.Observe(time, fraction);
+        }
+    }
+
+    private double ReceivingBathOutflowRate(ReadOnlySpan<double> state)
+    {
+        if (_final.Steady is not { } steady || steady.FluxKgPerSquareMeterSecond == 0)
+        {
+            return 0;
+        }
+
+        return steady.FluxKgPerSquareMeterSecond > 0
+            ? -_system.RightBath.InflowRate(state[^1])
+            : -_system.LeftBath.InflowRate(state[0]);
+    }
+}

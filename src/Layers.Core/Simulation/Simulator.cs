@@ -1,0 +1,64 @@
+using Layers.Core.Analytics;
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.Results;
+using Layers.Core.TimeStepping;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// The one entry point for a forward simulation: mesh, assemble, integrate, collect results.
+/// </summary>
+public static class Simulator
+{
+    /// <summary>How far beyond the duration the solver may look for the times to equilibrium, as a multiple of it.</summary>
+    public const double HorizonFactor = 1000;
+
+    /// <summary>Solves a validated case.</summary>
+    public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
+    {
+        var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
+        var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
+        var final = FinalStateTarget.Of(simulation, system);
+        var recorder = new ResultRecorder(simulation, system, initial, final);
+        var outputs = OutputSchedule.For(simulation);
+        var horizon = simulation.DurationSeconds * HorizonFactor;
+        var plan = new TimeLoopPlan(outputs, simulation.DurationSeconds, horizon, InitialStep(simulation, grid, outputs[0]));
+        var statistics = new TransientSolver(system, simulation.Solver).Run(initial, plan, recorder, cancellation);
+
+        return new SimulationResult
+        {
+            Case = simulation,
+            Grid = grid,
+            TimeSeries = recorder.Samples,
+            Reports = recorder.Reports,
+            FinalState = recorder.Summary(horizon),
+            Permeation = final.Kind == FinalStateKind.SteadyPermeation
+                ? new PermeationSummary(
+                    final.Steady!.FluxKgPerSquareMeterSecond,
+                    recorder.FluxAtEnd,
+                    recorder.LagTimeSeconds,
+                    SingleMembrane.LagTimeSeconds(simulation))
+                : null,
+            WorstMassBalanceError = recorder.WorstMassBalanceError,
+            Statistics = statistics,
+        };
+    }
+
+    /// <summary>
+    /// First trial step: a thousandth of the fastest cell's diffusion time h^2/D, so that the first step resolves
+    /// a step change in the initial concentration; the controller grows it geometrically from there.
+    /// </summary>
+    private static double InitialStep(SimulationCase simulation, Grid grid, double firstOutput)
+    {
+        var fastest = double.PositiveInfinity;
+        for (var cell = 0; cell < grid.CellCount; cell++)
+        {
+            var width = grid.WidthsMeters[cell];
+            var diffusivity = simulation.Stack.Layers[grid.LayerOfCell[cell]].DiffusivitySquareMetersPerSecond;
+            fastest = Math.Min(fastest, width * width / diffusivity);
+        }
+
+        return Math.Min(firstOutput, 1e-3 * fastest);
+    }
+}

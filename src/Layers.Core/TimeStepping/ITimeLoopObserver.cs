@@ -1,0 +1,25 @@
+namespace Layers.Core.TimeStepping;
+
+/// <summary>Receives the solution as the time loop advances. Implementations copy what they keep.</summary>
+public interface ITimeLoopObserver
+{
+    /// <summary>Called at t = 0 and at every output time, which the loop hits exactly.</summary>
+    /// <param name="timeSeconds">The output time.</param>
+    /// <param name="state">u at every node.</param>
+    /// <param name="bathInflow">Mass per area that has entered the stack from each bath since t = 0, kg/m2.</param>
+    void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow);
+
+    /// <summary>Called after every accepted step, including steps beyond the end time.</summary>
+    void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow);
+
+    /// <summary>
+    /// Asked after the end time is reached and after each later step: true to keep integrating (no outputs) until
+    /// the horizon, for example to find when equilibrium is reached.
+    /// </summary>
+    bool WantsMoreTime { get; }
+}
+
+/// <summary>Cumulative mass per area that entered the stack from the left and right baths, kg/m2.</summary>
+/// <param name="LeftPerArea">From the left bath.</param>
+/// <param name="RightPerArea">From the right bath.</param>
+public readonly record struct BathTotals(double LeftPerArea, double RightPerArea);

@@ -1,0 +1,20 @@
+namespace Layers.Core.TimeStepping;
+
+/// <summary>Why the time loop ended.</summary>
+public enum StopReason
+{
+    /// <summary>Reached the end time (and, where asked, the extension beyond it).</summary>
+    Completed,
+
+    /// <summary>Took the maximum number of steps.</summary>
+    MaximumStepsExceeded,
+
+    /// <summary>The step size fell below the smallest meaningful step without meeting the tolerance.</summary>
+    StepSizeUnderflow,
+
+    /// <summary>A value became NaN or infinite.</summary>
+    NonFiniteValues,
+
+    /// <summary>The caller cancelled the run.</summary>
+    Cancelled,
+}
