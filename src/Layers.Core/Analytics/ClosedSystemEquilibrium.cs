@@ -6,7 +6,7 @@ namespace Layers.Core.Analytics;
 /// Equilibrium of a closed system (faces closed or finite compartments): u = c / K is uniform, and one mass balance
 /// fixes it, u_eq = (sum of initial masses) / (sum of capacities), with capacity h K for a layer and (V/A) K for a
 /// compartment; then c_eq = K u_eq in every medium. This is the N-medium form of the partition equilibrium
-/// c_A = K c_B with conservation of mass (Crank, The Mathematics of Diffusion, 2nd ed., ch. 4.3.2, the limit
+/// c_A = K c_B with conservation of mass (Crank, The Mathematics of Diffusion, 2nd ed., ch. 4, eq. 4.37 (from memory), the limit
 /// t -> infinity of the limited-volume problem, generalised to many media).
 /// </summary>
 public sealed record ClosedSystemEquilibrium(double ContinuousVariable)

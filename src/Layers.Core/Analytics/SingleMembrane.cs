@@ -5,7 +5,7 @@ namespace Layers.Core.Analytics;
 /// <summary>
 /// Recognises a case that is a single membrane between a constant source and a perfect sink, starting empty and
 /// without films, for which the time lag L^2 / (6 D) and the steady flux D K c_source / L hold (Daynes-Barrer;
-/// Crank, The Mathematics of Diffusion, 2nd ed., ch. 4.3.5).
+/// Crank, The Mathematics of Diffusion, 2nd ed., ch. 4, eqs. 4.24a-c, from memory).
 /// </summary>
 public static class SingleMembrane
 {

@@ -7,7 +7,7 @@ namespace Layers.Core.Analytics;
 /// Steady state of a stack between two baths: the N-layer series-resistance law with partition coefficients,
 /// J = (c_left/K_left - c_right/K_right) / (1/(k_left K_left) + sum_i h_i/(D_i K_i) + 1/(k_right K_right)),
 /// the two-resistance law of interfacial mass transfer generalised to N layers and two films (Crank, The
-/// Mathematics of Diffusion, 2nd ed., ch. 12.2, composite membranes; Cussler, Diffusion, ch. 13 on overall
+/// Mathematics of Diffusion, 2nd ed., ch. 12, composite membranes, section from memory; Cussler, Diffusion, ch. 13 on overall
 /// mass-transfer coefficients). Inside each layer u = c / K is linear; at each interface c jumps by K_i / K_i+1.
 /// With one bath only, the steady state is that bath's u everywhere and J = 0.
 /// </summary>

@@ -82,8 +82,9 @@ public static class CaseReader
         var left = FaceReader.Read(root, "left", context);
         var right = FaceReader.Read(root, "right", context);
         var (duration, durationUnit) = TimesReader.Duration(root, context);
-        var reports = TimesReader.List(root, "reportTimes", duration, ascending: true, context);
-        var extra = TimesReader.List(root, "extraOutputTimes", duration, ascending: false, context);
+        var durationText = root.Member("duration")?.ToString();
+        var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
+        var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
         if (context.Errors.Count > 0 || left is null || right is null || duration is not { } end)
         {

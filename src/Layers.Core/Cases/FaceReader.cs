@@ -45,7 +45,7 @@ internal static class FaceReader
                         : $"expected an object with \"kind\"; found {JsonFields.Describe(element)}"));
                 return null;
             default:
-                context.Errors.Add(new CaseError($"{path}.kind", $"unknown face kind \"{kind}\"; expected one of {string.Join(", ", Kinds)}"));
+                context.Errors.Add(new CaseError($"{path}.kind", $"must be one of {string.Join(", ", Kinds)}; got '{kind}'"));
                 return null;
         }
     }
@@ -89,7 +89,9 @@ internal static class FaceReader
         var hasMass = fields.Has("mass");
         if (hasVolume == hasMass)
         {
-            fields.Error(hasVolume ? "mass" : "volume", "give exactly one of \"volume\" or \"mass\" (with \"density\")");
+            context.Errors.Add(new CaseError(
+                fields.Path,
+                hasVolume ? "give either volume or mass, not both" : "give volume, or mass with density"));
             return null;
         }
 
@@ -101,7 +103,7 @@ internal static class FaceReader
         var mass = ReadContext.Positive(fields, "mass", Dimension.Mass, required: true);
         if (mass is not null && density is null)
         {
-            fields.Error("density", "is required with \"mass\", to turn the mass into a volume");
+            fields.Error("density", "is required with mass, to turn the mass into a volume");
             return null;
         }
 

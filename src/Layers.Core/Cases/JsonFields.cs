@@ -138,7 +138,7 @@ internal sealed class JsonFields
         {
             var examples = UnitTable.ExamplesFor(expected.First());
             var example = examples.Count > 0 ? examples[0] : "m";
-            errors.Add(new CaseError(path, $"a unit is required; write it as a string, e.g. \"{value.GetRawText()} {example}\""));
+            errors.Add(new CaseError(path, $"'{value.GetRawText()}' has no unit; a unit is required, e.g. '{value.GetRawText()} {example}'"));
             return null;
         }
 

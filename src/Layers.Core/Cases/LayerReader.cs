@@ -24,7 +24,8 @@ internal static class LayerReader
             return layers;
         }
 
-        var names = new HashSet<string>(StringComparer.Ordinal);
+        // Names differing only in letter case or surrounding spaces would be confusing in reports and CSV headers.
+        var names = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
         var index = 0;
         foreach (var element in array.EnumerateArray())
         {
@@ -35,9 +36,13 @@ internal static class LayerReader
             }
 
             var name = fields.Text("name", required: true);
-            if (name is not null && (name.Trim().Length == 0 || !names.Add(name)))
+            if (name is not null && name.Trim().Length == 0)
             {
-                fields.Error("name", name.Trim().Length == 0 ? "must not be empty" : $"\"{name}\" is used by an earlier layer; names must be unique");
+                fields.Error("name", "must not be empty");
+            }
+            else if (name is not null && !names.TryAdd(name.Trim(), index - 1))
+            {
+                fields.Error("name", $"'{name}' is already used by {root.Path}.layers[{names[name.Trim()]}]");
             }
 
             if (ReadLayer(fields, context, name) is { } layer)

@@ -14,7 +14,7 @@ internal static class TimesReader
         var quantity = root.Quantity("duration", [Dimension.Time], required: true);
         if (quantity is { } value && !(value.SiValue > 0))
         {
-            root.Error("duration", $"must be > 0; got \"{value}\"");
+            root.Error("duration", $"must be > 0; got '{value}'");
             return (null, null);
         }
 
@@ -22,7 +22,7 @@ internal static class TimesReader
     }
 
     /// <summary>Reads a list of times within (0, duration]; report times must also be strictly ascending.</summary>
-    public static List<double>? List(JsonFields root, string key, double? duration, bool ascending, ReadContext context)
+    public static List<double>? List(JsonFields root, string key, double? duration, string? durationText, bool ascending, ReadContext context)
     {
         if (root.Member(key) is not { } array)
         {
@@ -45,13 +45,17 @@ internal static class TimesReader
                 continue;
             }
 
-            if (!(time.SiValue > 0) || (duration is { } end && time.SiValue > end * (1 + 1e-12)))
+            if (!(time.SiValue > 0))
             {
-                context.Errors.Add(new CaseError(path, $"must be > 0 and not later than the duration; got \"{time}\""));
+                context.Errors.Add(new CaseError(path, $"must be > 0; got '{time}'"));
+            }
+            else if (duration is { } end && time.SiValue > end * (1 + 1e-12))
+            {
+                context.Errors.Add(new CaseError(path, $"must be <= duration ({durationText}); got '{time}'"));
             }
             else if (ascending && times.Count > 0 && time.SiValue <= times[^1])
             {
-                context.Errors.Add(new CaseError(path, $"must be later than the previous time; got \"{time}\""));
+                context.Errors.Add(new CaseError(path, $"must be later than the previous time; got '{time}'"));
             }
 
             times.Add(time.SiValue);

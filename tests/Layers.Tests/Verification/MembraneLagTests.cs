@@ -1,0 +1,53 @@
+using Layers.Core.Analytics;
+using Layers.Core.Simulation;
+using Layers.Tests.TestSupport;
+
+namespace Layers.Tests.Verification;
+
+/// <summary>
+/// A membrane between a constant source and a perfect sink, starting empty. Reference: Daynes (1920) and Barrer
+/// (1939) as given by Crank, The Mathematics of Diffusion, 2nd ed. (1975), ch. 4, eq. 4.24a (from memory): cumulative amount Q(t), time
+/// lag L^2/(6D), steady flux D K C / L.
+/// </summary>
+public sealed class MembraneLagTests
+{
+    private const double Thickness = 20e-6;
+    private const double Diffusivity = 3e-13;
+    private const double MembraneOverDonor = 4;
+    private const double Donor = 5;
+
+    [Theory]
+    [InlineData(0.1)]
+    [InlineData(0.3)]
+    [InlineData(1)]
+    [InlineData(3)]
+    public void Cumulative_amount_matches_Daynes_Barrer_series(double dimensionlessTime)
+    {
+        var time = dimensionlessTime * Thickness * Thickness / Diffusivity;
+        var result = Simulator.Run(Membrane(time));
+
+        var received = result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea;
+        var expected = MembraneTimeLag.CumulativeMassPerArea(Diffusivity, Thickness, MembraneOverDonor, Donor, time);
+        Tolerance.Relative(expected, received, 1e-3, "cumulative amount (Crank eq. 4.24a)");
+    }
+
+    [Fact]
+    public void Lag_time_and_steady_flux_match_the_time_lag_law()
+    {
+        var result = Simulator.Run(Membrane(5 * Thickness * Thickness / Diffusivity));
+
+        var permeation = result.Permeation!;
+        // Crank ch. 4, eqs. 4.24b-c (from memory): J = D K C / L and t_lag = L^2 / (6 D).
+        Tolerance.Relative(Diffusivity * MembraneOverDonor * Donor / Thickness, permeation.SteadyFluxKgPerSquareMeterSecond, 1e-12, "steady flux");
+        Tolerance.Relative(Diffusivity * MembraneOverDonor * Donor / Thickness, permeation.FluxAtEndKgPerSquareMeterSecond, 1e-3, "simulated flux at the end");
+        Tolerance.Relative(Thickness * Thickness / (6 * Diffusivity), permeation.LagTimeSeconds!.Value, 1e-3, "simulated lag time");
+        Tolerance.Relative(Thickness * Thickness / (6 * Diffusivity), permeation.AnalyticLagTimeSeconds!.Value, 1e-12, "recognised single membrane");
+    }
+
+    private static Layers.Core.Domain.SimulationCase Membrane(double time)
+        => Cases.Make(
+            Cases.Bath(Donor),
+            Cases.Bath(0),
+            time,
+            layers: Cases.Layer("membrane", Thickness, Diffusivity, MembraneOverDonor));
+}
