@@ -1,3 +1,4 @@
+using System.Text;
 using System.CommandLine;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
@@ -40,11 +41,11 @@ internal static class RunCommand
             return ExitCodes.SolverFailed;
         }
 
-        var files = new Dictionary<string, string>
+        var files = new Dictionary<string, byte[]>
         {
-            ["summary.json"] = SummaryJson.Write(result, casePath),
-            ["timeseries.csv"] = TimeSeriesCsv.Write(result),
-            ["profiles.csv"] = ProfilesCsv.Write(result),
+            ["summary.json"] = Encoding.UTF8.GetBytes(SummaryJson.Write(result, casePath)),
+            ["timeseries.csv"] = Encoding.UTF8.GetBytes(TimeSeriesCsv.Write(result)),
+            ["profiles.csv"] = Encoding.UTF8.GetBytes(ProfilesCsv.Write(result)),
         };
         string folder;
         try

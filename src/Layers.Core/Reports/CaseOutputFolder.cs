@@ -10,8 +10,8 @@ public static class CaseOutputFolder
     /// <summary>Writes the files and returns the final folder path.</summary>
     /// <param name="outputRoot">The output root, created if missing.</param>
     /// <param name="caseName">Name of the case folder.</param>
-    /// <param name="files">File name and UTF-8 content of every file.</param>
-    public static string Write(string outputRoot, string caseName, IReadOnlyDictionary<string, string> files)
+    /// <param name="files">File name and content (bytes) of every file.</param>
+    public static string Write(string outputRoot, string caseName, IReadOnlyDictionary<string, byte[]> files)
     {
         Directory.CreateDirectory(outputRoot);
         var final = Path.Combine(outputRoot, caseName);
@@ -23,7 +23,7 @@ public static class CaseOutputFolder
         {
             foreach (var (name, content) in files)
             {
-                File.WriteAllText(Path.Combine(staging, name), content);
+                File.WriteAllBytes(Path.Combine(staging, name), content);
             }
 
             if (Directory.Exists(final))
