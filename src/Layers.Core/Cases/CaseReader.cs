@@ -15,7 +15,7 @@ public static class CaseReader
     private static readonly string[] TopKeys =
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
-        "duration", "reportTimes", "extraOutputTimes", "numerics",
+        "duration", "reportTimes", "extraOutputTimes", "numerics", "display",
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
@@ -81,11 +81,12 @@ public static class CaseReader
         var layers = LayerReader.Read(root, context);
         var left = FaceReader.Read(root, "left", context);
         var right = FaceReader.Read(root, "right", context);
-        var (duration, durationUnit) = TimesReader.Duration(root, context);
+        var duration = TimesReader.Duration(root, context);
         var durationText = root.Member("duration")?.ToString();
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
+        var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));
         if (context.Errors.Count > 0 || left is null || right is null || duration is not { } end)
         {
             return null;
@@ -103,7 +104,7 @@ public static class CaseReader
             ExtraOutputTimesSeconds = extra?.Order().ToArray() ?? [],
             Grid = grid,
             Solver = solver,
-            Display = Display(root, durationUnit!, context),
+            Display = display,
         };
     }
 
@@ -159,23 +160,6 @@ public static class CaseReader
         }
 
         return (grid, solver);
-    }
-
-    private static DisplayUnits Display(JsonFields root, UnitDefinition durationUnit, ReadContext context)
-    {
-        var depth = root.Member("layers") is { ValueKind: JsonValueKind.Array } layers
-            && layers.GetArrayLength() > 0
-            && layers[0].TryGetProperty("thickness", out var thickness)
-            && QuantityParser.TryParse(thickness.GetString(), out var quantity, out _)
-                ? quantity.Unit
-                : UnitTable.Get("m");
-        var concentration = context.FirstConcentrationUnit is { Dimension: Dimension.MassConcentration } unit
-            ? unit
-            : UnitTable.Get("mg/L");
-        var perArea = concentration.Symbol.StartsWith("ug", StringComparison.Ordinal) || concentration.Symbol.StartsWith("ng", StringComparison.Ordinal)
-            ? UnitTable.Get("ug/cm2")
-            : UnitTable.Get("mg/dm2");
-        return new DisplayUnits { Time = durationUnit, Depth = depth, Concentration = concentration, MassPerArea = perArea };
     }
 
     private static string FirstSentence(string message)

@@ -100,6 +100,7 @@ internal static class FaceReader
             return ReadContext.Positive(fields, "volume", Dimension.Volume, required: true);
         }
 
+        context.SawCompartmentByMass = true;
         var mass = ReadContext.Positive(fields, "mass", Dimension.Mass, required: true);
         if (mass is not null && density is null)
         {

@@ -19,8 +19,11 @@ internal sealed class ReadContext
 
     public double? ReferenceDensity { get; set; }
 
-    /// <summary>Unit of the first concentration given in the case, for display.</summary>
-    public UnitDefinition? FirstConcentrationUnit { get; set; }
+    /// <summary>True once any concentration was given as a mass fraction (a hint that the case is about foods).</summary>
+    public bool SawMassFraction { get; private set; }
+
+    /// <summary>True once a compartment was given by its mass (as foods are).</summary>
+    public bool SawCompartmentByMass { get; set; }
 
     /// <summary>Reads a strictly positive quantity.</summary>
     public static double? Positive(JsonFields fields, string key, Dimension dimension, bool required)
@@ -76,16 +79,12 @@ internal sealed class ReadContext
             return null;
         }
 
-        if (quantity.SiValue > 0)
-        {
-            FirstConcentrationUnit ??= quantity.Unit;
-        }
-
         if (quantity.Dimension == Dimension.MassConcentration)
         {
             return quantity.SiValue;
         }
 
+        SawMassFraction = true;
         if (densityKgPerCubicMeter is not { } density)
         {
             fields.Error(key, $"a mass fraction needs {fields.PathOf("density")} (e.g. \"0.92 g/cm3\") to convert '{quantity}' to mass per volume");

@@ -9,17 +9,8 @@ internal static class TimesReader
     /// <summary>Default report times as fractions of the duration.</summary>
     public static readonly double[] DefaultReportFractions = [0.01, 0.1, 0.25, 0.5, 1];
 
-    public static (double? Duration, UnitDefinition? Unit) Duration(JsonFields root, ReadContext context)
-    {
-        var quantity = root.Quantity("duration", [Dimension.Time], required: true);
-        if (quantity is { } value && !(value.SiValue > 0))
-        {
-            root.Error("duration", $"must be > 0; got '{value}'");
-            return (null, null);
-        }
-
-        return (quantity?.SiValue, quantity?.Unit);
-    }
+    public static double? Duration(JsonFields root, ReadContext context)
+        => ReadContext.Positive(root, "duration", Dimension.Time, required: true);
 
     /// <summary>Reads a list of times within (0, duration]; report times must also be strictly ascending.</summary>
     public static List<double>? List(JsonFields root, string key, double? duration, string? durationText, bool ascending, ReadContext context)

@@ -3,20 +3,29 @@ using Layers.Core.Units;
 namespace Layers.Core.Domain;
 
 /// <summary>
-/// The units a case was written in, kept so that human-readable output speaks the user's units.
-/// The physics never reads these.
+/// The units results are presented in to a person: those the trade uses for the kind of case, or those the case
+/// asks for in its <c>display</c> object. The physics never reads these.
 /// </summary>
 public sealed record DisplayUnits
 {
-    /// <summary>Unit for times (the unit of the case duration).</summary>
-    public UnitDefinition Time { get; init; } = UnitTable.Get("s");
+    /// <summary>Unit for times.</summary>
+    public UnitDefinition Time { get; init; } = UnitTable.Get("h");
 
-    /// <summary>Unit for depths in the stack (the unit of the first layer's thickness).</summary>
-    public UnitDefinition Depth { get; init; } = UnitTable.Get("m");
+    /// <summary>Unit for depths in the stack.</summary>
+    public UnitDefinition Depth { get; init; } = UnitTable.Get("um");
 
-    /// <summary>Unit for concentrations (the unit of the first concentration the case gives in mass per volume).</summary>
-    public UnitDefinition Concentration { get; init; } = UnitTable.Get("kg/m3");
+    /// <summary>Unit for concentrations in mass per volume.</summary>
+    public UnitDefinition Concentration { get; init; } = UnitTable.Get("mg/L");
+
+    /// <summary>
+    /// Unit for the concentration in a face medium of known density as a mass fraction (mg/kg of food), or null to
+    /// show mass per volume.
+    /// </summary>
+    public UnitDefinition? MediumMassFraction { get; init; }
 
     /// <summary>Unit for mass per contact area.</summary>
-    public UnitDefinition MassPerArea { get; init; } = UnitTable.Get("kg/m2");
+    public UnitDefinition MassPerArea { get; init; } = UnitTable.Get("ug/cm2");
+
+    /// <summary>Unit for fluxes.</summary>
+    public UnitDefinition Flux { get; init; } = UnitTable.Get("ug/cm2/h");
 }

@@ -15,11 +15,16 @@ internal sealed class DisplayFormat(DisplayUnits units)
 
     public string MassPerArea(double kgPerSquareMeter) => QuantityParser.FormatSi(kgPerSquareMeter, units.MassPerArea);
 
-    public string Flux(double kgPerSquareMeterSecond)
-    {
-        var perTime = kgPerSquareMeterSecond * units.Time.FactorToSi;
-        return $"{QuantityParser.FormatSi(perTime, units.MassPerArea)}/{units.Time.Symbol}";
-    }
+    public string Flux(double kgPerSquareMeterSecond) => QuantityParser.FormatSi(kgPerSquareMeterSecond, units.Flux);
+
+    /// <summary>
+    /// A face medium's concentration: as a mass fraction (mg/kg of food) where the display asks for one and the
+    /// medium's density is known, else as mass per volume.
+    /// </summary>
+    public string MediumConcentration(double kgPerCubicMeter, double? densityKgPerCubicMeter)
+        => units.MediumMassFraction is { } fraction && densityKgPerCubicMeter is { } density
+            ? QuantityParser.FormatSi(kgPerCubicMeter / density, fraction)
+            : Concentration(kgPerCubicMeter);
 
     public static string Percent(double fraction) => (100 * fraction).ToString("F1", CultureInfo.InvariantCulture) + " %";
 

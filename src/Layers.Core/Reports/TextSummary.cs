@@ -49,7 +49,8 @@ public static class TextSummary
         }
 
         var name = TimeSeriesCsv.FaceName(face);
-        text.Append(CultureInfo.InvariantCulture, $" {name} {format.Concentration(sample.ConcentrationKgPerCubicMeter)}, received {format.MassPerArea(sample.TransferredIntoMediumPerArea)};");
+        var density = (face as CompartmentFace)?.DensityKgPerCubicMeter;
+        text.Append(CultureInfo.InvariantCulture, $" {name} {format.MediumConcentration(sample.ConcentrationKgPerCubicMeter, density)}, received {format.MassPerArea(sample.TransferredIntoMediumPerArea)};");
     }
 
     private static void AppendFinalState(StringBuilder text, SimulationResult result, DisplayFormat format)
@@ -64,9 +65,9 @@ public static class TextSummary
         text.Append(CultureInfo.InvariantCulture, $"  final state: {kind}");
         foreach (var (face, value) in new[] { (result.Case.Left, final.LeftConcentrationKgPerCubicMeter), (result.Case.Right, final.RightConcentrationKgPerCubicMeter) })
         {
-            if (face is CompartmentFace && value is { } concentration)
+            if (face is CompartmentFace compartment && value is { } concentration)
             {
-                text.Append(CultureInfo.InvariantCulture, $"; {TimeSeriesCsv.FaceName(face)} {format.Concentration(concentration)}");
+                text.Append(CultureInfo.InvariantCulture, $"; {compartment.Name} {format.MediumConcentration(concentration, compartment.DensityKgPerCubicMeter)}");
             }
         }
 

@@ -1,0 +1,77 @@
+using Layers.Core.Domain;
+using Layers.Core.Units;
+
+namespace Layers.Core.Cases;
+
+/// <summary>
+/// Chooses the units results are shown in. Without a <c>display</c> object the trade's habits decide: a case
+/// written like a food-contact case (a compartment given by mass, or concentrations as mass fractions) is shown in
+/// mg/kg, mg/dm2 and mg/dm2/d; any other case like a permeation case, in ug/mL, ug/cm2 and ug/cm2/h (common
+/// practice, no source). Times use the largest unit that keeps the duration at two or more (s, min, h, d, y up to
+/// 3 d in hours); depths are um below 2 mm of total thickness, else mm. Each choice can be overridden.
+/// </summary>
+internal static class DisplayReader
+{
+    private static readonly string[] Keys = ["time", "depth", "concentration", "massPerArea", "flux"];
+
+    public static DisplayUnits Read(JsonFields root, ReadContext context, double durationSeconds, double totalThicknessMeters)
+    {
+        var foodStyle = context.SawMassFraction || context.SawCompartmentByMass;
+        var defaults = new DisplayUnits
+        {
+            Time = UnitTable.Get(TimeSymbol(durationSeconds)),
+            Depth = UnitTable.Get(totalThicknessMeters < 2e-3 ? "um" : "mm"),
+            Concentration = UnitTable.Get(foodStyle ? "mg/L" : "ug/mL"),
+            MediumMassFraction = foodStyle ? UnitTable.Get("mg/kg") : null,
+            MassPerArea = UnitTable.Get(foodStyle ? "mg/dm2" : "ug/cm2"),
+            Flux = UnitTable.Get(foodStyle ? "mg/dm2/d" : "ug/cm2/h"),
+        };
+        if (root.Member("display") is not { } element
+            || JsonFields.Open(element, root.PathOf("display"), context.Errors, Keys) is not { } display)
+        {
+            return defaults;
+        }
+
+        var concentration = Unit(display, "concentration", ReadContext.ConcentrationDimensions);
+        return defaults with
+        {
+            Time = Unit(display, "time", [Dimension.Time]) ?? defaults.Time,
+            Depth = Unit(display, "depth", [Dimension.Length]) ?? defaults.Depth,
+            Concentration = concentration is { Dimension: Dimension.MassConcentration } ? concentration : defaults.Concentration,
+            MediumMassFraction = concentration switch
+            {
+                { Dimension: Dimension.MassFraction } => concentration,
+                null => defaults.MediumMassFraction,
+                _ => null,
+            },
+            MassPerArea = Unit(display, "massPerArea", [Dimension.MassPerArea]) ?? defaults.MassPerArea,
+            Flux = Unit(display, "flux", [Dimension.MassFlux]) ?? defaults.Flux,
+        };
+    }
+
+    private static string TimeSymbol(double seconds) => seconds switch
+    {
+        < 120 => "s",
+        < 2 * 3600 => "min",
+        <= 3 * 86400 => "h",
+        < 2 * 365.25 * 86400 => "d",
+        _ => "y",
+    };
+
+    private static UnitDefinition? Unit(JsonFields display, string key, IReadOnlyCollection<Dimension> expected)
+    {
+        if (display.Text(key) is not { } symbol)
+        {
+            return null;
+        }
+
+        if (!UnitTable.TryFind(symbol, out var unit) || !expected.Contains(unit.Dimension))
+        {
+            var examples = expected.SelectMany(UnitTable.ExamplesFor);
+            display.Error(key, $"expected a unit of {string.Join(" or ", expected.Select(QuantityParser.Describe))}, e.g. {string.Join(", ", examples)}; got '{symbol}'");
+            return null;
+        }
+
+        return unit;
+    }
+}
