@@ -58,8 +58,10 @@ internal static class RunCommand
             return ExitCodes.OutputFailed;
         }
 
-        output.Write(TextSummary.Write(result, casePath));
-        output.WriteLine($"  results: {folder}");
+        output.WriteLine($"{simulation.Title} ({casePath})");
+        output.WriteLine($"  stack: {StackText.Describe(simulation)}");
+        ConsoleTables.Write(output, ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result));
+        output.WriteLine($"results: {folder}");
         output.WriteLine();
         output.WriteLine(CautionText.Paragraph);
         return ExitCodes.Success;

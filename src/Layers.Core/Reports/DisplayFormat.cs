@@ -26,6 +26,23 @@ internal sealed class DisplayFormat(DisplayUnits units)
             ? QuantityParser.FormatSi(kgPerCubicMeter / density, fraction)
             : Concentration(kgPerCubicMeter);
 
+    public string TimeValue(double seconds) => Value(units.Time.FromSi(seconds));
+
+    public string MassPerAreaValue(double kgPerSquareMeter) => Value(units.MassPerArea.FromSi(kgPerSquareMeter));
+
+    public string MediumConcentration(double kgPerCubicMeter, FaceCondition face)
+        => MediumConcentration(kgPerCubicMeter, (face as CompartmentFace)?.DensityKgPerCubicMeter);
+
+    public string MediumConcentrationValue(double kgPerCubicMeter, FaceCondition face)
+        => MediumConcentration(kgPerCubicMeter, face).Split(' ')[0];
+
+    public string MediumConcentrationUnit(FaceCondition face)
+        => units.MediumMassFraction is { } fraction && (face as CompartmentFace)?.DensityKgPerCubicMeter is not null
+            ? fraction.Symbol
+            : units.Concentration.Symbol;
+
+    public static string Value(double value) => value.ToString("G4", CultureInfo.InvariantCulture);
+
     public static string Percent(double fraction) => (100 * fraction).ToString("F1", CultureInfo.InvariantCulture) + " %";
 
     public static string Number(double value) => value.ToString("G4", CultureInfo.InvariantCulture);

@@ -1,0 +1,112 @@
+using Layers.Core.Domain;
+using Layers.Core.Results;
+
+namespace Layers.Core.Reports;
+
+/// <summary>
+/// The key results of a run as tables in the display units: one row per report time, and a list of key figures
+/// (final state, times to 50/90/99 %, permeation figures, mass balance).
+/// </summary>
+public static class ResultTables
+{
+    /// <summary>Amounts and concentrations at each report time.</summary>
+    public static TextTable AtReportTimes(SimulationResult result)
+    {
+        var simulation = result.Case;
+        var format = new DisplayFormat(simulation.Display);
+        var media = Media(simulation).ToArray();
+        var headers = new List<string> { $"time [{simulation.Display.Time.Symbol}]" };
+        foreach (var (_, face) in media)
+        {
+            var name = TimeSeriesCsv.FaceName(face);
+            headers.Add($"{name}: concentration [{format.MediumConcentrationUnit(face)}]");
+            headers.Add($"{name}: received [{simulation.Display.MassPerArea.Symbol}]");
+        }
+
+        headers.Add("toward final state");
+        var rows = result.Reports.Select(report =>
+        {
+            var row = new List<string> { format.TimeValue(report.Sample.TimeSeconds) };
+            foreach (var (side, face) in media)
+            {
+                var sample = (side == Side.Left ? report.Sample.Left : report.Sample.Right)!;
+                row.Add(format.MediumConcentrationValue(sample.ConcentrationKgPerCubicMeter, face));
+                row.Add(format.MassPerAreaValue(sample.TransferredIntoMediumPerArea));
+            }
+
+            row.Add(DisplayFormat.Percent(report.Sample.FractionOfFinalState));
+            return (IReadOnlyList<string>)row;
+        }).ToArray();
+        return new TextTable("At the report times", headers, rows);
+    }
+
+    /// <summary>Key figures: final state, times to approach it, permeation, mass balance.</summary>
+    public static TextTable KeyFigures(SimulationResult result)
+    {
+        var simulation = result.Case;
+        var format = new DisplayFormat(simulation.Display);
+        var rows = new List<IReadOnlyList<string>>();
+        void Add(string what, string value) => rows.Add([what, value]);
+        var final = result.FinalState;
+        Add("final state", final.Kind switch
+        {
+            FinalStateKind.ClosedEquilibrium => "equilibrium of the closed system",
+            FinalStateKind.BathEquilibrium => "equilibrium with the bath",
+            _ => "steady permeation between the baths",
+        });
+        foreach (var (side, face) in Media(simulation))
+        {
+            var concentration = side == Side.Left ? final.LeftConcentrationKgPerCubicMeter : final.RightConcentrationKgPerCubicMeter;
+            if (face is CompartmentFace && concentration is { } value)
+            {
+                Add($"{TimeSeriesCsv.FaceName(face)} at the final state", format.MediumConcentration(value, face));
+            }
+        }
+
+        AddTimes(rows, "whole system", final.System, result, format);
+        AddTimes(rows, TimeSeriesCsv.FaceName(simulation.Left), final.LeftCompartment, result, format);
+        AddTimes(rows, TimeSeriesCsv.FaceName(simulation.Right), final.RightCompartment, result, format);
+        if (result.Permeation is { } permeation)
+        {
+            Add("steady flux", format.Flux(Math.Abs(permeation.SteadyFluxKgPerSquareMeterSecond)));
+            Add("flux at the end", format.Flux(permeation.FluxAtEndKgPerSquareMeterSecond));
+            Add("lag time", permeation.LagTimeSeconds is { } lag ? format.Time(lag) : "steady state not reached");
+            if (permeation.AnalyticLagTimeSeconds is { } analytic)
+            {
+                Add("lag time L^2/(6D)", format.Time(analytic));
+            }
+        }
+
+        Add("mass balance (worst relative error)", result.WorstMassBalanceError.ToString("G2", System.Globalization.CultureInfo.InvariantCulture));
+        return new TextTable("Key figures", ["quantity", "value"], rows);
+    }
+
+    private static IEnumerable<(Side Side, FaceCondition Face)> Media(SimulationCase simulation)
+    {
+        foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            if (simulation.Face(side) is CompartmentFace or BathFace)
+            {
+                yield return (side, simulation.Face(side));
+            }
+        }
+    }
+
+    private static void AddTimes(List<IReadOnlyList<string>> rows, string what, ThresholdTimes? times, SimulationResult result, DisplayFormat format)
+    {
+        if (times is null)
+        {
+            return;
+        }
+
+        var labels = new[] { "50 %", "90 %", "99 %" };
+        var values = times.AsList();
+        for (var i = 0; i < labels.Length; i++)
+        {
+            var text = values[i] is { } time
+                ? format.Time(time) + (time > result.Case.DurationSeconds ? " (after the duration)" : string.Empty)
+                : $"not within {format.Time(result.FinalState.HorizonSeconds)}";
+            rows.Add([$"{what}: time to {labels[i]} of the final state", text]);
+        }
+    }
+}
