@@ -1,4 +1,3 @@
-using System.Text;
 using System.CommandLine;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
@@ -6,8 +5,8 @@ using Layers.Core.Simulation;
 namespace Layers.Cli.Commands;
 
 /// <summary>
-/// <c>layers run CASE [--out DIR]</c>: solves a case and writes summary.json, timeseries.csv and profiles.csv into
-/// DIR/&lt;case name&gt;/, replacing an earlier folder of that name only once everything is written.
+/// <c>layers run CASE [--out DIR] [--quiet | --json] [--no-plots]</c>: solves a case and writes its result files
+/// into DIR/&lt;case name&gt;/, replacing an earlier folder of that name only once everything is written.
 /// </summary>
 internal static class RunCommand
 {
@@ -19,15 +18,27 @@ internal static class RunCommand
             Description = "Folder that receives one sub-folder of results per case.",
             DefaultValueFactory = _ => "results",
         };
+        var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
+        var json = new Option<bool>("--json") { Description = "Print summary.json to stdout instead of the tables, for scripts." };
         var command = new Command("run", "Solve a case and write its results.");
         command.Arguments.Add(caseFile);
         command.Options.Add(outputRoot);
-        command.SetAction(parseResult => Execute(parseResult.GetValue(caseFile)!, parseResult.GetValue(outputRoot)!, output, error));
+        command.Options.Add(quiet);
+        command.Options.Add(json);
+        command.SetAction(parseResult => Execute(
+            new RunSettings(parseResult.GetValue(caseFile)!, parseResult.GetValue(outputRoot)!)
+            {
+                Quiet = parseResult.GetValue(quiet),
+                Json = parseResult.GetValue(json),
+            },
+            output,
+            error));
         return command;
     }
 
-    private static int Execute(string casePath, string outputRoot, TextWriter output, TextWriter error)
+    private static int Execute(RunSettings settings, TextWriter output, TextWriter error)
     {
+        var casePath = settings.CasePath;
         var read = CaseArgument.ReadOrReport(casePath, error);
         if (read?.Case is not { } simulation)
         {
@@ -41,29 +52,32 @@ internal static class RunCommand
             return ExitCodes.SolverFailed;
         }
 
-        var files = new Dictionary<string, byte[]>
-        {
-            ["summary.json"] = Encoding.UTF8.GetBytes(SummaryJson.Write(result, casePath)),
-            ["timeseries.csv"] = Encoding.UTF8.GetBytes(TimeSeriesCsv.Write(result)),
-            ["profiles.csv"] = Encoding.UTF8.GetBytes(ProfilesCsv.Write(result)),
-        };
+        var files = CaseFiles.Build(result, settings);
         string folder;
         try
         {
-            folder = CaseOutputFolder.Write(outputRoot, Path.GetFileNameWithoutExtension(casePath), files);
+            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(casePath), files);
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {
-            error.WriteLine($"{casePath}: cannot write results under '{outputRoot}': {exception.Message}");
+            error.WriteLine($"{casePath}: cannot write results under '{settings.OutputRoot}': {exception.Message}");
             return ExitCodes.OutputFailed;
         }
 
-        output.WriteLine($"{simulation.Title} ({casePath})");
-        output.WriteLine($"  stack: {StackText.Describe(simulation)}");
-        ConsoleTables.Write(output, ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result));
-        output.WriteLine($"results: {folder}");
-        output.WriteLine();
-        output.WriteLine(CautionText.Paragraph);
+        if (settings.Json)
+        {
+            output.Write(System.Text.Encoding.UTF8.GetString(files[CaseFiles.Summary]));
+        }
+        else if (!settings.Quiet)
+        {
+            output.WriteLine($"{simulation.Title} ({casePath})");
+            output.WriteLine($"  stack: {StackText.Describe(simulation)}");
+            ConsoleTables.Write(output, ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result));
+            output.WriteLine($"results: {folder}");
+            output.WriteLine();
+            output.WriteLine(CautionText.Paragraph);
+        }
+
         return ExitCodes.Success;
     }
 }

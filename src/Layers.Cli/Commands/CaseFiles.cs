@@ -1,0 +1,18 @@
+using System.Text;
+using Layers.Core.Reports;
+using Layers.Core.Results;
+
+namespace Layers.Cli.Commands;
+
+/// <summary>The files written for one solved case, by name.</summary>
+internal static class CaseFiles
+{
+    public const string Summary = "summary.json";
+
+    public static Dictionary<string, byte[]> Build(SimulationResult result, RunSettings settings) => new()
+    {
+        [Summary] = Encoding.UTF8.GetBytes(SummaryJson.Write(result, settings.CasePath)),
+        ["timeseries.csv"] = Encoding.UTF8.GetBytes(TimeSeriesCsv.Write(result)),
+        ["profiles.csv"] = Encoding.UTF8.GetBytes(ProfilesCsv.Write(result)),
+    };
+}

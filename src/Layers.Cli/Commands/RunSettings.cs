@@ -1,0 +1,13 @@
+namespace Layers.Cli.Commands;
+
+/// <summary>What <c>layers run</c> was asked to do.</summary>
+/// <param name="CasePath">The case file as given.</param>
+/// <param name="OutputRoot">Folder that receives the case folder.</param>
+internal sealed record RunSettings(string CasePath, string OutputRoot)
+{
+    /// <summary>Print nothing on success.</summary>
+    public bool Quiet { get; init; }
+
+    /// <summary>Print summary.json on stdout instead of tables.</summary>
+    public bool Json { get; init; }
+}
