@@ -19,8 +19,8 @@ internal static class CheckCommand
                 return ExitCodes.InvalidInput;
             }
 
-            output.Write(StackText.Table(simulation));
-            output.WriteLine("valid");
+            output.WriteLine($"{simulation.Title} ({parseResult.GetValue(caseFile)}): valid");
+            ConsoleTables.Write(output, InputTables.Layers(simulation), InputTables.Conditions(simulation));
             return ExitCodes.Success;
         });
         return command;

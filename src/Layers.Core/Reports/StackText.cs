@@ -1,5 +1,3 @@
-using System.Globalization;
-using System.Text;
 using Layers.Core.Domain;
 using Layers.Core.Units;
 
@@ -20,30 +18,7 @@ public static class StackText
         return string.Join(" | ", parts);
     }
 
-    /// <summary>A table of the stack with every input in SI and in the case's units, plus derived figures.</summary>
-    public static string Table(SimulationCase simulation)
-    {
-        var format = new DisplayFormat(simulation.Display);
-        var text = new StringBuilder();
-        var resistance = simulation.Stack.ResistanceSecondsPerMeter;
-        text.Append(CultureInfo.InvariantCulture, $"{simulation.Title}: partition coefficients relative to {simulation.ReferenceMedium}, volume basis\n");
-        text.Append(CultureInfo.InvariantCulture, $"  left:  {Face(simulation.Left, format)}\n");
-        foreach (var layer in simulation.Stack.Layers)
-        {
-            var diffusionTime = layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond;
-            text.Append(CultureInfo.InvariantCulture,
-                $"  layer {layer.Name}: thickness {format.Depth(layer.ThicknessMeters)}, " +
-                $"D {QuantityParser.FormatSi(layer.DiffusivitySquareMetersPerSecond, UnitTable.Get("cm2/s"))}, K {DisplayFormat.Number(layer.PartitionCoefficient)}, " +
-                $"c0 {format.Concentration(layer.InitialConcentrationKgPerCubicMeter)}, h^2/D {format.Time(diffusionTime)}, " +
-                $"share of stack resistance {DisplayFormat.Percent(layer.ResistanceSecondsPerMeter / resistance)}\n");
-        }
-
-        text.Append(CultureInfo.InvariantCulture, $"  right: {Face(simulation.Right, format)}\n");
-        text.Append(CultureInfo.InvariantCulture, $"  duration {format.Time(simulation.DurationSeconds)}; report times {string.Join(", ", simulation.ReportTimesSeconds.Select(format.Time))}\n");
-        return text.ToString();
-    }
-
-    private static string Face(FaceCondition face, DisplayFormat format) => face switch
+    internal static string Face(FaceCondition face, DisplayFormat format) => face switch
     {
         BathFace bath => $"bath \"{bath.Name}\" at {format.Concentration(bath.ConcentrationKgPerCubicMeter)} (K {DisplayFormat.Number(bath.PartitionCoefficient)}{Film(bath.FilmCoefficientMetersPerSecond)})",
         CompartmentFace compartment => $"compartment \"{compartment.Name}\" {QuantityParser.FormatSi(compartment.VolumeCubicMeters, UnitTable.Get("mL"))} on {QuantityParser.FormatSi(compartment.ContactAreaSquareMeters, UnitTable.Get("cm2"))}, starting at {format.Concentration(compartment.InitialConcentrationKgPerCubicMeter)} (K {DisplayFormat.Number(compartment.PartitionCoefficient)}{Film(compartment.FilmCoefficientMetersPerSecond)})",

@@ -1,0 +1,48 @@
+using Layers.Core.Domain;
+using Layers.Core.Units;
+
+namespace Layers.Core.Reports;
+
+/// <summary>
+/// The inputs of a case echoed in consistent units, with the derived figures that explain behaviour: each layer's
+/// diffusion time h^2/D and its permeance D K / h relative to the reference medium (the layer's permeability
+/// coefficient; the smallest controls steady transport through the stack).
+/// </summary>
+public static class InputTables
+{
+    /// <summary>One row per layer, left to right.</summary>
+    public static TextTable Layers(SimulationCase simulation)
+    {
+        var format = new DisplayFormat(simulation.Display);
+        var depth = simulation.Display.Depth.Symbol;
+        var rows = simulation.Stack.Layers.Select(layer => (IReadOnlyList<string>)
+        [
+            layer.Name,
+            DisplayFormat.Value(simulation.Display.Depth.FromSi(layer.ThicknessMeters)),
+            DisplayFormat.Value(UnitTable.Get("cm2/s").FromSi(layer.DiffusivitySquareMetersPerSecond)),
+            DisplayFormat.Value(layer.PartitionCoefficient),
+            DisplayFormat.Value(simulation.Display.Concentration.FromSi(layer.InitialConcentrationKgPerCubicMeter)),
+            format.Time(layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond),
+            DisplayFormat.Value(UnitTable.Get("cm/h").FromSi(1 / layer.ResistanceSecondsPerMeter)),
+        ]).ToArray();
+        return new TextTable(
+            $"Layers, left to right (K relative to {simulation.ReferenceMedium}, volume basis)",
+            ["layer", $"thickness [{depth}]", "D [cm2/s]", "K [-]", $"initial c [{simulation.Display.Concentration.Symbol}]", "h^2/D", "D K/h [cm/h]"],
+            rows);
+    }
+
+    /// <summary>The two faces, the duration and the report times.</summary>
+    public static TextTable Conditions(SimulationCase simulation)
+    {
+        var format = new DisplayFormat(simulation.Display);
+        return new TextTable(
+            "Faces and times",
+            ["item", "value"],
+            [
+                ["left face", StackText.Face(simulation.Left, format)],
+                ["right face", StackText.Face(simulation.Right, format)],
+                ["duration", format.Time(simulation.DurationSeconds)],
+                ["report times", string.Join(", ", simulation.ReportTimesSeconds.Select(format.Time))],
+            ]);
+    }
+}
