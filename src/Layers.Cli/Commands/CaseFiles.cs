@@ -9,10 +9,21 @@ internal static class CaseFiles
 {
     public const string Summary = "summary.json";
 
-    public static Dictionary<string, byte[]> Build(SimulationResult result, RunSettings settings) => new()
+    public static Dictionary<string, byte[]> Build(SimulationResult result, RunSettings settings)
     {
-        [Summary] = Encoding.UTF8.GetBytes(SummaryJson.Write(result, settings.CasePath)),
-        ["timeseries.csv"] = Encoding.UTF8.GetBytes(TimeSeriesCsv.Write(result)),
-        ["profiles.csv"] = Encoding.UTF8.GetBytes(ProfilesCsv.Write(result)),
-    };
+        var pictures = new Dictionary<string, byte[]>();
+        var files = new Dictionary<string, byte[]>
+        {
+            [Summary] = Encoding.UTF8.GetBytes(SummaryJson.Write(result, settings.CasePath)),
+            ["timeseries.csv"] = Encoding.UTF8.GetBytes(TimeSeriesCsv.Write(result)),
+            ["profiles.csv"] = Encoding.UTF8.GetBytes(ProfilesCsv.Write(result)),
+            ["report.html"] = Encoding.UTF8.GetBytes(HtmlReport.Write(result, settings.CasePath, pictures)),
+        };
+        foreach (var (name, png) in pictures)
+        {
+            files[name] = png;
+        }
+
+        return files;
+    }
 }
