@@ -21,7 +21,10 @@ internal static class TimesReader
         return (quantity?.SiValue, quantity?.Unit);
     }
 
-    /// <summary>Reads a list of times within (0, duration]; report times must also be strictly ascending.</summary>
+    /// <summary>
+    /// Reads a list of times within (0, duration]; report times (<paramref name="ascending"/>) must also be strictly
+    /// ascending and must not be an empty list.
+    /// </summary>
     public static List<double>? List(JsonFields root, string key, double? duration, string? durationText, bool ascending, ReadContext context)
     {
         if (root.Member(key) is not { } array)
@@ -32,6 +35,12 @@ internal static class TimesReader
         if (array.ValueKind != JsonValueKind.Array)
         {
             root.Error(key, $"expected an array of times such as [\"1 d\", \"10 d\"]; found {JsonFields.Describe(array)}");
+            return null;
+        }
+
+        if (ascending && array.GetArrayLength() == 0)
+        {
+            root.Error(key, "must hold at least one time (leave the key out for the default times); got []");
             return null;
         }
 
