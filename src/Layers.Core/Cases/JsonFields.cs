@@ -175,7 +175,7 @@ internal sealed class JsonFields
                 key.ToLower(CultureInfo.InvariantCulture), candidate.ToLower(CultureInfo.InvariantCulture))))
             .OrderBy(pair => pair.distance)
             .First();
-        var suggestion = nearest.distance <= Math.Max(2, key.Length / 3) ? $"; did you mean \"{nearest.candidate}\"?" : string.Empty;
+        var suggestion = nearest.distance <= Math.Max(2, key.Length / 3) ? $"; did you mean \"{nearest.candidate}\"?" : ".";
         return $"unknown key \"{key}\"{suggestion} Known keys here: {string.Join(", ", allowed)}";
     }
 }
