@@ -21,10 +21,12 @@ public static class CaseReader
     private static readonly string[] ReferenceKeys = ["name", "density"];
     private static readonly string[] NumericsKeys = ["cells", "minimumCellsPerLayer", "relativeTolerance"];
 
+    // Standard JSON only, as docs/case-format.md promises: a case file must also open in editors, schema
+    // validators and scripts, which reject comments and trailing commas.
     private static readonly JsonDocumentOptions ParseOptions = new()
     {
-        AllowTrailingCommas = true,
-        CommentHandling = JsonCommentHandling.Skip,
+        AllowTrailingCommas = false,
+        CommentHandling = JsonCommentHandling.Disallow,
     };
 
     /// <summary>Reads a case file from disk.</summary>
@@ -53,7 +55,11 @@ public static class CaseReader
         }
         catch (JsonException exception)
         {
-            var error = new CaseError("$", $"not valid JSON: {FirstSentence(exception.Message)}", (exception.LineNumber ?? 0) + 1, (exception.BytePositionInLine ?? 0) + 1);
+            var reason = FirstSentence(exception.Message);
+            var hint = reason.StartsWith("'/'", StringComparison.Ordinal)
+                ? " Comments are not allowed in a case file; put notes in \"description\"."
+                : string.Empty;
+            var error = new CaseError("$", $"not valid JSON: {reason}{hint}", (exception.LineNumber ?? 0) + 1, (exception.BytePositionInLine ?? 0) + 1);
             return new CaseReadResult(fileName, null, [error]);
         }
 
