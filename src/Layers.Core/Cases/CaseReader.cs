@@ -1,3 +1,4 @@
+using System.Text;
 using System.Text.Json;
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
@@ -59,7 +60,9 @@ public static class CaseReader
             var hint = reason.StartsWith("'/'", StringComparison.Ordinal)
                 ? " Comments are not allowed in a case file; put notes in \"description\"."
                 : string.Empty;
-            var error = new CaseError("$", $"not valid JSON: {reason}{hint}", (exception.LineNumber ?? 0) + 1, (exception.BytePositionInLine ?? 0) + 1);
+            var line = exception.LineNumber ?? 0;
+            var column = CharacterColumn(json, line, exception.BytePositionInLine ?? 0);
+            var error = new CaseError("$", $"not valid JSON: {reason}{hint}", line + 1, column);
             return new CaseReadResult(fileName, null, [error]);
         }
 
@@ -182,6 +185,23 @@ public static class CaseReader
             ? UnitTable.Get("ug/cm2")
             : UnitTable.Get("mg/dm2");
         return new DisplayUnits { Time = durationUnit, Depth = depth, Concentration = concentration, MassPerArea = perArea };
+    }
+
+    /// <summary>
+    /// The 1-based column, in characters as editors count them, of a position the JSON parser gives in UTF-8 bytes
+    /// from the start of a 0-based line; "µm" before the position would otherwise shift it.
+    /// </summary>
+    private static long CharacterColumn(string json, long lineIndex, long bytePosition)
+    {
+        var lines = json.Split('\n');
+        if (lineIndex >= lines.Length)
+        {
+            return bytePosition + 1;
+        }
+
+        var bytes = Encoding.UTF8.GetBytes(lines[lineIndex]);
+        var length = (int)Math.Min(bytePosition, bytes.Length);
+        return Encoding.UTF8.GetCharCount(bytes, 0, length) + 1;
     }
 
     private static string FirstSentence(string message)
