@@ -91,7 +91,7 @@ public static class CaseReader
         var left = FaceReader.Read(root, "left", context);
         var right = FaceReader.Read(root, "right", context);
         var (duration, durationUnit) = TimesReader.Duration(root, context);
-        var durationText = root.Member("duration")?.ToString();
+        var durationText = root.Written("duration");
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);

@@ -69,6 +69,12 @@ internal sealed class JsonFields
         return null;
     }
 
+    /// <summary>A string member as the user wrote it (trimmed), for quoting in messages; empty when not a string.</summary>
+    public string Written(string key) =>
+        _element.TryGetProperty(key, out var value) && value.ValueKind == JsonValueKind.String
+            ? value.GetString()!.Trim()
+            : string.Empty;
+
     /// <summary>A string member.</summary>
     public string? Text(string key, bool required = false)
     {

@@ -14,7 +14,7 @@ internal static class TimesReader
         var quantity = root.Quantity("duration", [Dimension.Time], required: true);
         if (quantity is { } value && !(value.SiValue > 0))
         {
-            root.Error("duration", $"must be > 0; got '{value}'");
+            root.Error("duration", $"must be > 0; got '{root.Written("duration")}'");
             return (null, null);
         }
 
@@ -54,17 +54,19 @@ internal static class TimesReader
                 continue;
             }
 
+            var written = element.GetString()!.Trim();
+
             if (!(time.SiValue > 0))
             {
-                context.Errors.Add(new CaseError(path, $"must be > 0; got '{time}'"));
+                context.Errors.Add(new CaseError(path, $"must be > 0; got '{written}'"));
             }
             else if (duration is { } end && time.SiValue > end * (1 + 1e-12))
             {
-                context.Errors.Add(new CaseError(path, $"must be <= duration ({durationText}); got '{time}'"));
+                context.Errors.Add(new CaseError(path, $"must be <= duration ({durationText}); got '{written}'"));
             }
             else if (ascending && times.Count > 0 && time.SiValue <= times[^1])
             {
-                context.Errors.Add(new CaseError(path, $"must be later than the previous time; got '{time}'"));
+                context.Errors.Add(new CaseError(path, $"must be later than the previous time; got '{written}'"));
             }
 
             times.Add(time.SiValue);
