@@ -1,3 +1,4 @@
+using System.Text;
 using System.Text.Json;
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
@@ -21,10 +22,12 @@ public static class CaseReader
     private static readonly string[] ReferenceKeys = ["name", "density"];
     private static readonly string[] NumericsKeys = ["cells", "minimumCellsPerLayer", "relativeTolerance"];
 
+    // Standard JSON only, as docs/case-format.md promises: a case file must also open in editors, schema
+    // validators and scripts, which reject comments and trailing commas.
     private static readonly JsonDocumentOptions ParseOptions = new()
     {
-        AllowTrailingCommas = true,
-        CommentHandling = JsonCommentHandling.Skip,
+        AllowTrailingCommas = false,
+        CommentHandling = JsonCommentHandling.Disallow,
     };
 
     /// <summary>Reads a case file from disk.</summary>
@@ -53,7 +56,13 @@ public static class CaseReader
         }
         catch (JsonException exception)
         {
-            var error = new CaseError("$", $"not valid JSON: {FirstSentence(exception.Message)}", (exception.LineNumber ?? 0) + 1, (exception.BytePositionInLine ?? 0) + 1);
+            var reason = FirstSentence(exception.Message);
+            var hint = reason.StartsWith("'/'", StringComparison.Ordinal)
+                ? " Comments are not allowed in a case file; put notes in \"description\"."
+                : string.Empty;
+            var line = exception.LineNumber ?? 0;
+            var column = CharacterColumn(json, line, exception.BytePositionInLine ?? 0);
+            var error = new CaseError("$", $"not valid JSON: {reason}{hint}", line + 1, column);
             return new CaseReadResult(fileName, null, [error]);
         }
 
@@ -82,7 +91,7 @@ public static class CaseReader
         var left = FaceReader.Read(root, "left", context);
         var right = FaceReader.Read(root, "right", context);
         var duration = TimesReader.Duration(root, context);
-        var durationText = root.Member("duration")?.ToString();
+        var durationText = root.Written("duration");
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
@@ -132,7 +141,7 @@ public static class CaseReader
 
         if (context.Basis == PartitionBasis.Mass && context.ReferenceDensity is null)
         {
-            root.Error("referenceMedium", "needs \"density\" because partitionBasis is \"mass\"");
+            context.Errors.Add(new CaseError($"{root.PathOf("referenceMedium")}.density", "is required because partitionBasis is \"mass\""));
         }
 
         return name;
@@ -160,6 +169,23 @@ public static class CaseReader
         }
 
         return (grid, solver);
+    }
+
+    /// <summary>
+    /// The 1-based column, in characters as editors count them, of a position the JSON parser gives in UTF-8 bytes
+    /// from the start of a 0-based line; "µm" before the position would otherwise shift it.
+    /// </summary>
+    private static long CharacterColumn(string json, long lineIndex, long bytePosition)
+    {
+        var lines = json.Split('\n');
+        if (lineIndex >= lines.Length)
+        {
+            return bytePosition + 1;
+        }
+
+        var bytes = Encoding.UTF8.GetBytes(lines[lineIndex]);
+        var length = (int)Math.Min(bytePosition, bytes.Length);
+        return Encoding.UTF8.GetCharCount(bytes, 0, length) + 1;
     }
 
     private static string FirstSentence(string message)

@@ -33,9 +33,14 @@ internal sealed class JsonFields
             return null;
         }
 
+        var seen = new HashSet<string>(StringComparer.Ordinal);
         foreach (var property in element.EnumerateObject())
         {
-            if (!allowedKeys.Contains(property.Name))
+            if (!seen.Add(property.Name))
+            {
+                errors.Add(new CaseError($"{path}.{property.Name}", "appears more than once in this object; keep one"));
+            }
+            else if (!allowedKeys.Contains(property.Name))
             {
                 errors.Add(new CaseError($"{path}.{property.Name}", UnknownKeyMessage(property.Name, allowedKeys)));
             }
@@ -68,6 +73,12 @@ internal sealed class JsonFields
 
         return null;
     }
+
+    /// <summary>A string member as the user wrote it (trimmed), for quoting in messages; empty when not a string.</summary>
+    public string Written(string key) =>
+        _element.TryGetProperty(key, out var value) && value.ValueKind == JsonValueKind.String
+            ? value.GetString()!.Trim()
+            : string.Empty;
 
     /// <summary>A string member.</summary>
     public string? Text(string key, bool required = false)
@@ -175,7 +186,7 @@ internal sealed class JsonFields
                 key.ToLower(CultureInfo.InvariantCulture), candidate.ToLower(CultureInfo.InvariantCulture))))
             .OrderBy(pair => pair.distance)
             .First();
-        var suggestion = nearest.distance <= Math.Max(2, key.Length / 3) ? $"; did you mean \"{nearest.candidate}\"?" : string.Empty;
+        var suggestion = nearest.distance <= Math.Max(2, key.Length / 3) ? $"; did you mean \"{nearest.candidate}\"?" : ".";
         return $"unknown key \"{key}\"{suggestion} Known keys here: {string.Join(", ", allowed)}";
     }
 }

@@ -31,7 +31,7 @@ internal sealed class ReadContext
         var quantity = fields.Quantity(key, [dimension], required);
         if (quantity is { } value && !(value.SiValue > 0))
         {
-            fields.Error(key, $"must be > 0; got '{value}'");
+            fields.Error(key, $"must be > 0; got '{fields.Written(key)}'");
             return null;
         }
 
@@ -75,7 +75,7 @@ internal sealed class ReadContext
 
         if (!(quantity.SiValue >= 0))
         {
-            fields.Error(key, $"must be >= 0; got '{quantity}'");
+            fields.Error(key, $"must be >= 0; got '{fields.Written(key)}'");
             return null;
         }
 
@@ -87,7 +87,7 @@ internal sealed class ReadContext
         SawMassFraction = true;
         if (densityKgPerCubicMeter is not { } density)
         {
-            fields.Error(key, $"a mass fraction needs {fields.PathOf("density")} (e.g. \"0.92 g/cm3\") to convert '{quantity}' to mass per volume");
+            fields.Error(key, $"a mass fraction needs {fields.PathOf("density")} (e.g. \"0.92 g/cm3\") to convert '{fields.Written(key)}' to mass per volume");
             return null;
         }
 

@@ -12,7 +12,10 @@ internal static class TimesReader
     public static double? Duration(JsonFields root, ReadContext context)
         => ReadContext.Positive(root, "duration", Dimension.Time, required: true);
 
-    /// <summary>Reads a list of times within (0, duration]; report times must also be strictly ascending.</summary>
+    /// <summary>
+    /// Reads a list of times within (0, duration]; report times (<paramref name="ascending"/>) must also be strictly
+    /// ascending and must not be an empty list.
+    /// </summary>
     public static List<double>? List(JsonFields root, string key, double? duration, string? durationText, bool ascending, ReadContext context)
     {
         if (root.Member(key) is not { } array)
@@ -26,6 +29,12 @@ internal static class TimesReader
             return null;
         }
 
+        if (ascending && array.GetArrayLength() == 0)
+        {
+            root.Error(key, "must hold at least one time (leave the key out for the default times); got []");
+            return null;
+        }
+
         var times = new List<double>();
         var index = 0;
         foreach (var element in array.EnumerateArray())
@@ -36,17 +45,19 @@ internal static class TimesReader
                 continue;
             }
 
+            var written = element.GetString()!.Trim();
+
             if (!(time.SiValue > 0))
             {
-                context.Errors.Add(new CaseError(path, $"must be > 0; got '{time}'"));
+                context.Errors.Add(new CaseError(path, $"must be > 0; got '{written}'"));
             }
             else if (duration is { } end && time.SiValue > end * (1 + 1e-12))
             {
-                context.Errors.Add(new CaseError(path, $"must be <= duration ({durationText}); got '{time}'"));
+                context.Errors.Add(new CaseError(path, $"must be <= duration ({durationText}); got '{written}'"));
             }
             else if (ascending && times.Count > 0 && time.SiValue <= times[^1])
             {
-                context.Errors.Add(new CaseError(path, $"must be later than the previous time; got '{time}'"));
+                context.Errors.Add(new CaseError(path, $"must be later than the previous time; got '{written}'"));
             }
 
             times.Add(time.SiValue);

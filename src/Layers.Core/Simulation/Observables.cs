@@ -74,7 +74,8 @@ internal sealed class Observables
                 var transferred = _system.Capacity[node] * (state[node] - _initialState[node]);
                 return new FaceSample(transferred, compartment.PartitionCoefficient * state[node], CompartmentFraction(side, state));
             case BathFace bath:
-                return new FaceSample(-bathInflow, bath.ConcentrationKgPerCubicMeter, null);
+                // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
+                return new FaceSample(0 - bathInflow, bath.ConcentrationKgPerCubicMeter, null);
             default:
                 return null;
         }

@@ -1,0 +1,131 @@
+using Layers.Core.Domain;
+using Layers.Tests.TestSupport;
+
+namespace Layers.Tests.CaseReading;
+
+/// <summary>The defaults of docs/case-format.md ("Defaults" table) for keys a case leaves out.</summary>
+public sealed class CaseReaderDefaultsTests
+{
+    private static SimulationCase ReadValid(string json, string fileName = "case.json")
+    {
+        var result = CaseJson.Read(json, fileName);
+        Assert.True(result.IsValid, result.FormatErrors());
+        return result.Case!;
+    }
+
+    [Fact]
+    public void A_layer_without_partition_coefficient_or_initial_concentration_has_K_1_and_starts_empty()
+    {
+        var layer = ReadValid(CaseJson.Minimal).Stack.Layers[0];
+
+        Assert.Equal(1, layer.PartitionCoefficient);
+        Assert.Equal(0, layer.InitialConcentrationKgPerCubicMeter);
+        Assert.Null(layer.DensityKgPerCubicMeter);
+    }
+
+    [Fact]
+    public void A_compartment_without_optional_keys_has_K_1_starts_empty_and_has_no_film()
+    {
+        var right = Assert.IsType<CompartmentFace>(ReadValid(CaseJson.Minimal).Right);
+
+        Assert.Equal(1, right.PartitionCoefficient);
+        Assert.Equal(0, right.InitialConcentrationKgPerCubicMeter);
+        Assert.Null(right.FilmCoefficientMetersPerSecond);
+        Assert.Null(right.DensityKgPerCubicMeter);
+    }
+
+    [Fact]
+    public void A_bath_without_optional_keys_is_a_perfect_sink_with_K_1_and_no_film()
+    {
+        var bath = Assert.IsType<BathFace>(ReadValid(CaseJson.MinimalWith(("$.right", """{ "kind": "bath" }"""))).Right);
+
+        Assert.Equal(0, bath.ConcentrationKgPerCubicMeter);
+        Assert.Equal(1, bath.PartitionCoefficient);
+        Assert.Null(bath.FilmCoefficientMetersPerSecond);
+    }
+
+    [Fact]
+    public void Default_report_times_are_1_10_25_50_and_100_percent_of_the_duration()
+    {
+        var simulation = ReadValid(CaseJson.Minimal);
+
+        // docs/case-format.md: for "10 d": 0.1 d, 1 d, 2.5 d, 5 d and 10 d; 1 d = 86400 s (SI Brochure 9th ed., Table 8).
+        double[] expected = [0.1 * 86400, 86400, 2.5 * 86400, 5 * 86400, 10 * 86400];
+        Assert.Equal(expected.Length, simulation.ReportTimesSeconds.Count);
+        for (var i = 0; i < expected.Length; i++)
+        {
+            Tolerance.Relative(expected[i], simulation.ReportTimesSeconds[i], 1e-12, $"default report time {i}");
+        }
+    }
+
+    [Fact]
+    public void There_are_no_extra_output_times_by_default() =>
+        Assert.Empty(ReadValid(CaseJson.Minimal).ExtraOutputTimesSeconds);
+
+    [Theory]
+    [InlineData("bath", "$.left", "left bath")]
+    [InlineData("bath", "$.right", "right bath")]
+    [InlineData("compartment", "$.left", "left compartment")]
+    [InlineData("compartment", "$.right", "right compartment")]
+    public void Unnamed_faces_are_named_by_side_and_kind(string kind, string face, string expected)
+    {
+        var faceJson = kind == "bath" ? """{ "kind": "bath" }""" : """{ "kind": "compartment", "volume": "1 L", "area": "6 dm2" }""";
+
+        var simulation = ReadValid(CaseJson.MinimalWith((face, faceJson)));
+
+        var condition = face == "$.left" ? simulation.Left : simulation.Right;
+        var name = condition switch
+        {
+            BathFace bath => bath.Name,
+            CompartmentFace compartment => compartment.Name,
+            _ => null,
+        };
+        Assert.Equal(expected, name);
+    }
+
+    [Theory]
+    [InlineData("film-a.json", "film-a")]
+    [InlineData("cases/lid film.json", "lid film")]
+    [InlineData("/tmp/runs/case.v2.json", "case.v2")]
+    public void Without_a_title_the_file_name_without_json_is_the_title(string fileName, string expected) =>
+        Assert.Equal(expected, ReadValid(CaseJson.Minimal, fileName).Title);
+
+    [Fact]
+    public void The_reference_medium_is_called_reference_medium_by_default() =>
+        Assert.Equal("reference medium", ReadValid(CaseJson.Minimal).ReferenceMedium);
+
+    [Fact]
+    public void A_reference_medium_without_name_keeps_the_default_name() =>
+        Assert.Equal("reference medium", ReadValid(CaseJson.MinimalWith(("$.referenceMedium", """{ "density": "1 g/cm3" }"""))).ReferenceMedium);
+
+    [Fact]
+    public void Numerics_default_to_240_cells_12_per_layer_and_tolerance_1e_6()
+    {
+        var simulation = ReadValid(CaseJson.Minimal);
+
+        Assert.Equal(240, simulation.Grid.TotalCells);
+        Assert.Equal(12, simulation.Grid.MinimumCellsPerLayer);
+        Assert.Equal(1e-6, simulation.Solver.RelativeTolerance);
+    }
+
+    [Fact]
+    public void A_numerics_object_with_one_key_keeps_the_defaults_of_the_others()
+    {
+        var simulation = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "cells": 480 }""")));
+
+        Assert.Equal(480, simulation.Grid.TotalCells);
+        Assert.Equal(12, simulation.Grid.MinimumCellsPerLayer);
+        Assert.Equal(1e-6, simulation.Solver.RelativeTolerance);
+    }
+
+    [Fact]
+    public void The_partition_basis_is_volume_by_default_so_K_is_not_converted_with_densities()
+    {
+        var json = CaseJson.MinimalWith(
+            ("$.referenceMedium", """{ "density": "0.5 g/cm3" }"""),
+            ("$.layers[0].partitionCoefficient", "3"),
+            ("$.layers[0].density", "\"2 g/cm3\""));
+
+        Assert.Equal(3, ReadValid(json).Stack.Layers[0].PartitionCoefficient);
+    }
+}
