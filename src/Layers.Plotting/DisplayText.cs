@@ -89,8 +89,11 @@ internal static class DisplayText
         return Quantity(seconds, UnitTable.Get("s"));
     }
 
-    /// <summary>A value in a unit with three significant digits, e.g. "0.458 mg/dm²".</summary>
-    public static string Quantity(double value, UnitDefinition unit) => Number(value) + " " + Unit(unit);
+    /// <summary>
+    /// A value in a unit with three significant digits, e.g. "0.458 mg/dm²"; the space is a no-break space so that
+    /// wrapped lines never part a number from its unit.
+    /// </summary>
+    public static string Quantity(double value, UnitDefinition unit) => Number(value) + "\u00A0" + Unit(unit);
 
     /// <summary>A number with three significant digits, in plain or power-of-ten notation.</summary>
     public static string Number(double value)
@@ -127,7 +130,7 @@ internal static class DisplayText
 
     /// <summary>A percentage with as many decimals as needed to tell 99 % from 99.9 %.</summary>
     public static string Percent(double fraction) =>
-        (100 * fraction).ToString("0.#", CultureInfo.InvariantCulture) + " %";
+        (100 * fraction).ToString("0.#", CultureInfo.InvariantCulture) + "\u00A0%";
 
     private static string PowerOfTen(double value, string mantissaFormat)
     {

@@ -108,20 +108,29 @@ public static class EquilibriumPlot
             var first = index == 0;
             var levels = thresholds?.AsList() ?? [];
             var markers = new List<Marker>();
-            var missed = new List<string>();
+            var later = new List<string>();
+            var unreached = new List<string>();
             for (var i = 0; i < levels.Count; i++)
             {
                 var level = ThresholdTimes.Levels[i];
-                if (levels[i] is { } seconds && time.Covers(seconds, duration))
+                var percent = DisplayText.Percent(level);
+                if (levels[i] is not { } seconds)
                 {
-                    markers.Add(new Marker(time.Unit.FromSi(seconds), 100 * level, $"{DisplayText.Percent(level)}: {DisplayText.Time(seconds)}"));
+                    unreached.Add(percent);
+                }
+                else if (time.Covers(seconds, duration))
+                {
+                    markers.Add(new Marker(time.Unit.FromSi(seconds), 100 * level, $"{percent}: {DisplayText.Time(seconds)}"));
                 }
                 else
                 {
-                    missed.Add(levels[i] is { } late
-                        ? $"{DisplayText.Percent(level)} at {DisplayText.Time(late)}"
-                        : $"{DisplayText.Percent(level)} not within {DisplayText.Time(result.FinalState.HorizonSeconds)}");
+                    later.Add($"{percent} at {DisplayText.Time(seconds)}");
                 }
+            }
+
+            if (unreached.Count > 0)
+            {
+                later.Add($"{string.Join(", ", unreached)} not reached within {DisplayText.Time(result.FinalState.HorizonSeconds)}");
             }
 
             tracks.Add(new Track(
@@ -133,7 +142,7 @@ public static class EquilibriumPlot
                 first ? PlotStyle.MarkerSize * 1.5 : PlotStyle.MarkerSize,
                 points,
                 markers,
-                missed));
+                later));
         }
 
         Add("whole system", sample => sample.FractionOfFinalState, result.FinalState.System);
@@ -202,11 +211,11 @@ public static class EquilibriumPlot
             ? "Progress toward equilibrium with the bath: 0 % at the start, 100 % at equilibrium"
             : "Progress toward the closed-system equilibrium: 0 % at the start, 100 % at equilibrium";
         var beyond = tracks.Where(track => track.Missed.Count > 0)
-            .Select(track => $"{track.Title} {string.Join(", ", track.Missed)}")
+            .Select(track => $"{track.Title}: {string.Join(", ", track.Missed)}")
             .ToList();
         if (beyond.Count > 0)
         {
-            yield return $"beyond the {DisplayText.Time(result.Case.DurationSeconds)} simulated: " + string.Join("; ", beyond);
+            yield return $"not within the {DisplayText.Time(result.Case.DurationSeconds)} simulated \u2014 " + string.Join("; ", beyond);
         }
     }
 

@@ -63,6 +63,9 @@ internal static class PlotStyle
     public static IReadOnlyList<OxyColor> BandFills { get; } =
         [OxyColor.FromRgb(0xF4, 0xF4, 0xF2), OxyColor.FromRgb(0xE3, 0xE4, 0xE6)];
 
+    /// <summary>Fill of the strips standing for the face media on the profile plot: a faint blue, unlike the layers.</summary>
+    public static OxyColor MediumFill { get; } = OxyColor.FromRgb(0xE4, 0xEE, 0xF6);
+
     public static OxyColor Text { get; } = OxyColor.FromRgb(0x22, 0x22, 0x22);
     public static OxyColor SubtleText { get; } = OxyColor.FromRgb(0x4A, 0x4A, 0x4A);
     public static OxyColor Axis { get; } = OxyColor.FromRgb(0x55, 0x55, 0x55);

@@ -1,3 +1,4 @@
+using Layers.Core.Domain;
 using Layers.Core.Results;
 using Layers.Core.Units;
 using OxyPlot;
@@ -9,12 +10,17 @@ namespace Layers.Plotting;
 
 /// <summary>
 /// Concentration across the stack at each report time: one colour per time, one line per layer so that the jump
-/// at a partitioning interface shows as a gap, the layers as shaded bands named at the top.
+/// at a partitioning interface shows as a gap, the layers as shaded bands named at the top. A face that touches a
+/// medium (compartment or bath) gets a narrow strip beyond it showing the medium's concentration at the same
+/// times, so that the jump at that face shows too.
 /// </summary>
 public static class ProfilePlot
 {
     // Log axes show at most this many decades below the highest concentration.
     private const double LogAxisDecades = 6;
+
+    // Width of the strip standing for a face medium, as a fraction of the stack's thickness.
+    private const double MediumStripFraction = 0.08;
 
     /// <summary>Builds the profile plot.</summary>
     /// <param name="result">A simulation result.</param>
@@ -28,16 +34,21 @@ public static class ProfilePlot
         var simulation = result.Case;
         var depthUnit = DisplayText.DepthUnit(simulation.Stack.TotalThicknessMeters);
         var concentrationUnit = DisplayText.ConcentrationUnit(simulation.Display);
-        var curves = Curves(result, depthUnit, concentrationUnit);
+        var bands = Bands(simulation, depthUnit);
+        var curves = Curves(result, bands, depthUnit, concentrationUnit);
         var range = ValueRange(curves, options.LogConcentrationAxis);
 
         var model = PlotFrame.Create(
             simulation.Title,
             ["Concentration across the stack at the report times", FaceText.Both(simulation)],
             options);
+        var thickness = depthUnit.FromSi(simulation.Stack.TotalThicknessMeters);
         var xAxis = PlotFrame.Linear(AxisPosition.Bottom, $"Depth from the left face ({DisplayText.Unit(depthUnit)})");
-        xAxis.Minimum = 0;
-        xAxis.Maximum = depthUnit.FromSi(simulation.Stack.TotalThicknessMeters);
+        xAxis.Minimum = bands[0].Left;
+        xAxis.Maximum = bands[^1].Right;
+        // Depth has no meaning inside the media strips: their ticks carry no numbers.
+        var slack = thickness * 1e-9;
+        xAxis.LabelFormatter = value => value < -slack || value > thickness + slack ? string.Empty : DisplayText.Tick(value);
         var yAxis = PlotFrame.Axis(
             options.LogConcentrationAxis, AxisPosition.Left, $"Concentration ({DisplayText.Unit(concentrationUnit)})");
         yAxis.Minimum = range.Low;
@@ -45,49 +56,101 @@ public static class ProfilePlot
         model.Axes.Add(xAxis);
         model.Axes.Add(yAxis);
 
-        var edges = LayerEdges(result, depthUnit);
-        AddBands(model, edges);
+        AddBands(model, bands);
         AddSeries(model, curves, range);
 
         using var pass = LayoutPass.Run(model, options);
-        var labels = LayerLabels(pass, result, edges, xAxis);
+        var labels = BandLabels(pass, bands, xAxis);
         yAxis.Maximum = Headroom(pass.PlotArea, range, labels.Bottom - pass.PlotArea.Top, options.LogConcentrationAxis);
         pass.Run();
         // The new maximum may widen the tick labels and shift the plot area: place the names again.
-        labels = LayerLabels(pass, result, edges, xAxis);
-        foreach (var (box, text) in labels.Boxes)
+        labels = BandLabels(pass, bands, xAxis);
+        foreach (var (box, text, band) in labels.Boxes)
         {
-            model.Annotations.Add(Labels.At(box, text, PlotStyle.Text, xAxis, yAxis, OxyColors.Undefined));
+            var color = band.Medium is null ? PlotStyle.Text : PlotStyle.SubtleText;
+            model.Annotations.Add(Labels.At(box, text, color, xAxis, yAxis, OxyColors.Undefined));
         }
 
         return model;
     }
 
-    private static List<Curve> Curves(SimulationResult result, UnitDefinition depthUnit, UnitDefinition concentrationUnit)
+    // The layers, and a strip for the medium on each face that has one, left to right in depth units.
+    private static List<Band> Bands(SimulationCase simulation, UnitDefinition depthUnit)
+    {
+        var stack = simulation.Stack;
+        var thickness = depthUnit.FromSi(stack.TotalThicknessMeters);
+        var strip = thickness * MediumStripFraction;
+        var bands = new List<Band>();
+        if (FaceText.MediumName(simulation.Left) is { } leftName)
+        {
+            bands.Add(new Band(-strip, 0, leftName, simulation.Left));
+        }
+
+        for (var i = 0; i < stack.Count; i++)
+        {
+            var left = depthUnit.FromSi(stack.LeftEdgeMeters(i));
+            var right = i + 1 == stack.Count ? thickness : depthUnit.FromSi(stack.LeftEdgeMeters(i + 1));
+            bands.Add(new Band(left, right, stack.Layers[i].Name, null));
+        }
+
+        if (FaceText.MediumName(simulation.Right) is { } rightName)
+        {
+            bands.Add(new Band(thickness, thickness + strip, rightName, simulation.Right));
+        }
+
+        return bands;
+    }
+
+    private static List<Curve> Curves(
+        SimulationResult result, List<Band> bands, UnitDefinition depthUnit, UnitDefinition concentrationUnit)
     {
         var curves = new List<Curve>();
-        var stack = result.Case.Stack;
+        var simulation = result.Case;
+        var layerBands = bands.Where(band => band.Medium is null).ToList();
+        IReadOnlyList<DataPoint> Flat(Band band, double kgPerCubicMeter)
+        {
+            var c = concentrationUnit.FromSi(kgPerCubicMeter);
+            return [new DataPoint(band.Left, c), new DataPoint(band.Right, c)];
+        }
+
+        IEnumerable<IReadOnlyList<DataPoint>> Media(Func<Side, double?> concentration, bool left) =>
+            bands.Where(band => band.Medium is not null && (band.Right <= 0) == left)
+                .Select(band => (band, c: concentration(band.Right <= 0 ? Side.Left : Side.Right)))
+                .Where(pair => pair.c is not null)
+                .Select(pair => Flat(pair.band, pair.c!.Value));
+
         if (result.Reports.Count == 0 || result.Reports[0].Sample.TimeSeconds > 0)
         {
-            var initial = stack.Layers.Select((layer, index) =>
+            double? Initial(Side side) => simulation.Face(side) switch
             {
-                var left = depthUnit.FromSi(stack.LeftEdgeMeters(index));
-                var right = depthUnit.FromSi(stack.LeftEdgeMeters(index) + layer.ThicknessMeters);
-                var c = concentrationUnit.FromSi(layer.InitialConcentrationKgPerCubicMeter);
-                return (IReadOnlyList<DataPoint>)[new DataPoint(left, c), new DataPoint(right, c)];
-            });
-            curves.Add(new Curve("t = 0 (initial)", PlotStyle.Initial, LineStyle.Dash, PlotStyle.ReferenceThickness, [.. initial]));
+                BathFace bath => bath.ConcentrationKgPerCubicMeter,
+                CompartmentFace compartment => compartment.InitialConcentrationKgPerCubicMeter,
+                _ => null,
+            };
+            var layers = simulation.Stack.Layers.Select((layer, index) => Flat(layerBands[index], layer.InitialConcentrationKgPerCubicMeter));
+            curves.Add(new Curve(
+                "t = 0 (initial)",
+                PlotStyle.Initial,
+                LineStyle.Dash,
+                PlotStyle.ReferenceThickness,
+                [.. Media(Initial, left: true), .. layers, .. Media(Initial, left: false)]));
         }
 
         var index = 0;
         foreach (var report in result.Reports)
         {
-            var segments = report.Profiles.Select(profile => (IReadOnlyList<DataPoint>)[.. profile.PositionsMeters.Zip(
+            var sample = report.Sample;
+            double? Medium(Side side) => (side == Side.Left ? sample.Left : sample.Right)?.ConcentrationKgPerCubicMeter;
+            var layers = report.Profiles.Select(profile => (IReadOnlyList<DataPoint>)[.. profile.PositionsMeters.Zip(
                 profile.ConcentrationsKgPerCubicMeter,
                 (x, c) => new DataPoint(depthUnit.FromSi(x), concentrationUnit.FromSi(c)))]);
-            var label = report.Sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(report.Sample.TimeSeconds);
+            var label = sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(sample.TimeSeconds);
             curves.Add(new Curve(
-                label, PlotStyle.SeriesColor(index), PlotStyle.SeriesLineStyle(index), PlotStyle.SeriesThickness, [.. segments]));
+                label,
+                PlotStyle.SeriesColor(index),
+                PlotStyle.SeriesLineStyle(index),
+                PlotStyle.SeriesThickness,
+                [.. Media(Medium, left: true), .. layers, .. Media(Medium, left: false)]));
             index++;
         }
 
@@ -110,27 +173,22 @@ public static class ProfilePlot
         return (lowest, highest > lowest ? highest : lowest + 1);
     }
 
-    private static List<double> LayerEdges(SimulationResult result, UnitDefinition depthUnit)
+    private static void AddBands(PlotModel model, List<Band> bands)
     {
-        var stack = result.Case.Stack;
-        return [.. Enumerable.Range(0, stack.Count + 1).Select(index => depthUnit.FromSi(
-            index == stack.Count ? stack.TotalThicknessMeters : stack.LeftEdgeMeters(index)))];
-    }
-
-    private static void AddBands(PlotModel model, List<double> edges)
-    {
-        for (var i = 0; i + 1 < edges.Count; i++)
+        var layerIndex = 0;
+        foreach (var band in bands)
         {
             model.Annotations.Add(new RectangleAnnotation
             {
-                MinimumX = edges[i],
-                MaximumX = edges[i + 1],
-                Fill = PlotStyle.BandFills[i % PlotStyle.BandFills.Count],
+                MinimumX = band.Left,
+                MaximumX = band.Right,
+                Fill = band.Medium is null ? PlotStyle.BandFills[layerIndex++ % PlotStyle.BandFills.Count] : PlotStyle.MediumFill,
                 Layer = AnnotationLayer.BelowAxes,
             });
         }
 
-        foreach (var edge in edges.Skip(1).SkipLast(1))
+        // Interfaces between layers, and the faces that touch a medium.
+        foreach (var edge in bands.Skip(1).Select(band => band.Left))
         {
             model.Annotations.Add(new LineAnnotation
             {
@@ -168,25 +226,23 @@ public static class ProfilePlot
         }
     }
 
-    private static LabelRows LayerLabels(LayoutPass pass, SimulationResult result, List<double> edges, Axis xAxis)
+    private static LabelRows BandLabels(LayoutPass pass, List<Band> bands, Axis xAxis)
     {
         var area = pass.PlotArea;
         var placer = new LabelPlacer(area);
-        var boxes = new List<(OxyRect Box, string Text)>();
+        var boxes = new List<(OxyRect Box, string Text, Band Band)>();
         var bottom = area.Top;
-        var layers = result.Case.Stack.Layers;
-        for (var i = 0; i < layers.Count; i++)
+        foreach (var band in bands)
         {
-            var text = layers[i].Name;
-            var size = Labels.BoxSize(pass, text);
-            var centre = (xAxis.Transform(edges[i]) + xAxis.Transform(edges[i + 1])) / 2;
+            var size = Labels.BoxSize(pass, band.Name);
+            var centre = (xAxis.Transform(band.Left) + xAxis.Transform(band.Right)) / 2;
             var left = centre - size.Width / 2;
             // Rows from the top down; a name too wide for its band moves to a lower row rather than cover another.
             var rows = Enumerable.Range(0, 4)
                 .Select(row => Labels.Box(left, area.Top + PlotStyle.LabelGap / 2 + row * size.Height, size))
                 .ToList();
             var box = placer.Place(rows);
-            boxes.Add((box, text));
+            boxes.Add((box, band.Name, band));
             bottom = Math.Max(bottom, box.Bottom);
         }
 
@@ -210,5 +266,8 @@ public static class ProfilePlot
     private sealed record Curve(
         string Title, OxyColor Color, LineStyle Style, double Thickness, IReadOnlyList<IReadOnlyList<DataPoint>> Segments);
 
-    private sealed record LabelRows(List<(OxyRect Box, string Text)> Boxes, double Bottom);
+    /// <summary>A layer, or the strip standing for the medium on a face, with its extent in depth units.</summary>
+    private sealed record Band(double Left, double Right, string Name, FaceCondition? Medium);
+
+    private sealed record LabelRows(List<(OxyRect Box, string Text, Band Band)> Boxes, double Bottom);
 }

@@ -37,6 +37,10 @@ public static class TransferPlot
         var time = TimeAxis.Create(result, options.LogTimeAxis);
         var samples = time.Samples(result).ToList();
         var media = Media(result, time.FirstSeconds, time.Unit, massUnit);
+        if (media.Count == 0)
+        {
+            return LayerHoldings(result, options, time, massUnit);
+        }
 
         var model = PlotFrame.Create(
             simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options), options);
@@ -64,11 +68,6 @@ public static class TransferPlot
         {
             massAxis.StartPosition = 0.42;
             AddConcentrationPanel(model, media, samples, time.Unit, concentrationUnit);
-        }
-
-        if (media.Count == 0)
-        {
-            AddNote(model, options, "No face medium: both faces are closed, nothing leaves the stack.");
         }
 
         if (options.LimitMassPerArea is { } limit)
@@ -225,15 +224,34 @@ public static class TransferPlot
         model.Annotations.Add(Labels.At(box, text, PlotStyle.Limit, xAxis, yAxis, PlotStyle.LabelBackground));
     }
 
-    private static void AddNote(PlotModel model, PlotOptions options, string text)
+    // With both faces closed nothing leaves the stack; what moves is the mass between layers, so that is drawn.
+    private static PlotModel LayerHoldings(SimulationResult result, PlotOptions options, TimeAxis time, UnitDefinition massUnit)
     {
-        using var pass = LayoutPass.Run(model, options);
-        var area = pass.PlotArea;
-        var size = Labels.BoxSize(pass, text);
-        var box = Labels.Box(area.Center.X - size.Width / 2, area.Center.Y - size.Height / 2, size);
-        var xAxis = model.Axes.First(axis => axis.IsHorizontal());
-        var yAxis = model.Axes.First(axis => axis.IsVertical());
-        model.Annotations.Add(Labels.At(box, text, PlotStyle.SubtleText, xAxis, yAxis, OxyColors.Undefined));
+        var layers = result.Case.Stack.Layers;
+        var model = PlotFrame.Create(
+            result.Case.Title,
+            ["Both faces closed, nothing leaves the stack: mass per area held by each layer"],
+            options);
+        model.Axes.Add(time.Axis);
+        var axis = PlotFrame.Linear(AxisPosition.Left, $"Held per area of stack ({DisplayText.Unit(massUnit)})");
+        axis.Key = MassAxisKey;
+        model.Axes.Add(axis);
+        var samples = time.Samples(result).ToList();
+        var (low, high) = Range(
+            samples.SelectMany(sample => sample.LayerMassPerArea).Select(massUnit.FromSi), options with { LimitMassPerArea = null }, massUnit);
+        axis.Minimum = low;
+        axis.Maximum = high;
+        for (var i = 0; i < layers.Count; i++)
+        {
+            var index = i;
+            model.Series.Add(Line(
+                $"in {layers[i].Name}",
+                samples.Select(sample => new DataPoint(time.Unit.FromSi(sample.TimeSeconds), massUnit.FromSi(sample.LayerMassPerArea[index]))),
+                i,
+                MassAxisKey));
+        }
+
+        return model;
     }
 
     private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options)
