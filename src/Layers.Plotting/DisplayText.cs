@@ -103,15 +103,12 @@ internal static class DisplayText
             return value.ToString(CultureInfo.InvariantCulture);
         }
 
-        var magnitude = Math.Abs(value);
-        if (magnitude is < 1e-3 or >= 1e5)
-        {
-            return PowerOfTen(value, "G3");
-        }
-
         // "G3" writes 1115 as 1.12E+03; rounding first and printing plainly gives 1120.
-        var scale = Math.Pow(10, Math.Floor(Math.Log10(magnitude)) - 2);
-        return (Math.Round(value / scale) * scale).ToString("G6", CultureInfo.InvariantCulture);
+        var scale = Math.Pow(10, Math.Floor(Math.Log10(Math.Abs(value))) - 2);
+        var rounded = Math.Round(value / scale) * scale;
+        return Math.Abs(rounded) is < 1e-3 or >= 1e5
+            ? PowerOfTen(value, "G3")
+            : rounded.ToString("G6", CultureInfo.InvariantCulture);
     }
 
     /// <summary>An axis tick label: plain notation between 0.001 and 100000, power-of-ten notation outside.</summary>
