@@ -1,0 +1,33 @@
+using Layers.Core.Results;
+
+namespace Layers.Plotting;
+
+/// <summary>The set of plots written for every case.</summary>
+public static class PlotSet
+{
+    /// <summary>File name of the concentration profile plot.</summary>
+    public const string ProfileFileName = "profile.png";
+
+    /// <summary>File name of the transferred-amount plot.</summary>
+    public const string TransferFileName = "transfer.png";
+
+    /// <summary>File name of the approach-to-final-state plot (cumulative permeation for two baths).</summary>
+    public const string EquilibriumFileName = "equilibrium.png";
+
+    /// <summary>Renders every plot of a result.</summary>
+    /// <param name="result">A simulation result.</param>
+    /// <param name="options">Picture size and axis choices.</param>
+    /// <returns>PNG bytes by file name: profile.png, transfer.png and equilibrium.png.</returns>
+    public static IReadOnlyDictionary<string, byte[]> Render(SimulationResult result, PlotOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(options);
+        options.Validate();
+        return new Dictionary<string, byte[]>(StringComparer.Ordinal)
+        {
+            [ProfileFileName] = PngRenderer.Render(ProfilePlot.Create(result, options), options),
+            [TransferFileName] = PngRenderer.Render(TransferPlot.Create(result, options), options),
+            [EquilibriumFileName] = PngRenderer.Render(EquilibriumPlot.Create(result, options), options),
+        };
+    }
+}

@@ -1,0 +1,273 @@
+using Layers.Core.Domain;
+using Layers.Core.Results;
+using Layers.Core.Units;
+using OxyPlot;
+using OxyPlot.Annotations;
+using OxyPlot.Axes;
+using OxyPlot.Series;
+
+namespace Layers.Plotting;
+
+/// <summary>
+/// Concentration across the stack at each report time: one colour per time, one line per layer so that the jump
+/// at a partitioning interface shows as a gap, the layers as shaded bands named at the top. A face that touches a
+/// medium (compartment or bath) gets a narrow strip beyond it showing the medium's concentration at the same
+/// times, so that the jump at that face shows too.
+/// </summary>
+public static class ProfilePlot
+{
+    // Log axes show at most this many decades below the highest concentration.
+    private const double LogAxisDecades = 6;
+
+    // Width of the strip standing for a face medium, as a fraction of the stack's thickness.
+    private const double MediumStripFraction = 0.08;
+
+    /// <summary>Builds the profile plot.</summary>
+    /// <param name="result">A simulation result.</param>
+    /// <param name="options">Picture size and axis choices.</param>
+    /// <returns>The plot model, ready for <see cref="PngRenderer.Render"/> at the same options.</returns>
+    public static PlotModel Create(SimulationResult result, PlotOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(options);
+        options.Validate();
+        var simulation = result.Case;
+        var depthUnit = DisplayText.DepthUnit(simulation.Stack.TotalThicknessMeters);
+        var concentrationUnit = DisplayText.ConcentrationUnit(simulation.Display);
+        var bands = Bands(simulation, depthUnit);
+        var curves = Curves(result, bands, depthUnit, concentrationUnit);
+        var range = ValueRange(curves, options.LogConcentrationAxis);
+
+        var model = PlotFrame.Create(
+            simulation.Title,
+            ["Concentration across the stack at the report times", FaceText.Both(simulation)],
+            options);
+        var thickness = depthUnit.FromSi(simulation.Stack.TotalThicknessMeters);
+        var xAxis = PlotFrame.Linear(AxisPosition.Bottom, $"Depth from the left face ({DisplayText.Unit(depthUnit)})");
+        xAxis.Minimum = bands[0].Left;
+        xAxis.Maximum = bands[^1].Right;
+        // Depth has no meaning inside the media strips: their ticks carry no numbers.
+        var slack = thickness * 1e-9;
+        xAxis.LabelFormatter = value => value < -slack || value > thickness + slack ? string.Empty : DisplayText.Tick(value);
+        var yAxis = PlotFrame.Axis(
+            options.LogConcentrationAxis, AxisPosition.Left, $"Concentration ({DisplayText.Unit(concentrationUnit)})");
+        yAxis.Minimum = range.Low;
+        yAxis.Maximum = range.High;
+        model.Axes.Add(xAxis);
+        model.Axes.Add(yAxis);
+
+        AddBands(model, bands);
+        AddSeries(model, curves, range);
+
+        using var pass = LayoutPass.Run(model, options);
+        var labels = BandLabels(pass, bands, xAxis);
+        yAxis.Maximum = Headroom(pass.PlotArea, range, labels.Bottom - pass.PlotArea.Top, options.LogConcentrationAxis);
+        pass.Run();
+        // The new maximum may widen the tick labels and shift the plot area: place the names again.
+        labels = BandLabels(pass, bands, xAxis);
+        foreach (var (box, text, band) in labels.Boxes)
+        {
+            var color = band.Medium is null ? PlotStyle.Text : PlotStyle.SubtleText;
+            model.Annotations.Add(Labels.At(box, text, color, xAxis, yAxis, OxyColors.Undefined));
+        }
+
+        return model;
+    }
+
+    // The layers, and a strip for the medium on each face that has one, left to right in depth units.
+    private static List<Band> Bands(SimulationCase simulation, UnitDefinition depthUnit)
+    {
+        var stack = simulation.Stack;
+        var thickness = depthUnit.FromSi(stack.TotalThicknessMeters);
+        var strip = thickness * MediumStripFraction;
+        var bands = new List<Band>();
+        if (FaceText.MediumName(simulation.Left) is { } leftName)
+        {
+            bands.Add(new Band(-strip, 0, leftName, simulation.Left));
+        }
+
+        for (var i = 0; i < stack.Count; i++)
+        {
+            var left = depthUnit.FromSi(stack.LeftEdgeMeters(i));
+            var right = i + 1 == stack.Count ? thickness : depthUnit.FromSi(stack.LeftEdgeMeters(i + 1));
+            bands.Add(new Band(left, right, stack.Layers[i].Name, null));
+        }
+
+        if (FaceText.MediumName(simulation.Right) is { } rightName)
+        {
+            bands.Add(new Band(thickness, thickness + strip, rightName, simulation.Right));
+        }
+
+        return bands;
+    }
+
+    private static List<Curve> Curves(
+        SimulationResult result, List<Band> bands, UnitDefinition depthUnit, UnitDefinition concentrationUnit)
+    {
+        var curves = new List<Curve>();
+        var simulation = result.Case;
+        var layerBands = bands.Where(band => band.Medium is null).ToList();
+        IReadOnlyList<DataPoint> Flat(Band band, double kgPerCubicMeter)
+        {
+            var c = concentrationUnit.FromSi(kgPerCubicMeter);
+            return [new DataPoint(band.Left, c), new DataPoint(band.Right, c)];
+        }
+
+        IEnumerable<IReadOnlyList<DataPoint>> Media(Func<Side, double?> concentration, bool left) =>
+            bands.Where(band => band.Medium is not null && (band.Right <= 0) == left)
+                .Select(band => (band, c: concentration(band.Right <= 0 ? Side.Left : Side.Right)))
+                .Where(pair => pair.c is not null)
+                .Select(pair => Flat(pair.band, pair.c!.Value));
+
+        if (result.Reports.Count == 0 || result.Reports[0].Sample.TimeSeconds > 0)
+        {
+            double? Initial(Side side) => simulation.Face(side) switch
+            {
+                BathFace bath => bath.ConcentrationKgPerCubicMeter,
+                CompartmentFace compartment => compartment.InitialConcentrationKgPerCubicMeter,
+                _ => null,
+            };
+            var layers = simulation.Stack.Layers.Select((layer, index) => Flat(layerBands[index], layer.InitialConcentrationKgPerCubicMeter));
+            curves.Add(new Curve(
+                "t = 0 (initial)",
+                PlotStyle.Initial,
+                LineStyle.Dash,
+                PlotStyle.ReferenceThickness,
+                [.. Media(Initial, left: true), .. layers, .. Media(Initial, left: false)]));
+        }
+
+        var index = 0;
+        foreach (var report in result.Reports)
+        {
+            var sample = report.Sample;
+            double? Medium(Side side) => (side == Side.Left ? sample.Left : sample.Right)?.ConcentrationKgPerCubicMeter;
+            var layers = report.Profiles.Select(profile => (IReadOnlyList<DataPoint>)[.. profile.PositionsMeters.Zip(
+                profile.ConcentrationsKgPerCubicMeter,
+                (x, c) => new DataPoint(depthUnit.FromSi(x), concentrationUnit.FromSi(c)))]);
+            var label = sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(sample.TimeSeconds);
+            curves.Add(new Curve(
+                label,
+                PlotStyle.SeriesColor(index),
+                PlotStyle.SeriesLineStyle(index),
+                PlotStyle.SeriesThickness,
+                [.. Media(Medium, left: true), .. layers, .. Media(Medium, left: false)]));
+            index++;
+        }
+
+        return curves;
+    }
+
+    private static (double Low, double High) ValueRange(List<Curve> curves, bool logarithmic)
+    {
+        var values = curves.SelectMany(curve => curve.Segments).SelectMany(segment => segment).Select(point => point.Y).ToList();
+        var highest = values.Count == 0 ? 0 : values.Max();
+        if (logarithmic)
+        {
+            var top = highest > 0 ? highest : 1;
+            var lowestPositive = values.Where(value => value > 0).DefaultIfEmpty(top).Min();
+            var floor = Math.Max(lowestPositive, top * Math.Pow(10, -LogAxisDecades));
+            return (floor, top);
+        }
+
+        var lowest = Math.Min(0, values.Count == 0 ? 0 : values.Min());
+        return (lowest, highest > lowest ? highest : lowest + 1);
+    }
+
+    private static void AddBands(PlotModel model, List<Band> bands)
+    {
+        var layerIndex = 0;
+        foreach (var band in bands)
+        {
+            model.Annotations.Add(new RectangleAnnotation
+            {
+                MinimumX = band.Left,
+                MaximumX = band.Right,
+                Fill = band.Medium is null ? PlotStyle.BandFills[layerIndex++ % PlotStyle.BandFills.Count] : PlotStyle.MediumFill,
+                Layer = AnnotationLayer.BelowAxes,
+            });
+        }
+
+        // Interfaces between layers, and the faces that touch a medium.
+        foreach (var edge in bands.Skip(1).Select(band => band.Left))
+        {
+            model.Annotations.Add(new LineAnnotation
+            {
+                Type = LineAnnotationType.Vertical,
+                X = edge,
+                Color = PlotStyle.Interface,
+                StrokeThickness = PlotStyle.InterfaceThickness,
+                LineStyle = LineStyle.Solid,
+                Layer = AnnotationLayer.BelowSeries,
+            });
+        }
+    }
+
+    private static void AddSeries(PlotModel model, List<Curve> curves, (double Low, double High) range)
+    {
+        foreach (var curve in curves)
+        {
+            var first = true;
+            foreach (var segment in curve.Segments)
+            {
+                var series = new LineSeries
+                {
+                    Title = curve.Title,
+                    Color = curve.Color,
+                    LineStyle = curve.Style,
+                    StrokeThickness = curve.Thickness,
+                    RenderInLegend = first,
+                    CanTrackerInterpolatePoints = false,
+                };
+                // On a log axis, zero and negative values sit on the bottom of the axis instead of vanishing.
+                series.Points.AddRange(segment.Select(point => new DataPoint(point.X, Math.Max(point.Y, range.Low))));
+                model.Series.Add(series);
+                first = false;
+            }
+        }
+    }
+
+    private static LabelRows BandLabels(LayoutPass pass, List<Band> bands, Axis xAxis)
+    {
+        var area = pass.PlotArea;
+        var placer = new LabelPlacer(area);
+        var boxes = new List<(OxyRect Box, string Text, Band Band)>();
+        var bottom = area.Top;
+        foreach (var band in bands)
+        {
+            var size = Labels.BoxSize(pass, band.Name);
+            var centre = (xAxis.Transform(band.Left) + xAxis.Transform(band.Right)) / 2;
+            var left = centre - size.Width / 2;
+            // Rows from the top down; a name too wide for its band moves to a lower row rather than cover another.
+            var rows = Enumerable.Range(0, 4)
+                .Select(row => Labels.Box(left, area.Top + PlotStyle.LabelGap / 2 + row * size.Height, size))
+                .ToList();
+            var box = placer.Place(rows);
+            boxes.Add((box, band.Name, band));
+            bottom = Math.Max(bottom, box.Bottom);
+        }
+
+        return new LabelRows(boxes, bottom + PlotStyle.LabelGap);
+    }
+
+    // The axis maximum that leaves the band of layer names above the highest value.
+    private static double Headroom(OxyRect area, (double Low, double High) range, double labelHeight, bool logarithmic)
+    {
+        var usable = Math.Max(area.Height - labelHeight, area.Height * 0.5);
+        var stretch = area.Height / usable;
+        if (logarithmic)
+        {
+            var decades = Math.Log10(range.High / range.Low);
+            return range.Low * Math.Pow(10, Math.Max(decades, 1) * stretch);
+        }
+
+        return range.Low + (range.High - range.Low) * stretch;
+    }
+
+    private sealed record Curve(
+        string Title, OxyColor Color, LineStyle Style, double Thickness, IReadOnlyList<IReadOnlyList<DataPoint>> Segments);
+
+    /// <summary>A layer, or the strip standing for the medium on a face, with its extent in depth units.</summary>
+    private sealed record Band(double Left, double Right, string Name, FaceCondition? Medium);
+
+    private sealed record LabelRows(List<(OxyRect Box, string Text, Band Band)> Boxes, double Bottom);
+}

@@ -1,0 +1,324 @@
+using Layers.Core.Domain;
+using Layers.Core.Results;
+using Layers.Core.Units;
+using OxyPlot;
+using OxyPlot.Annotations;
+using OxyPlot.Axes;
+using OxyPlot.Series;
+
+namespace Layers.Plotting;
+
+/// <summary>
+/// Mass transferred per contact area into each face medium against time. With one receiving compartment, a second
+/// scale on the right reads the same curve as the compartment's concentration; otherwise (two compartments, or a
+/// compartment that only gives mass) the compartments' concentrations get a panel of their own under the amounts.
+/// An optional limit is drawn as a dashed line with its label and the time each receiving medium reaches it.
+/// </summary>
+public static class TransferPlot
+{
+    private const string MassAxisKey = "mass";
+    private const string ConcentrationAxisKey = "concentration";
+
+    // Room above the highest value, as a fraction of the range.
+    private const double TopMargin = 0.08;
+
+    /// <summary>Builds the transfer plot.</summary>
+    /// <param name="result">A simulation result.</param>
+    /// <param name="options">Picture size, time axis choice and the optional limit.</param>
+    /// <returns>The plot model, ready for <see cref="PngRenderer.Render"/> at the same options.</returns>
+    public static PlotModel Create(SimulationResult result, PlotOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(options);
+        options.Validate();
+        var simulation = result.Case;
+        var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
+        var concentrationUnit = DisplayText.ConcentrationUnit(simulation.Display);
+        var time = TimeAxis.Create(result, options.LogTimeAxis);
+        var samples = time.Samples(result).ToList();
+        var media = Media(result, time.FirstSeconds, time.Unit, massUnit);
+        if (media.Count == 0)
+        {
+            return LayerHoldings(result, options, time, massUnit);
+        }
+
+        var model = PlotFrame.Create(
+            simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options), options);
+        model.Axes.Add(time.Axis);
+        var compartments = media.Where(medium => medium.Face is CompartmentFace).ToList();
+        var secondScale = compartments.Count == 1 && !compartments[0].Flipped;
+        var panel = compartments.Count > 0 && !secondScale;
+        var massAxis = PlotFrame.Linear(AxisPosition.Left, $"Transferred per contact area ({DisplayText.Unit(massUnit)})");
+        massAxis.Key = MassAxisKey;
+        model.Axes.Add(massAxis);
+        var (low, high) = Range(media.SelectMany(medium => medium.Points).Select(point => point.Y), options, massUnit);
+        massAxis.Minimum = low;
+        massAxis.Maximum = high;
+
+        for (var i = 0; i < media.Count; i++)
+        {
+            model.Series.Add(Line(media[i].Title, media[i].Points, i, MassAxisKey));
+        }
+
+        if (secondScale)
+        {
+            model.Axes.Add(ConcentrationScale(compartments[0], low, high, massUnit, concentrationUnit));
+        }
+        else if (panel)
+        {
+            massAxis.StartPosition = 0.42;
+            AddConcentrationPanel(model, media, samples, time.Unit, concentrationUnit);
+        }
+
+        if (options.LimitMassPerArea is { } limit)
+        {
+            AddLimit(model, options, massUnit.FromSi(limit), options.LimitLabel, massUnit);
+        }
+
+        return model;
+    }
+
+    private static List<Medium> Media(
+        SimulationResult result, double firstSeconds, UnitDefinition timeUnit, UnitDefinition massUnit)
+    {
+        var media = new List<Medium>();
+        var samples = result.TimeSeries;
+        foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            var face = result.Case.Face(side);
+            if (FaceText.MediumName(face) is not { } name)
+            {
+                continue;
+            }
+
+            var values = samples.Select(sample => (sample.TimeSeconds, Face: side == Side.Left ? sample.Left : sample.Right))
+                .Where(pair => pair.Face is not null)
+                .Select(pair => (Seconds: pair.TimeSeconds, Transferred: pair.Face!.TransferredIntoMediumPerArea))
+                .ToList();
+            // A medium that only gives mass (a donor) is drawn as the amount it gave, so that every curve rises.
+            var flipped = values.Count > 0
+                && values.All(value => value.Transferred <= 0)
+                && values.Any(value => value.Transferred < 0);
+            var sign = flipped ? -1 : 1;
+            var points = values
+                .Where(value => value.Seconds >= firstSeconds)
+                .Select(value => new DataPoint(timeUnit.FromSi(value.Seconds), massUnit.FromSi(sign * value.Transferred)))
+                .ToList();
+            var title = flipped ? $"out of {name} ({face.KindName})" : $"into {name} ({face.KindName})";
+            media.Add(new Medium(side, face, name, title, flipped, points, values));
+        }
+
+        return media;
+    }
+
+    private static (double Low, double High) Range(IEnumerable<double> values, PlotOptions options, UnitDefinition massUnit)
+    {
+        var list = values.ToList();
+        if (options.LimitMassPerArea is { } limit)
+        {
+            list.Add(massUnit.FromSi(limit));
+        }
+
+        var low = Math.Min(0, list.DefaultIfEmpty(0).Min());
+        var high = Math.Max(0, list.DefaultIfEmpty(0).Max());
+        if (high <= low)
+        {
+            high = low + 1;
+        }
+
+        return (low, high + (high - low) * TopMargin);
+    }
+
+    private static LineSeries Line(string title, IEnumerable<DataPoint> points, int index, string yAxisKey)
+    {
+        var series = new LineSeries
+        {
+            Title = title,
+            Color = PlotStyle.SeriesColor(index),
+            LineStyle = PlotStyle.SeriesLineStyle(index),
+            StrokeThickness = PlotStyle.SeriesThickness,
+            YAxisKey = yAxisKey,
+        };
+        series.Points.AddRange(points);
+        return series;
+    }
+
+    // A right-hand scale on which the amount curve of the one compartment reads as its concentration:
+    // c = c0 + m / (V / A) is linear in m, so the scale is the mass axis mapped through it.
+    private static LinearAxis ConcentrationScale(
+        Medium medium, double low, double high, UnitDefinition massUnit, UnitDefinition concentrationUnit)
+    {
+        var compartment = (CompartmentFace)medium.Face;
+        double Map(double mass) => concentrationUnit.FromSi(
+            compartment.InitialConcentrationKgPerCubicMeter + massUnit.ToSi(mass) / compartment.VolumePerAreaMeters);
+        var axis = PlotFrame.Linear(
+            AxisPosition.Right, $"Concentration in {medium.Name} ({DisplayText.Unit(concentrationUnit)})");
+        axis.Key = ConcentrationAxisKey;
+        axis.Minimum = Map(low);
+        axis.Maximum = Map(high);
+        axis.MajorGridlineStyle = LineStyle.None;
+        return axis;
+    }
+
+    private static void AddConcentrationPanel(
+        PlotModel model, List<Medium> media, List<StateSample> samples, UnitDefinition timeUnit, UnitDefinition concentrationUnit)
+    {
+        var axis = PlotFrame.Linear(AxisPosition.Left, $"Concentration ({DisplayText.Unit(concentrationUnit)})");
+        axis.Key = ConcentrationAxisKey;
+        axis.StartPosition = 0;
+        axis.EndPosition = 0.34;
+        axis.MinimumPadding = 0.05;
+        axis.MaximumPadding = 0.1;
+        model.Axes.Add(axis);
+        for (var i = 0; i < media.Count; i++)
+        {
+            if (media[i].Face is not CompartmentFace)
+            {
+                continue;
+            }
+
+            var side = media[i].Side;
+            var points = samples
+                .Select(sample => (sample.TimeSeconds, Face: side == Side.Left ? sample.Left : sample.Right))
+                .Where(pair => pair.Face is not null)
+                .Select(pair => new DataPoint(timeUnit.FromSi(pair.TimeSeconds), concentrationUnit.FromSi(pair.Face!.ConcentrationKgPerCubicMeter)));
+            var series = Line(media[i].Name, points, i, ConcentrationAxisKey);
+            series.RenderInLegend = false;
+            model.Series.Add(series);
+        }
+    }
+
+    // A dashed horizontal line with its label just above or below it, where no curve runs.
+    private static void AddLimit(PlotModel model, PlotOptions options, double value, string label, UnitDefinition massUnit)
+    {
+        model.Annotations.Add(new LineAnnotation
+        {
+            Type = LineAnnotationType.Horizontal,
+            Y = value,
+            YAxisKey = MassAxisKey,
+            Color = PlotStyle.Limit,
+            StrokeThickness = PlotStyle.ReferenceThickness * 1.25,
+            LineStyle = LineStyle.Dash,
+            Layer = AnnotationLayer.AboveSeries,
+        });
+        using var pass = LayoutPass.Run(model, options);
+        var xAxis = model.Axes.First(axis => axis.IsHorizontal());
+        var yAxis = model.Axes.First(axis => axis.Key == MassAxisKey);
+        var placer = new LabelPlacer(pass.PlotArea);
+        foreach (var series in model.Series.OfType<LineSeries>())
+        {
+            var seriesAxis = model.Axes.First(axis => axis.Key == series.YAxisKey);
+            placer.ReserveLine([.. series.Points.Select(point => new ScreenPoint(xAxis.Transform(point.X), seriesAxis.Transform(point.Y)))], 2);
+        }
+
+        var text = $"{label} {DisplayText.Quantity(value, massUnit)}";
+        var size = Labels.BoxSize(pass, text);
+        var area = pass.PlotArea;
+        var y = yAxis.Transform(value);
+        var gap = PlotStyle.LabelGap / 2;
+        var candidates = Enumerable.Range(0, 9)
+            .Select(step => area.Right - gap - size.Width - step * (area.Width - size.Width) / 8)
+            .SelectMany(left => new[] { Labels.Box(left, y - gap - size.Height, size), Labels.Box(left, y + gap, size) })
+            .ToList();
+        var box = placer.Place(candidates);
+        model.Annotations.Add(Labels.At(box, text, PlotStyle.Limit, xAxis, yAxis, PlotStyle.LabelBackground));
+    }
+
+    // With both faces closed nothing leaves the stack; what moves is the mass between layers, so that is drawn.
+    private static PlotModel LayerHoldings(SimulationResult result, PlotOptions options, TimeAxis time, UnitDefinition massUnit)
+    {
+        var layers = result.Case.Stack.Layers;
+        var model = PlotFrame.Create(
+            result.Case.Title,
+            ["Both faces closed, nothing leaves the stack: mass per area held by each layer"],
+            options);
+        model.Axes.Add(time.Axis);
+        var axis = PlotFrame.Linear(AxisPosition.Left, $"Held per area of stack ({DisplayText.Unit(massUnit)})");
+        axis.Key = MassAxisKey;
+        model.Axes.Add(axis);
+        var samples = time.Samples(result).ToList();
+        var (low, high) = Range(
+            samples.SelectMany(sample => sample.LayerMassPerArea).Select(massUnit.FromSi), options with { LimitMassPerArea = null }, massUnit);
+        axis.Minimum = low;
+        axis.Maximum = high;
+        for (var i = 0; i < layers.Count; i++)
+        {
+            var index = i;
+            model.Series.Add(Line(
+                $"in {layers[i].Name}",
+                samples.Select(sample => new DataPoint(time.Unit.FromSi(sample.TimeSeconds), massUnit.FromSi(sample.LayerMassPerArea[index]))),
+                i,
+                MassAxisKey));
+        }
+
+        return model;
+    }
+
+    private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options)
+    {
+        var (timeUnit, massUnit, concentrationUnit) = units;
+        yield return "Mass transferred per contact area into each face medium";
+        var end = result.TimeSeries[^1];
+        var finals = media.Where(medium => medium.Values.Count > 0).Select(medium =>
+        {
+            var face = medium.Side == Side.Left ? end.Left : end.Right;
+            var amount = DisplayText.Quantity(massUnit.FromSi(medium.Plotted(medium.Values[^1].Transferred)), massUnit);
+            var concentration = medium.Face is CompartmentFace && face is not null
+                ? $" ({DisplayText.Quantity(concentrationUnit.FromSi(face.ConcentrationKgPerCubicMeter), concentrationUnit)})"
+                : string.Empty;
+            return $"{(medium.Flipped ? "out of" : "into")} {medium.Name} {amount}{concentration}";
+        }).ToList();
+        if (finals.Count > 0)
+        {
+            yield return $"after {DisplayText.Time(end.TimeSeconds)}: " + string.Join(";  ", finals);
+        }
+
+        if (options.LimitMassPerArea is { } limit)
+        {
+            yield return LimitText(media, limit, options.LimitLabel, units);
+        }
+    }
+
+    private static string LimitText(List<Medium> media, double limit, string label, Units units)
+    {
+        // A limit applies to what a medium receives: a donor's loss is not compared with it.
+        var crossings = media.Where(medium => !medium.Flipped)
+            .Select(medium => (medium.Name, Time: Crossing(medium, limit)))
+            .Where(crossing => crossing.Time is not null)
+            .Select(crossing => $"{crossing.Name} reaches it at {DisplayText.Time(crossing.Time!.Value)}")
+            .ToList();
+        var head = $"{label} {DisplayText.Quantity(units.MassPerArea.FromSi(limit), units.MassPerArea)}: ";
+        return head + (crossings.Count > 0 ? string.Join("; ", crossings) : "not reached within the duration");
+    }
+
+    // The first time, s, by linear interpolation between output times, at which the plotted amount reaches a level.
+    private static double? Crossing(Medium medium, double level)
+    {
+        var points = medium.Values.Select(value => (value.Seconds, Amount: medium.Plotted(value.Transferred))).ToList();
+        for (var i = 1; i < points.Count; i++)
+        {
+            if (points[i - 1].Amount < level && points[i].Amount >= level)
+            {
+                var fraction = (level - points[i - 1].Amount) / (points[i].Amount - points[i - 1].Amount);
+                return points[i - 1].Seconds + fraction * (points[i].Seconds - points[i - 1].Seconds);
+            }
+        }
+
+        return points.Count > 0 && points[0].Amount >= level ? points[0].Seconds : null;
+    }
+
+    private sealed record Units(UnitDefinition Time, UnitDefinition MassPerArea, UnitDefinition Concentration);
+
+    private sealed record Medium(
+        Side Side,
+        FaceCondition Face,
+        string Name,
+        string Title,
+        bool Flipped,
+        List<DataPoint> Points,
+        List<(double Seconds, double Transferred)> Values)
+    {
+        /// <summary>The amount plotted, kg/m2: what the medium received, or what it gave for a donor.</summary>
+        public double Plotted(double transferred) => Flipped ? -transferred : transferred;
+    }
+}

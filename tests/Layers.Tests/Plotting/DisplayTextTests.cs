@@ -1,0 +1,83 @@
+using Layers.Core.Units;
+using Layers.Plotting;
+using Layers.Tests.Units;
+
+namespace Layers.Tests.Plotting;
+
+/// <summary>How the plots write units, times and numbers (common practice, no source).</summary>
+public sealed class DisplayTextTests
+{
+    [Theory]
+    [InlineData("um", "\u00B5m")]
+    [InlineData("mg/dm2", "mg/dm\u00B2")]
+    [InlineData("ug/cm2", "\u00B5g/cm\u00B2")]
+    [InlineData("kg/m3", "kg/m\u00B3")]
+    [InlineData("mg/L", "mg/L")]
+    [InlineData("uL", "\u00B5L")]
+    [InlineData("degC", "\u00B0C")]
+    [InlineData("min", "min")]
+    public void Units_are_written_with_micro_sign_and_superscripts(string symbol, string expected)
+    {
+        Assert.Equal(expected, DisplayText.Unit(symbol));
+    }
+
+    [Theory]
+    [InlineData(65e-6, "um")]
+    [InlineData(1.999e-3, "um")]
+    [InlineData(2e-3, "mm")]
+    [InlineData(0.05, "mm")]
+    public void Depth_is_in_micrometres_below_two_millimetres_and_millimetres_above(double thickness, string unit)
+    {
+        Assert.Equal(unit, DisplayText.DepthUnit(thickness).Symbol);
+    }
+
+    [Theory]
+    [InlineData(60, "s")]
+    [InlineData(600, "min")]
+    [InlineData(7200, "min")]
+    [InlineData(7201, "h")]
+    [InlineData(3 * 86400, "h")]
+    [InlineData(10 * 86400, "d")]
+    public void Time_axes_use_a_unit_that_suits_the_duration(double duration, string unit)
+    {
+        Assert.Equal(unit, DisplayText.TimeAxisUnit(duration).Symbol);
+    }
+
+    [Theory]
+    [InlineData(7200, "2\u00A0h")]
+    [InlineData(86400, "1\u00A0d")]
+    [InlineData(129600, "1.5\u00A0d")]
+    [InlineData(90, "1.5\u00A0min")]
+    [InlineData(0.5, "0.5\u00A0s")]
+    [InlineData(6538.6, "1.82\u00A0h")]
+    public void Times_are_written_in_the_largest_unit_they_fill(double seconds, string expected)
+    {
+        Assert.Equal(expected, DisplayText.Time(seconds));
+    }
+
+    [Theory]
+    [InlineData(0.458, "0.458")]
+    [InlineData(1115, "1120")]
+    [InlineData(99940, "99900")]
+    [InlineData(99960, "10\u2075")]
+    [InlineData(-0.0123456, "-0.0123")]
+    [InlineData(2.5e-5, "2.5\u00D710\u207B\u2075")]
+    [InlineData(1e6, "10\u2076")]
+    [InlineData(0, "0")]
+    public void Numbers_keep_three_significant_digits_in_plain_or_power_of_ten_notation(double value, string expected)
+    {
+        using var _ = new CultureScope(CultureScope.German());
+        Assert.Equal(expected, DisplayText.Number(value));
+    }
+
+    [Theory]
+    [InlineData(0.30000000000000004, "0.3")]
+    [InlineData(1e-5, "10\u207B\u2075")]
+    [InlineData(2e-5, "2\u00D710\u207B\u2075")]
+    [InlineData(100000, "10\u2075")]
+    [InlineData(-0.5, "-0.5")]
+    public void Tick_labels_drop_rounding_noise(double value, string expected)
+    {
+        Assert.Equal(expected, DisplayText.Tick(value));
+    }
+}
