@@ -1,6 +1,7 @@
 using System.Text;
 using Layers.Core.Reports;
 using Layers.Core.Results;
+using Layers.Plotting;
 
 namespace Layers.Cli.Commands;
 
@@ -11,7 +12,7 @@ internal static class CaseFiles
 
     public static Dictionary<string, byte[]> Build(SimulationResult result, RunSettings settings)
     {
-        var pictures = new Dictionary<string, byte[]>();
+        var pictures = settings.Plots ? PlotSet.Render(result, settings.PlotOptions) : new Dictionary<string, byte[]>();
         var files = new Dictionary<string, byte[]>
         {
             [Summary] = Encoding.UTF8.GetBytes(SummaryJson.Write(result, settings.CasePath)),

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
+using Layers.Plotting;
 
 namespace Layers.Cli.Commands;
 
@@ -20,16 +21,42 @@ internal static class RunCommand
         };
         var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
         var json = new Option<bool>("--json") { Description = "Print summary.json to stdout instead of the tables, for scripts." };
+        var noPlots = new Option<bool>("--no-plots") { Description = "Skip the PNG plots (faster; report.html then has no pictures)." };
+        var width = new Option<int>("--plot-width") { Description = "Width of the plots in pixels.", DefaultValueFactory = _ => 1200 };
+        var height = new Option<int>("--plot-height") { Description = "Height of the plots in pixels.", DefaultValueFactory = _ => 800 };
+        var logConcentration = new Option<bool>("--log-concentration") { Description = "Logarithmic concentration axis in profile.png." };
+        var linearTime = new Option<bool>("--linear-time") { Description = "Linear time axis in transfer.png and equilibrium.png (default logarithmic)." };
         var command = new Command("run", "Solve a case and write its results.");
         command.Arguments.Add(caseFile);
         command.Options.Add(outputRoot);
         command.Options.Add(quiet);
         command.Options.Add(json);
+        command.Options.Add(noPlots);
+        command.Options.Add(width);
+        command.Options.Add(height);
+        command.Options.Add(logConcentration);
+        command.Options.Add(linearTime);
+        foreach (var size in new[] { width, height })
+        {
+            size.Validators.Add(result =>
+            {
+                if (result.GetValueOrDefault<int>() is < 200 or > 10000)
+                {
+                    result.AddError($"{size.Name} must be from 200 to 10000 pixels; got {result.GetValueOrDefault<int>()}");
+                }
+            });
+        }
         command.SetAction(parseResult => Execute(
             new RunSettings(parseResult.GetValue(caseFile)!, parseResult.GetValue(outputRoot)!)
             {
                 Quiet = parseResult.GetValue(quiet),
                 Json = parseResult.GetValue(json),
+                Plots = !parseResult.GetValue(noPlots),
+                PlotOptions = new PlotOptions(
+                    parseResult.GetValue(width),
+                    parseResult.GetValue(height),
+                    parseResult.GetValue(logConcentration),
+                    !parseResult.GetValue(linearTime)),
             },
             output,
             error));

@@ -1,3 +1,5 @@
+using Layers.Plotting;
+
 namespace Layers.Cli.Commands;
 
 /// <summary>What <c>layers run</c> was asked to do.</summary>
@@ -10,4 +12,10 @@ internal sealed record RunSettings(string CasePath, string OutputRoot)
 
     /// <summary>Print summary.json on stdout instead of tables.</summary>
     public bool Json { get; init; }
+
+    /// <summary>Write the PNG plots (and embed them in report.html).</summary>
+    public bool Plots { get; init; } = true;
+
+    /// <summary>Size and axis choices of the plots.</summary>
+    public PlotOptions PlotOptions { get; init; } = new();
 }

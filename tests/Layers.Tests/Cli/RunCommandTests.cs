@@ -11,7 +11,8 @@ namespace Layers.Tests.Cli;
 public sealed class RunCommandTests
 {
     private const string CaseName = "laminate-fatty-food";
-    private static readonly string[] ResultFiles = ["profiles.csv", "report.html", "summary.json", "timeseries.csv"];
+    private static readonly string[] ResultFiles =
+        ["equilibrium.png", "profile.png", "profiles.csv", "report.html", "summary.json", "timeseries.csv", "transfer.png"];
 
     private static string Demo => RepoRoot.File("cases", CaseName + ".json");
 
