@@ -1,0 +1,14 @@
+#!/usr/bin/env bash
+# Regenerates the pictures of docs/guide.md from the demo cases: bash docs/guide/make-images.sh
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+out=$(mktemp -d)
+trap 'rm -rf "$out"' EXIT
+for demo in laminate-fatty-food patch-on-skin diffusion-cell-membrane two-liquid-layers membrane-time-lag; do
+  # Delivery through skin and a time-lag experiment read best on a linear time axis.
+  case $demo in patch-on-skin|membrane-time-lag) axis=--linear-time ;; *) axis= ;; esac
+  dotnet run --project src/Layers.Cli -- run "cases/$demo.json" --out "$out" --quiet --plot-width 1000 --plot-height 640 $axis
+  for plot in profile transfer equilibrium; do
+    cp "$out/$demo/$plot.png" "docs/guide/$demo-$plot.png"
+  done
+done
