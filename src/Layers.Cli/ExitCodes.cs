@@ -17,4 +17,7 @@ public static class ExitCodes
 
     /// <summary>The results could not be written.</summary>
     public const int OutputFailed = 4;
+
+    /// <summary><c>layers verify</c>: at least one benchmark is outside its tolerance.</summary>
+    public const int VerificationFailed = 5;
 }

@@ -15,6 +15,7 @@ public static class CliApp
             CautionText.Paragraph);
         root.Subcommands.Add(RunCommand.Create(output, error));
         root.Subcommands.Add(CheckCommand.Create(output, error));
+        root.Subcommands.Add(VerifyCommand.Create(output, error));
         return root;
     }
 }

@@ -1,0 +1,178 @@
+using Layers.Core.Analytics;
+using Layers.Core.Domain;
+using Layers.Core.Results;
+using Layers.Core.Simulation;
+
+namespace Layers.Core.Verification;
+
+/// <summary>
+/// The analytic benchmarks the tool runs on itself (<c>layers verify</c>), each at default accuracy against a
+/// published solution. The same solutions check the solver in the test suite.
+/// </summary>
+public static class VerificationSuite
+{
+    /// <summary>Relative tolerance of every benchmark: the accuracy the tool promises at its defaults.</summary>
+    public const double DefaultTolerance = 1e-3;
+
+    private const string Crank = "Crank, The Mathematics of Diffusion, 2nd ed. (1975)";
+
+    /// <summary>Runs every benchmark, in a fixed order.</summary>
+    public static IReadOnlyList<BenchmarkResult> Run(CancellationToken cancellation = default)
+    {
+        var results = new List<BenchmarkResult>();
+        results.AddRange(PlaneSheet(cancellation));
+        foreach (var (alpha, k) in new[] { (0.1, 1000.0), (1.0, 1.0), (10.0, 1.0) })
+        {
+            results.Add(LimitedVolume(alpha, k, cancellation));
+        }
+
+        results.AddRange(Membrane(cancellation));
+        results.Add(SemiInfiniteMedia(cancellation));
+        results.Add(SteadyThreeLayers(cancellation));
+        results.Add(ClosedEquilibrium(cancellation));
+        results.Add(Laminate(cancellation));
+        return results;
+    }
+
+    private static IEnumerable<BenchmarkResult> PlaneSheet(CancellationToken cancellation)
+    {
+        const double thickness = 100e-6, diffusivity = 1e-13, c0 = 900;
+        var scale = thickness * thickness / diffusivity;
+        var result = Simulator.Run(Case(new ClosedFace(), new BathFace("sink", 0, 1, null), 0.5 * scale, [Layer("sheet", thickness, diffusivity, 1, c0)]), cancellation);
+        double Released(StateSample sample) => sample.Right!.TransferredIntoMediumPerArea / (c0 * thickness);
+        var curve = Curve(result, "D t / L^2 [-]", "M_t / M_0 [-]", scale, Released, t => PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, t));
+        yield return new BenchmarkResult(
+            "plane sheet into a perfect sink", $"{Crank}, eq. 4.18", "fraction released at D t/L^2 = 0.5",
+            PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, 0.5 * scale), Released(result.Reports[^1].Sample), DefaultTolerance, curve);
+        var half = Bisect(t => PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, t) - 0.5, 0, scale);
+        yield return new BenchmarkResult(
+            "plane sheet into a perfect sink", $"{Crank}, eq. 4.18 solved for 50 %", "time to release half, s",
+            half, result.FinalState.System.Half!.Value, DefaultTolerance);
+    }
+
+    private static BenchmarkResult LimitedVolume(double alpha, double kSheet, CancellationToken cancellation)
+    {
+        const double thickness = 50e-6, diffusivity = 4e-14, c0 = 920;
+        var volumePerArea = alpha * kSheet * thickness;
+        var scale = thickness * thickness / diffusivity;
+        var simulation = Case(new ClosedFace(), new CompartmentFace("solution", volumePerArea, 1, 1, 0, null), 0.3 * scale, [Layer("sheet", thickness, diffusivity, kSheet, c0)]);
+        var result = Simulator.Run(simulation, cancellation);
+        double Analytic(double t) => PlaneSheetIntoLimitedVolume.TransferredMassPerArea(diffusivity, thickness, c0, volumePerArea, kSheet, t);
+        var curve = Curve(result, "D t / L^2 [-]", "mass in solution [kg/m2]", scale, sample => sample.Right!.TransferredIntoMediumPerArea, Analytic);
+        return new BenchmarkResult(
+            FormattableString.Invariant($"plane sheet in a limited volume, alpha {alpha}, K {kSheet}"),
+            $"{Crank}, eq. 4.37 (from memory), roots of tan q = -alpha q",
+            "mass in the solution at D t/L^2 = 0.3, kg/m2",
+            Analytic(0.3 * scale), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, DefaultTolerance, curve);
+    }
+
+    private static IEnumerable<BenchmarkResult> Membrane(CancellationToken cancellation)
+    {
+        const double thickness = 20e-6, diffusivity = 3e-13, k = 4, donor = 5;
+        var scale = thickness * thickness / diffusivity;
+        var result = Simulator.Run(Case(new BathFace("source", donor, 1, null), new BathFace("sink", 0, 1, null), 2 * scale, [Layer("membrane", thickness, diffusivity, k, 0)]), cancellation);
+        double Analytic(double t) => MembraneTimeLag.CumulativeMassPerArea(diffusivity, thickness, k, donor, t);
+        var curve = Curve(result, "D t / L^2 [-]", "Q [kg/m2]", scale, sample => sample.Right!.TransferredIntoMediumPerArea, Analytic);
+        yield return new BenchmarkResult(
+            "membrane between a source and a sink", $"Daynes-Barrer; {Crank}, eq. 4.24a (from memory)", "cumulative amount Q at D t/L^2 = 2, kg/m2",
+            Analytic(2 * scale), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, DefaultTolerance, curve);
+        yield return new BenchmarkResult(
+            "membrane between a source and a sink", $"Daynes-Barrer; {Crank}, eq. 4.24c (from memory)", "lag time L^2/(6D), s",
+            MembraneTimeLag.LagTimeSeconds(diffusivity, thickness), result.Permeation!.LagTimeSeconds ?? double.NaN, DefaultTolerance);
+    }
+
+    private static BenchmarkResult SemiInfiniteMedia(CancellationToken cancellation)
+    {
+        const double d1 = 1e-13, d2 = 4e-13, k = 5, c0 = 300, thickness = 400e-6;
+        var time = Math.Pow(thickness / 8, 2) / d2;
+        var result = Simulator.Run(Case(new ClosedFace(), new ClosedFace(), time, [Layer("first", thickness, d1, k, c0), Layer("second", thickness, d2, 1, 0)]), cancellation);
+        return new BenchmarkResult(
+            "two semi-infinite media with a partition coefficient", $"{Crank}, ch. 3, composite media (section from memory); Carslaw and Jaeger, Conduction of Heat in Solids, 2nd ed., ch. 2",
+            "mass transferred into the second medium, kg/m2",
+            TwoSemiInfiniteMedia.MassPerAreaTransferred(d1, d2, k, c0, time), result.Reports[^1].Sample.LayerMassPerArea[1], DefaultTolerance);
+    }
+
+    private static BenchmarkResult SteadyThreeLayers(CancellationToken cancellation)
+    {
+        var layers = new[] { Layer("outer", 30e-6, 2e-12, 0.05, 0), Layer("core", 200e-6, 5e-11, 20, 0), Layer("inner", 10e-6, 1e-13, 3, 0) };
+        double kLeft = 1, kRight = 0.5, filmLeft = 2e-6, filmRight = 5e-7, cLeft = 8, cRight = 0.5;
+        var total = (1 / (filmLeft * kLeft)) + (1 / (filmRight * kRight)) + layers.Sum(layer => layer.ResistanceSecondsPerMeter);
+        var storage = layers.Sum(layer => layer.ThicknessMeters * layer.PartitionCoefficient);
+        var simulation = Case(new BathFace("left", cLeft, kLeft, filmLeft), new BathFace("right", cRight, kRight, filmRight), 40 * total * storage, layers);
+        var result = Simulator.Run(simulation, cancellation);
+        return new BenchmarkResult(
+            "three layers with films between two baths, steady state",
+            $"series-resistance (two-resistance) law; {Crank}, ch. 12 (section from memory); Cussler, Diffusion, 3rd ed., ch. 13",
+            "steady flux, kg/(m2 s)",
+            ((cLeft / kLeft) - (cRight / kRight)) / total, result.Permeation!.FluxAtEndKgPerSquareMeterSecond, DefaultTolerance);
+    }
+
+    private static BenchmarkResult ClosedEquilibrium(CancellationToken cancellation)
+    {
+        var layers = new[] { Layer("a", 20e-6, 1e-12, 0.01, 0), Layer("b", 60e-6, 3e-13, 1, 500), Layer("c", 5e-6, 1e-14, 100, 20) };
+        var compartment = new CompartmentFace("medium", 2e-3, 1, 0.5, 1, null);
+        var capacity = layers.Sum(layer => layer.ThicknessMeters * layer.PartitionCoefficient) + (2e-3 * 0.5);
+        var mass = layers.Sum(layer => layer.InitialMassPerArea) + compartment.InitialMassPerArea;
+        var slowest = layers.Max(layer => layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond);
+        var result = Simulator.Run(Case(new ClosedFace(), compartment, 40 * slowest, layers), cancellation);
+        return new BenchmarkResult(
+            "closed system of three layers and a compartment",
+            $"partition equilibrium with conservation of mass; {Crank}, eq. 4.37 as t -> infinity (from memory)",
+            "compartment concentration at equilibrium, kg/m3",
+            0.5 * mass / capacity, result.Reports[^1].Sample.Right!.ConcentrationKgPerCubicMeter, DefaultTolerance);
+    }
+
+    private static BenchmarkResult Laminate(CancellationToken cancellation)
+    {
+        var layers = new[] { Layer("first", 30e-6, 1e-12, 1, 0), Layer("second", 60e-6, 1e-13, 10, 0) };
+        var expected = LaminateTimeLag.Seconds(new LayerStack(layers));
+        var result = Simulator.Run(Case(new BathFace("source", 1, 1, null), new BathFace("sink", 0, 1, null), 3 * expected, layers), cancellation);
+        return new BenchmarkResult(
+            "two-layer laminate between a source and a sink",
+            "Frisch, J. Phys. Chem. 61 (1957) 93, time-lag integral (from memory); " + Crank + ", ch. 12, laminates",
+            "lag time, s",
+            expected, result.Permeation!.LagTimeSeconds ?? double.NaN, DefaultTolerance);
+    }
+
+    private static BenchmarkCurve Curve(SimulationResult result, string xLabel, string yLabel, double timeScale, Func<StateSample, double> computed, Func<double, double> analytic)
+    {
+        var samples = result.TimeSeries.Where(sample => sample.TimeSeconds > 0).ToArray();
+        return new BenchmarkCurve(
+            xLabel,
+            yLabel,
+            samples.Select(sample => sample.TimeSeconds / timeScale).ToArray(),
+            samples.Select(computed).ToArray(),
+            samples.Select(sample => analytic(sample.TimeSeconds)).ToArray());
+    }
+
+    private static double Bisect(Func<double, double> function, double low, double high)
+    {
+        for (var i = 0; i < 200; i++)
+        {
+            var middle = 0.5 * (low + high);
+            if (function(middle) < 0)
+            {
+                low = middle;
+            }
+            else
+            {
+                high = middle;
+            }
+        }
+
+        return 0.5 * (low + high);
+    }
+
+    private static Layer Layer(string name, double thickness, double diffusivity, double k, double c0)
+        => new(name, thickness, diffusivity, k, c0);
+
+    private static SimulationCase Case(FaceCondition left, FaceCondition right, double duration, Layer[] layers) => new()
+    {
+        Title = "verification",
+        Stack = new LayerStack(layers),
+        Left = left,
+        Right = right,
+        DurationSeconds = duration,
+        ReportTimesSeconds = [duration],
+    };
+}

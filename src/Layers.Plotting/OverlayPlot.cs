@@ -1,0 +1,50 @@
+using Layers.Core.Verification;
+using OxyPlot;
+using OxyPlot.Axes;
+using OxyPlot.Series;
+
+namespace Layers.Plotting;
+
+/// <summary>
+/// A verification benchmark's computed curve over its analytic reference: the reference as a solid line, the
+/// solver's values as markers, so agreement is seen at a glance and any departure stands out.
+/// </summary>
+public static class OverlayPlot
+{
+    /// <summary>The plot of one benchmark curve.</summary>
+    public static PlotModel Create(BenchmarkResult benchmark, BenchmarkCurve curve, PlotOptions options)
+    {
+        var model = PlotFrame.Create(benchmark.Name, [benchmark.Source], options);
+        model.Axes.Add(PlotFrame.Logarithmic(AxisPosition.Bottom, curve.XLabel));
+        model.Axes.Add(PlotFrame.Linear(AxisPosition.Left, curve.YLabel));
+        var analytic = new LineSeries
+        {
+            Title = "analytic",
+            Color = PlotStyle.Reference,
+            StrokeThickness = PlotStyle.SeriesThickness,
+        };
+        var computed = new ScatterSeries
+        {
+            Title = "computed (default accuracy)",
+            MarkerType = MarkerType.Circle,
+            MarkerSize = PlotStyle.MarkerSize,
+            MarkerFill = PlotStyle.SeriesColor(1),
+        };
+        for (var i = 0; i < curve.X.Count; i++)
+        {
+            analytic.Points.Add(new DataPoint(curve.X[i], curve.Analytic[i]));
+            if (i % 4 == 0)
+            {
+                computed.Points.Add(new ScatterPoint(curve.X[i], curve.Computed[i]));
+            }
+        }
+
+        model.Series.Add(analytic);
+        model.Series.Add(computed);
+        return model;
+    }
+
+    /// <summary>The PNG bytes of one benchmark curve.</summary>
+    public static byte[] Render(BenchmarkResult benchmark, BenchmarkCurve curve, PlotOptions options)
+        => PngRenderer.Render(Create(benchmark, curve, options), options);
+}
