@@ -1,6 +1,8 @@
 using Layers.Core.Analytics;
 using MathNet.Numerics;
 
+using Layers.Tests.TestSupport;
+
 namespace Layers.Tests.Analytics;
 
 public sealed class ErrorFunctionIntegralsTests
@@ -10,7 +12,7 @@ public sealed class ErrorFunctionIntegralsTests
     {
         // Abramowitz and Stegun (1964), ch. 7, i^n erfc(0) = 1 / (2^n Gamma(1 + n/2)) (section 7.2, from memory);
         // n = 1 gives 1/sqrt(pi).
-        AnalyticAssert.RelativelyClose(
+        Tolerance.Relative(
             1 / Math.Sqrt(Math.PI), ErrorFunctionIntegrals.IntegralErfc(0), 1e-15, "i erfc(0)");
     }
 
@@ -27,7 +29,7 @@ public sealed class ErrorFunctionIntegralsTests
         // Abramowitz and Stegun (1964), ch. 7 (section 7.2, from memory): i erfc(z) = integral from z to infinity
         // of erfc; erfc(z + 12) is below 1e-60 of erfc(z) here, so the upper limit z + 12 loses nothing.
         double integral = Integrate.OnClosedInterval(SpecialFunctions.Erfc, z, z + 12, 1e-13 * expected);
-        AnalyticAssert.RelativelyClose(integral, expected, 1e-11, "i erfc against the integral of erfc");
+        Tolerance.Relative(integral, expected, 1e-11, "i erfc against the integral of erfc");
     }
 
     [Theory]
@@ -41,7 +43,7 @@ public sealed class ErrorFunctionIntegralsTests
         // Abramowitz and Stegun (1964), ch. 7: exp(z^2) erfc(z); below z = 26.5 both factors are normal doubles,
         // so the product is a fair check of the asymptotic branch used from z = 25 on.
         double definition = Math.Exp(z * z) * SpecialFunctions.Erfc(z);
-        AnalyticAssert.RelativelyClose(definition, ErrorFunctionIntegrals.ScaledErfc(z), 1e-12, "erfcx");
+        Tolerance.Relative(definition, ErrorFunctionIntegrals.ScaledErfc(z), 1e-12, "erfcx");
     }
 
     [Fact]
@@ -52,7 +54,7 @@ public sealed class ErrorFunctionIntegralsTests
         // Abramowitz and Stegun (1964), ch. 7, eq. 7.1.23 (from memory): exp(z^2) erfc(z) ~ 1/(z sqrt(pi)) with a
         // relative correction -1/(2 z^2).
         double leading = 1 / (z * Math.Sqrt(Math.PI)) * (1 - 1 / (2 * z * z));
-        AnalyticAssert.RelativelyClose(leading, ErrorFunctionIntegrals.ScaledErfc(z), 1e-15, "erfcx(1e4)");
+        Tolerance.Relative(leading, ErrorFunctionIntegrals.ScaledErfc(z), 1e-15, "erfcx(1e4)");
     }
 
     [Theory]
@@ -64,7 +66,7 @@ public sealed class ErrorFunctionIntegralsTests
     {
         // Abramowitz and Stegun (1964), ch. 7: 1 - exp(z^2) erfc(z), evaluated directly where it does not cancel.
         double definition = 1 - Math.Exp(z * z) * SpecialFunctions.Erfc(z);
-        AnalyticAssert.RelativelyClose(
+        Tolerance.Relative(
             definition, ErrorFunctionIntegrals.OneMinusScaledErfc(z), 1e-13, "1 - erfcx");
     }
 
@@ -76,6 +78,6 @@ public sealed class ErrorFunctionIntegralsTests
         // Abramowitz and Stegun (1964), ch. 7, eq. 7.1.6 (from memory), series of erfc times that of exp(z^2):
         // 1 - exp(z^2) erfc(z) = 2 z / sqrt(pi) - z^2 + O(z^3).
         double leading = 2 * z / Math.Sqrt(Math.PI) - z * z;
-        AnalyticAssert.RelativelyClose(leading, ErrorFunctionIntegrals.OneMinusScaledErfc(z), 1e-15, "1 - erfcx(1e-9)");
+        Tolerance.Relative(leading, ErrorFunctionIntegrals.OneMinusScaledErfc(z), 1e-15, "1 - erfcx(1e-9)");
     }
 }

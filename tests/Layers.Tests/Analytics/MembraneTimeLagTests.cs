@@ -1,5 +1,7 @@
 using Layers.Core.Analytics;
 
+using Layers.Tests.TestSupport;
+
 namespace Layers.Tests.Analytics;
 
 public sealed class MembraneTimeLagTests
@@ -24,7 +26,7 @@ public sealed class MembraneTimeLagTests
 
         // Crank (1975), The Mathematics of Diffusion, ch. 4, eq. 4.24a (from memory), against its image-sum form
         // built with the method of images that Crank uses for eq. 4.19: two forms of one solution.
-        AnalyticAssert.AbsolutelyClose(longTime, shortTime, 1e-15, "eq. 4.24a against the image sum");
+        Tolerance.Absolute(longTime, shortTime, 1e-15, "eq. 4.24a against the image sum");
     }
 
     [Theory]
@@ -39,7 +41,7 @@ public sealed class MembraneTimeLagTests
 
         // Crank (1975), ch. 4, eq. 4.24b (from memory); Daynes (1920), Barrer (1939): the transient terms of
         // eq. 4.24a have fallen below exp(-pi^2 tau) < 3e-9 of L C1.
-        AnalyticAssert.AbsolutelyClose(
+        Tolerance.Absolute(
             asymptote, q, 3e-9 * ThicknessMeters * PartitionCoefficient * DonorConcentration, "Q_t");
     }
 
@@ -55,13 +57,13 @@ public sealed class MembraneTimeLagTests
 
         // Crank (1975), ch. 4, eqs. 4.24b and 4.24c (from memory); Daynes (1920), Barrer (1939): the late
         // straight line has slope D C1 / L and meets the time axis at L^2 / (6 D).
-        AnalyticAssert.RelativelyClose(
+        Tolerance.Relative(
             MembraneTimeLag.SteadyFluxKgPerSquareMeterSecond(
                 Diffusivity, ThicknessMeters, PartitionCoefficient, DonorConcentration),
             slope,
             1e-12,
             "steady flux");
-        AnalyticAssert.RelativelyClose(
+        Tolerance.Relative(
             MembraneTimeLag.LagTimeSeconds(Diffusivity, ThicknessMeters), intercept, 1e-10, "time lag");
     }
 
@@ -98,7 +100,7 @@ public sealed class MembraneTimeLagTests
         // Crank (1975), ch. 4, eq. 4.24a (from memory) at t = 0: -1/6 - (2/pi^2) sum (-1)^n / n^2 = 0 because
         // sum_{n>=1} (-1)^(n+1) / n^2 = pi^2 / 12 (Abramowitz and Stegun 1964, ch. 23, from memory). The
         // Fourier form cannot be summed at t = 0, so this checks its continuity: tiny tau gives nearly zero.
-        AnalyticAssert.AbsolutelyClose(0, MembraneTimeLag.ScaledLongTime(1e-4), 1e-15, "eq. 4.24a near t = 0");
+        Tolerance.Absolute(0, MembraneTimeLag.ScaledLongTime(1e-4), 1e-15, "eq. 4.24a near t = 0");
     }
 
     [Fact]

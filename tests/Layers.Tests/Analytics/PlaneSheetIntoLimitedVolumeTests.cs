@@ -1,5 +1,7 @@
 using Layers.Core.Analytics;
 
+using Layers.Tests.TestSupport;
+
 namespace Layers.Tests.Analytics;
 
 public sealed class PlaneSheetIntoLimitedVolumeTests
@@ -36,7 +38,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
             // resolve 1e-12, so there four units in the last place of q are allowed instead.
             double residual = (Math.Sin(q) + alpha * q * Math.Cos(q)) / Math.Sqrt(1 + alpha * alpha * q * q);
             double tolerance = Math.Max(1e-12, 4 * (Math.BitIncrement(q) - q));
-            AnalyticAssert.AbsolutelyClose(0, residual, tolerance, "normalised residual of tan q = -alpha q");
+            Tolerance.Absolute(0, residual, tolerance, "normalised residual of tan q = -alpha q");
         }
     }
 
@@ -47,10 +49,10 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
 
         // Abramowitz and Stegun (1964), Handbook of Mathematical Functions, ch. 4, table of solutions of
         // tan x = lambda x, at lambda = -1 (table number and values from memory, to the four decimals quoted).
-        AnalyticAssert.AbsolutelyClose(2.0288, roots[0], 1e-4, "q_1");
-        AnalyticAssert.AbsolutelyClose(4.9132, roots[1], 1e-4, "q_2");
-        AnalyticAssert.AbsolutelyClose(7.9787, roots[2], 1e-4, "q_3");
-        AnalyticAssert.AbsolutelyClose(11.0855, roots[3], 1e-4, "q_4");
+        Tolerance.Absolute(2.0288, roots[0], 1e-4, "q_1");
+        Tolerance.Absolute(4.9132, roots[1], 1e-4, "q_2");
+        Tolerance.Absolute(7.9787, roots[2], 1e-4, "q_3");
+        Tolerance.Absolute(11.0855, roots[3], 1e-4, "q_4");
     }
 
     [Fact]
@@ -61,7 +63,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
         {
             // Crank (1975), ch. 4, eq. 4.37 (from memory): as alpha tends to infinity tan q = -alpha q is met at
             // the poles (n - 1/2) pi, the eigenvalues of the sink problem, eq. 4.18 with (2n+1) pi / 2.
-            AnalyticAssert.AbsolutelyClose((i + 0.5) * Math.PI, roots[i], 1e-8, "root at alpha = 1e9");
+            Tolerance.Absolute((i + 0.5) * Math.PI, roots[i], 1e-8, "root at alpha = 1e9");
         }
     }
 
@@ -80,7 +82,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
 
             // Crank (1975), ch. 4, eq. 4.37 against eq. 4.38 (both from memory): the short-time form neglects
             // terms of order exp(-1/tau) < 1e-21 here.
-            AnalyticAssert.AbsolutelyClose(series, shortTime, 1e-12, "eq. 4.37 against eq. 4.38");
+            Tolerance.Absolute(series, shortTime, 1e-12, "eq. 4.37 against eq. 4.38");
         }
     }
 
@@ -98,7 +100,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
 
         // Crank (1975), ch. 4: eq. 4.37 tends to eq. 4.18 as alpha tends to infinity (from memory); the gap is
         // of order 1/alpha.
-        AnalyticAssert.AbsolutelyClose(sink, limitedVolume, 1e-5, "alpha = 1e6 against the sink");
+        Tolerance.Absolute(sink, limitedVolume, 1e-5, "alpha = 1e6 against the sink");
     }
 
     [Theory]
@@ -117,7 +119,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
             // while the solution is nearly empty the sheet sees a sink. The relative gap is about
             // sqrt(pi tau) / (2 alpha), the next term of eq. 4.38 (from memory).
             double gap = Math.Sqrt(Math.PI * tau) / (2 * alpha);
-            AnalyticAssert.RelativelyClose(leadingTerm, fraction, 1.1 * gap, "early uptake");
+            Tolerance.Relative(leadingTerm, fraction, 1.1 * gap, "early uptake");
         }
     }
 
@@ -134,7 +136,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
         // Crank (1975), ch. 4, eq. 4.37 (from memory) summed at an early time, against eq. 4.20's leading term
         // scaled by (1 + alpha) / alpha, with the gap bounded by the next term of eq. 4.38 (from memory).
         double gap = Math.Sqrt(Math.PI * tau) / (2 * alpha);
-        AnalyticAssert.RelativelyClose(shortTime, series, 1.1 * gap, "eq. 4.37 at tau = 1e-3");
+        Tolerance.Relative(shortTime, series, 1.1 * gap, "eq. 4.37 at tau = 1e-3");
     }
 
     [Theory]
@@ -157,7 +159,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
         // M_inf of eq. 4.37, from memory): the solution ends with C0 L (V/A) / (K L + V/A) = C0 L alpha/(1+alpha).
         double equilibrium = initialConcentration * ThicknessMeters * solutionVolumePerArea
             / (partitionCoefficient * ThicknessMeters + solutionVolumePerArea);
-        AnalyticAssert.RelativelyClose(equilibrium, mass, 1e-12, "mass in solution after 60 L^2/D");
+        Tolerance.Relative(equilibrium, mass, 1e-12, "mass in solution after 60 L^2/D");
     }
 
     [Theory]
@@ -178,7 +180,7 @@ public sealed class PlaneSheetIntoLimitedVolumeTests
             previous = fraction;
         }
 
-        AnalyticAssert.AbsolutelyClose(1, previous, 1e-15, "fraction at tau = 30");
+        Tolerance.Absolute(1, previous, 1e-15, "fraction at tau = 30");
     }
 
     [Fact]

@@ -1,6 +1,8 @@
 using Layers.Core.Analytics;
 using MathNet.Numerics;
 
+using Layers.Tests.TestSupport;
+
 namespace Layers.Tests.Analytics;
 
 public sealed class PlaneSheetIntoSinkTests
@@ -25,7 +27,7 @@ public sealed class PlaneSheetIntoSinkTests
 
         // Crank (1975), The Mathematics of Diffusion, ch. 4, eq. 4.18 and eq. 4.20: two published forms of one
         // solution.
-        AnalyticAssert.AbsolutelyClose(longTime, shortTime, 1e-14, "eq. 4.18 against eq. 4.20");
+        Tolerance.Absolute(longTime, shortTime, 1e-14, "eq. 4.18 against eq. 4.20");
     }
 
     [Theory]
@@ -42,7 +44,7 @@ public sealed class PlaneSheetIntoSinkTests
             double shortTime = PlaneSheetIntoSink.ProfileShortTime(xi, tau);
 
             // Crank (1975), ch. 4, eq. 4.17 against eq. 4.19 (C1 = 0): two published forms of one profile.
-            AnalyticAssert.AbsolutelyClose(longTime, shortTime, 1e-13, "eq. 4.17 against eq. 4.19");
+            Tolerance.Absolute(longTime, shortTime, 1e-13, "eq. 4.17 against eq. 4.19");
         }
     }
 
@@ -55,7 +57,7 @@ public sealed class PlaneSheetIntoSinkTests
         double fraction = ReleasedAt(tau);
 
         // Crank (1975), ch. 4, eq. 4.20, leading term; the n >= 1 terms are below i erfc(31), far under 1e-300.
-        AnalyticAssert.RelativelyClose(2 * Math.Sqrt(tau / Math.PI), fraction, 1e-13, "leading term of eq. 4.20");
+        Tolerance.Relative(2 * Math.Sqrt(tau / Math.PI), fraction, 1e-13, "leading term of eq. 4.20");
     }
 
     [Theory]
@@ -67,7 +69,7 @@ public sealed class PlaneSheetIntoSinkTests
 
         // Crank (1975), ch. 4, eq. 4.18 summed far from its comfort zone against the leading term of eq. 4.20;
         // the cancellation in 1 - sum costs about three digits here.
-        AnalyticAssert.RelativelyClose(2 * Math.Sqrt(tau / Math.PI), fourier, 1e-12, "eq. 4.18 at early time");
+        Tolerance.Relative(2 * Math.Sqrt(tau / Math.PI), fourier, 1e-12, "eq. 4.18 at early time");
     }
 
     [Fact]
@@ -77,7 +79,7 @@ public sealed class PlaneSheetIntoSinkTests
         // with l the full thickness of a sheet open on both faces, i.e. twice our L.
         double halfTimeSeconds = 0.049 * Math.Pow(2 * ThicknessMeters, 2) / Diffusivity;
         double fraction = PlaneSheetIntoSink.FractionReleased(Diffusivity, ThicknessMeters, halfTimeSeconds);
-        AnalyticAssert.AbsolutelyClose(0.5, fraction, 2e-3, "fraction at the published half-time");
+        Tolerance.Absolute(0.5, fraction, 2e-3, "fraction at the published half-time");
     }
 
     [Fact]
@@ -88,7 +90,7 @@ public sealed class PlaneSheetIntoSinkTests
         double remaining = 1 - ReleasedAt(tau);
 
         // Crank (1975), ch. 4, eq. 4.18, first term: the next one is smaller by a factor 9 exp(2 pi^2 tau) > 1e18.
-        AnalyticAssert.RelativelyClose(slowestMode, remaining, 1e-10, "unreleased fraction against eq. 4.18 n = 0");
+        Tolerance.Relative(slowestMode, remaining, 1e-10, "unreleased fraction against eq. 4.18 n = 0");
     }
 
     [Theory]
@@ -108,7 +110,7 @@ public sealed class PlaneSheetIntoSinkTests
         double released = PlaneSheetIntoSink.FractionReleased(Diffusivity, ThicknessMeters, timeSeconds);
 
         // Crank (1975), ch. 4: eq. 4.18 is the integral of eq. 4.17 over the sheet, so the two must balance.
-        AnalyticAssert.RelativelyClose((1 - released) * initialMass, inSheet, 1e-9, "integral of eq. 4.17/4.19");
+        Tolerance.Relative((1 - released) * initialMass, inSheet, 1e-9, "integral of eq. 4.17/4.19");
     }
 
     [Theory]
@@ -121,7 +123,7 @@ public sealed class PlaneSheetIntoSinkTests
             Diffusivity, ThicknessMeters, InitialConcentration, ThicknessMeters, tau * DiffusionTimeSeconds);
 
         // Crank (1975), ch. 4, eqs. 4.17 and 4.19: boundary condition C = C1 = 0 at the exposed face.
-        AnalyticAssert.AbsolutelyClose(0, atSink, 1e-14 * InitialConcentration, "concentration at x = L");
+        Tolerance.Absolute(0, atSink, 1e-14 * InitialConcentration, "concentration at x = L");
     }
 
     [Fact]
@@ -134,10 +136,10 @@ public sealed class PlaneSheetIntoSinkTests
             Diffusivity, ThicknessMeters, InitialConcentration, ThicknessMeters, 0);
 
         // Crank (1975), ch. 4, eq. 4.19: the disturbance has reached depth ~ sqrt(D t) = L/100, erfc(25) ~ 1e-274.
-        AnalyticAssert.AbsolutelyClose(InitialConcentration, interior, 1e-15, "interior concentration");
+        Tolerance.Absolute(InitialConcentration, interior, 1e-15, "interior concentration");
 
         // Crank (1975), ch. 4: the initial condition is uniform C0; the sink value applies only for t > 0.
-        AnalyticAssert.AbsolutelyClose(InitialConcentration, atStart, 0, "concentration at t = 0");
+        Tolerance.Absolute(InitialConcentration, atStart, 0, "concentration at t = 0");
     }
 
     [Fact]
@@ -153,7 +155,7 @@ public sealed class PlaneSheetIntoSinkTests
             previous = fraction;
         }
 
-        AnalyticAssert.AbsolutelyClose(1, previous, 1e-15, "fraction at tau = 20");
+        Tolerance.Absolute(1, previous, 1e-15, "fraction at tau = 20");
     }
 
     [Fact]
@@ -164,7 +166,7 @@ public sealed class PlaneSheetIntoSinkTests
         double scaled = PlaneSheetIntoSink.FractionReleased(4 * Diffusivity, 2 * ThicknessMeters, timeSeconds);
 
         // Crank (1975), ch. 4, eq. 4.18: the solution depends on D t / l^2 only.
-        AnalyticAssert.RelativelyClose(reference, scaled, 1e-14, "fraction under D -> 4D, L -> 2L");
+        Tolerance.Relative(reference, scaled, 1e-14, "fraction under D -> 4D, L -> 2L");
     }
 
     [Fact]

@@ -1,6 +1,8 @@
 using Layers.Core.Analytics;
 using MathNet.Numerics;
 
+using Layers.Tests.TestSupport;
+
 namespace Layers.Tests.Analytics;
 
 public sealed class TwoSemiInfiniteMediaTests
@@ -22,7 +24,7 @@ public sealed class TwoSemiInfiniteMediaTests
 
             // Crank (1975), The Mathematics of Diffusion, ch. 3, composite media with a partition factor, and
             // Carslaw and Jaeger (1959), ch. 2 (both from memory): c1 = K c2 at the interface for all t > 0.
-            AnalyticAssert.RelativelyClose(partitionCoefficient * c2, c1, 1e-14, "c1 against K c2 at x = 0");
+            Tolerance.Relative(partitionCoefficient * c2, c1, 1e-14, "c1 against K c2 at x = 0");
         }
     }
 
@@ -44,7 +46,7 @@ public sealed class TwoSemiInfiniteMediaTests
 
         // Crank (1975), ch. 3, and Carslaw and Jaeger (1959), ch. 2 (both from memory): D1 dc1/dx = D2 dc2/dx
         // at the interface.
-        AnalyticAssert.RelativelyClose(d2 * gradient2, d1 * gradient1, 1e-6, "flux on the two sides");
+        Tolerance.Relative(d2 * gradient2, d1 * gradient1, 1e-6, "flux on the two sides");
     }
 
     [Theory]
@@ -67,11 +69,11 @@ public sealed class TwoSemiInfiniteMediaTests
 
         // Conservation of mass across an interface with continuous flux (Crank 1975, ch. 1 and ch. 3; Carslaw
         // and Jaeger 1959, ch. 2; chapter numbers from memory).
-        AnalyticAssert.RelativelyClose(gained, lost, 1e-9, "mass lost by 1 against mass gained by 2");
+        Tolerance.Relative(gained, lost, 1e-9, "mass lost by 1 against mass gained by 2");
 
         // The integral of erfc from 0 to infinity is 1/sqrt(pi) (Abramowitz and Stegun 1964, ch. 7, from memory),
         // which gives the closed form of MassPerAreaTransferred.
-        AnalyticAssert.RelativelyClose(transferred, gained, 1e-9, "integral of c2 against the closed form");
+        Tolerance.Relative(transferred, gained, 1e-9, "integral of c2 against the closed form");
     }
 
     [Theory]
@@ -90,7 +92,7 @@ public sealed class TwoSemiInfiniteMediaTests
 
         // Crank (1975), ch. 2, eq. 2.14 (from memory): an extended initial distribution C0 for x < 0 spreads
         // as C = (C0 / 2) erfc(x / (2 sqrt(D t))).
-        AnalyticAssert.RelativelyClose(expected, c, 1e-13, "profile with D1 = D2 and K = 1");
+        Tolerance.Relative(expected, c, 1e-13, "profile with D1 = D2 and K = 1");
     }
 
     [Fact]
@@ -121,8 +123,8 @@ public sealed class TwoSemiInfiniteMediaTests
 
         // Crank (1975), ch. 3 (from memory): semi-infinite media keep their initial values far from the interface;
         // 5 cm is over 45 diffusion lengths sqrt(D t) in either medium, and erfc(24) < 1e-250.
-        AnalyticAssert.AbsolutelyClose(InitialConcentration1, far1, 1e-15, "medium 1 far field");
-        AnalyticAssert.AbsolutelyClose(0, far2, 1e-200, "medium 2 far field");
+        Tolerance.Absolute(InitialConcentration1, far1, 1e-15, "medium 1 far field");
+        Tolerance.Absolute(0, far2, 1e-200, "medium 2 far field");
     }
 
     [Fact]
