@@ -1,6 +1,5 @@
 using Layers.Core.Analytics;
 using MathNet.Numerics;
-
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Analytics;

@@ -1,5 +1,4 @@
 using Layers.Core.Analytics;
-
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Analytics;
