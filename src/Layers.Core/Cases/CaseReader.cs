@@ -70,9 +70,16 @@ public static class CaseReader
         {
             var errors = new List<CaseError>();
             var simulation = Read(document.RootElement, fileName, new ReadContext(errors));
-            return errors.Count == 0
-                ? new CaseReadResult(fileName, simulation, errors)
-                : new CaseReadResult(fileName, null, errors);
+            if (errors.Count == 0)
+            {
+                return new CaseReadResult(fileName, simulation, errors);
+            }
+
+            var positions = JsonPositions.Of(json);
+            var located = errors.Select(error => positions.Find(error.JsonPath) is { } at
+                ? error with { Line = at.Line, Column = at.Column }
+                : error).ToArray();
+            return new CaseReadResult(fileName, null, located);
         }
     }
 

@@ -37,7 +37,7 @@ public sealed class CaseFormatReferenceTests
         ["$.reportTimes[3]"] = () => CaseJson.With(Film, ("$.reportTimes[3]", "\"12 d\"")),
         ["$.numerics.cells"] = () => CaseJson.With(Film, ("$.numerics.cells", "4")),
         // A missing comma after the thickness: the parser stops at the next key, line 5, column 7.
-        ["$ (line 5, column 7)"] = () =>
+        ["$"] = () =>
             "{\n  \"layers\": [\n    {\n      \"thickness\": \"50 um\"\n      \"name\": \"film\"\n    }\n  ]\n}\n",
     };
 
@@ -57,12 +57,21 @@ public sealed class CaseFormatReferenceTests
     [MemberData(nameof(DocumentedMessages))]
     public void Each_documented_example_message_is_what_the_reader_says(string documentedLine)
     {
-        var path = documentedLine["film.json: ".Length..documentedLine.IndexOf(": ", "film.json: ".Length, StringComparison.Ordinal)];
+        var bare = WithoutPosition(documentedLine);
+        var path = bare["film.json: ".Length..bare.IndexOf(": ", "film.json: ".Length, StringComparison.Ordinal)];
         Assert.True(Situations.TryGetValue(path, out var situation), $"No situation in this test for the documented path {path}");
 
         var result = CaseJson.Read(situation(), "film.json");
 
-        Assert.Equal([documentedLine], result.Errors.Select(error => error.Format("film.json")));
+        if (path == "$")
+        {
+            // A syntax error: the situation is the documented file itself, position included.
+            Assert.Equal([documentedLine], result.Errors.Select(error => error.Format("film.json")));
+            return;
+        }
+
+        // The documented lines show where in the documented file; the situation is a shorter file, so compare the rest.
+        Assert.Equal([bare], result.Errors.Select(error => (error with { Line = null, Column = null }).Format("film.json")));
     }
 
     [Fact]
@@ -128,4 +137,6 @@ public sealed class CaseFormatReferenceTests
         Assert.True(result.IsValid, result.FormatErrors());
         return result.Case!;
     }
+
+    private static string WithoutPosition(string line) => System.Text.RegularExpressions.Regex.Replace(line, @" \(line \d+, column \d+\)", string.Empty);
 }

@@ -57,10 +57,29 @@ public sealed class CaseReaderErrorListTests
         var lines = result.FormatErrors().Split(Environment.NewLine);
         Assert.Equal(
             [
-                "cases/film.json: $.layers[0].thickness: must be > 0; got '-5 um'",
-                "cases/film.json: $.right.kind: must be one of closed, bath, compartment; got 'pipe'",
+                $"cases/film.json: $.layers[0].thickness {At(json, "\"thickness\"")}: must be > 0; got '-5 um'",
+                $"cases/film.json: $.right.kind {At(json, "\"kind\": \"pipe\"")}: must be one of closed, bath, compartment; got 'pipe'",
             ],
             lines);
+    }
+
+    [Fact]
+    public void Every_error_points_at_the_line_and_column_of_its_key()
+    {
+        var json = "{\n  \"title\": \"t\",\n  \"duraton\": \"1 d\"\n}\n";
+
+        var error = CaseJson.Read(json).Errors.First(error => error.JsonPath == "$.duraton");
+
+        // Line 3, column 3: where "duraton" starts, as an editor counts (1-based).
+        Assert.Equal((3L, 3L), (error.Line!.Value, error.Column!.Value));
+    }
+
+    private static string At(string json, string text)
+    {
+        var offset = json.IndexOf(text, StringComparison.Ordinal);
+        var line = json[..offset].Count(character => character == '\n') + 1;
+        var column = offset - json.LastIndexOf('\n', Math.Max(offset - 1, 0)) ;
+        return FormattableString.Invariant($"(line {line}, column {(line == 1 ? offset + 1 : column)})");
     }
 
     [Fact]

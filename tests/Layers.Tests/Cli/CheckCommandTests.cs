@@ -53,7 +53,8 @@ public sealed class CheckCommandTests
 
         Assert.Equal(ExitCodes.InvalidInput, outcome.ExitCode);
         Assert.Equal(string.Empty, outcome.Output);
-        Assert.Contains($"{casePath}: $.right.kind: must be one of closed, bath, compartment; got 'pipe'", outcome.ErrorLines);
+        Assert.Contains(outcome.ErrorLines, line => line.StartsWith($"{casePath}: $.right.kind (line ", StringComparison.Ordinal)
+            && line.EndsWith("): must be one of closed, bath, compartment; got 'pipe'", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -101,7 +101,7 @@ public sealed class RunCommandTests
         Assert.Equal(string.Empty, outcome.Output);
         foreach (var path in new[] { "$.layers[0].thickness", "$.layers[0].diffusionCoefficient", "$.right.kind" })
         {
-            Assert.Contains(outcome.ErrorLines, line => line.StartsWith($"{casePath}: {path}: ", StringComparison.Ordinal));
+            Assert.Contains(outcome.ErrorLines, line => line.StartsWith($"{casePath}: {path} (line ", StringComparison.Ordinal));
         }
 
         // docs/case-format.md, Validation messages: a first line counting the problems, then one line each.
