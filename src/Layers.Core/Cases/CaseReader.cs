@@ -72,7 +72,8 @@ public static class CaseReader
             var simulation = Read(document.RootElement, fileName, new ReadContext(errors));
             if (errors.Count == 0)
             {
-                return new CaseReadResult(fileName, simulation, errors);
+                var hash = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(Encoding.UTF8.GetBytes(json)));
+                return new CaseReadResult(fileName, simulation! with { SourceSha256 = hash }, errors);
             }
 
             var positions = JsonPositions.Of(json);

@@ -38,6 +38,9 @@ public sealed record SimulationCase
     /// <summary>Time-stepping settings.</summary>
     public SolverOptions Solver { get; init; } = new();
 
+    /// <summary>SHA-256 of the case file's text (lowercase hex), recorded with the results; null when built in code.</summary>
+    public string? SourceSha256 { get; init; }
+
     /// <summary>Units the user wrote, used only to present results in familiar units.</summary>
     public DisplayUnits Display { get; init; } = new();
 

@@ -48,6 +48,11 @@ public static class SummaryJson
         json.WriteStartObject("case");
         json.WriteString("title", result.Case.Title);
         json.WriteString("file", Path.GetFileName(caseFile));
+        if (result.Case.SourceSha256 is { } hash)
+        {
+            json.WriteString("sha256", hash);
+        }
+
         json.WriteString("referenceMedium", result.Case.ReferenceMedium);
         json.WriteNumber("durationSeconds", result.Case.DurationSeconds);
         json.WriteEndObject();

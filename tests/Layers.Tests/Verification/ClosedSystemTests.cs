@@ -63,6 +63,8 @@ public sealed class ClosedSystemTests
 
         Assert.True(result.Completed, result.Statistics.ToString());
         Assert.True(result.WorstMassBalanceError < 1e-9, $"mass balance error {result.WorstMassBalanceError:G3}");
+        // The distance to the analytic equilibrium (uniform u fixed by the mass balance) falls below 1 % of its start.
+        Assert.NotNull(result.FinalState.System.NinetyNinePercent);
         // In u = c/K, which is what the solver bounds: no value below -1e-12 of the largest initial u (round-off).
         var scale = layers.Max(layer => layer.InitialConcentrationKgPerCubicMeter / layer.PartitionCoefficient);
         foreach (var profile in result.Reports.SelectMany(report => report.Profiles))
