@@ -15,6 +15,17 @@ public static class CliApp
             CautionText.Paragraph);
         root.Subcommands.Add(RunCommand.Create(output, error));
         root.Subcommands.Add(CheckCommand.Create(output, error));
+        root.Subcommands.Add(MergeCommand.Create(output, error));
         return root;
+    }
+
+    /// <summary>
+    /// Invokes a parsed command line. System.CommandLine answers a usage error with 1, which layers keeps for
+    /// "a limit was exceeded"; usage errors are mapped to <see cref="ExitCodes.Usage"/> here.
+    /// </summary>
+    public static int Invoke(ParseResult parseResult, InvocationConfiguration? configuration = null)
+    {
+        var code = parseResult.Invoke(configuration);
+        return parseResult.Errors.Count > 0 && code == 1 ? ExitCodes.Usage : code;
     }
 }
