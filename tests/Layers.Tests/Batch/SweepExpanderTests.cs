@@ -82,3 +82,35 @@ public sealed class SweepExpanderTests
         Assert.Equal("s.01_thickness--1um", expansion.Variants[0].Name.ToString(CultureInfo.InvariantCulture));
     }
 }
+
+/// <summary>The example messages of docs/case-format.md, section "Sweeps", are what the expander says.</summary>
+public sealed class SweepFormatReferenceTests
+{
+    private static readonly Dictionary<string, string> Situations = new(StringComparer.Ordinal)
+    {
+        ["$.sweep.parameters[0].path"] = """{ "parameters": [ { "path": "$.layers[3].thickness", "values": ["1 um"] } ], "result": "lagTime" }""",
+        ["$.sweep.parameters[0].to"] = """{ "parameters": [ { "path": "$.layers[0].thickness", "from": "1 um", "to": "1 mm", "count": 3 } ], "result": "lagTime" }""",
+        ["$.sweep.result"] = """{ "parameters": [ { "path": "$.duration", "values": ["1 h"] } ], "result": "flux" }""",
+    };
+
+    public static TheoryData<string> DocumentedMessages => new(
+        FormatReference.Blocks("text", "Sweeps").SelectMany(block => block.Split('\n')).Where(line => line.StartsWith("sweep.json: ", StringComparison.Ordinal)));
+
+    [Theory]
+    [MemberData(nameof(DocumentedMessages))]
+    public void Each_documented_sweep_message_is_what_the_expander_says(string documentedLine)
+    {
+        var path = documentedLine["sweep.json: ".Length..documentedLine.IndexOf(": ", "sweep.json: ".Length, StringComparison.Ordinal)];
+        Assert.True(Situations.TryGetValue(path, out var sweep), $"No situation for the documented path {path}");
+
+        var expansion = SweepExpander.Expand(CaseJson.With(BatchCases.Membrane, ("$.sweep", sweep)), "sweep.json");
+
+        Assert.Equal([documentedLine], expansion.Errors.Select(error => error.Format("sweep.json")));
+    }
+
+    [Fact]
+    public void The_sweep_section_shows_three_example_messages()
+    {
+        Assert.Equal(3, DocumentedMessages.Count);
+    }
+}
