@@ -28,4 +28,14 @@ public static class CliApp
         var code = parseResult.Invoke(configuration);
         return parseResult.Errors.Count > 0 && code == 1 ? ExitCodes.Usage : code;
     }
+
+    /// <summary>
+    /// As <see cref="Invoke"/>, asynchronously: the form that hooks Ctrl+C (SIGINT, SIGTERM) to the cancellation
+    /// token of the actions, so that a batch can stop its cases and write its summary before the process ends.
+    /// </summary>
+    public static async Task<int> InvokeAsync(ParseResult parseResult, InvocationConfiguration? configuration = null)
+    {
+        var code = await parseResult.InvokeAsync(configuration).ConfigureAwait(false);
+        return parseResult.Errors.Count > 0 && code == 1 ? ExitCodes.Usage : code;
+    }
 }

@@ -99,9 +99,10 @@ internal static class RunCommand
                 Recursive = parseResult.GetValue(recursive),
                 Shard = parseResult.GetValue(shard) is { } text && ShardSpec.TryParse(text, out var part, out _) ? part : null,
             };
+            using var interrupt = new InterruptScope(cancellation);
             return Task.FromResult(IsSingleCase(settings)
-                ? Execute(settings, output, error, cancellation)
-                : BatchRun.Execute(settings, output, error, cancellation));
+                ? Execute(settings, output, error, interrupt.Token)
+                : BatchRun.Execute(settings, output, error, interrupt.Token));
         });
         return command;
     }
