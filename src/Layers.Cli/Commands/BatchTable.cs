@@ -26,10 +26,13 @@ internal static class BatchTable
             Number(row.Results?.LagTimeSeconds),
             Number(row.Results?.TimeTo90PercentSeconds),
         ]).ToList();
+        string[] headers = ["case", "status", "left received [kg/m2]", "right received [kg/m2]", "steady flux [kg/(m2 s)]", "lag time [s]", "90 % time [s]"];
+        // Result columns that no case fills (no bath, no permeation ...) only take width from the others.
+        var kept = Enumerable.Range(0, headers.Length).Where(column => column < 2 || table.Any(row => row[column].Length > 0)).ToList();
         return new TextTable(
             FormattableString.Invariant($"Batch: {rows.Count} cases, {counts}"),
-            ["case", "status", "left received [kg/m2]", "right received [kg/m2]", "steady flux [kg/(m2 s)]", "lag time [s]", "90 % time [s]"],
-            table);
+            kept.Select(column => headers[column]).ToList(),
+            table.Select(row => (IReadOnlyList<string>)kept.Select(column => row[column]).ToList()).ToList());
     }
 
     private static string Number(double? value) =>
