@@ -80,7 +80,7 @@ internal static class BatchRun
         }
     }
 
-    private static void WriteSweepPlots(IReadOnlyList<SweepGroup> sweeps, IReadOnlyList<BatchRow> rows, RunSettings settings)
+    public static void WriteSweepPlots(IReadOnlyList<SweepGroup> sweeps, IReadOnlyList<BatchRow> rows, RunSettings settings)
     {
         foreach (var sweep in sweeps)
         {

@@ -26,14 +26,20 @@ internal static class MergeCommand
         };
         var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
         var json = new Option<bool>("--json") { Description = "Print the merged summary.json to stdout instead of the table." };
+        var noPlots = new Option<bool>("--no-plots") { Description = "Skip the sweep plots." };
         var command = new Command("merge", "Combine the summaries of shard runs into one.");
         command.Arguments.Add(folders);
         command.Options.Add(outputRoot);
         command.Options.Add(quiet);
         command.Options.Add(json);
+        command.Options.Add(noPlots);
         command.SetAction(parseResult => Execute(
             parseResult.GetValue(folders)!,
-            new RunSettings(string.Empty, parseResult.GetValue(outputRoot)!) { Quiet = parseResult.GetValue(quiet), Json = parseResult.GetValue(json) },
+            new RunSettings(string.Empty, parseResult.GetValue(outputRoot)!) {
+                Quiet = parseResult.GetValue(quiet),
+                Json = parseResult.GetValue(json),
+                Plots = !parseResult.GetValue(noPlots),
+            },
             output,
             error));
         return command;
@@ -82,6 +88,11 @@ internal static class MergeCommand
         var ordered = BatchRow.Ordered(rows);
         try
         {
+            if (settings.Plots)
+            {
+                BatchRun.WriteSweepPlots(SweepsOf(ordered), ordered, settings);
+            }
+
             BatchSummaryFiles.WriteTo(settings.OutputRoot, ordered);
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
@@ -93,6 +104,18 @@ internal static class MergeCommand
         BatchRun.Report(ordered, settings, output, error, cancelled: false);
         return BatchRun.OutcomeCode(ordered, cancelled: false);
     }
+
+    /// <summary>
+    /// The sweeps whose sub-cases the rows hold, read again from their case files (which the shards read by the
+    /// same paths); a sweep file that is gone or changed simply gets no plot.
+    /// </summary>
+    private static List<SweepGroup> SweepsOf(IReadOnlyList<BatchRow> rows) =>
+        rows.Where(row => row.Parameters.Count > 0)
+            .Select(row => row.File)
+            .Distinct(StringComparer.Ordinal)
+            .Where(File.Exists)
+            .SelectMany(file => BatchCollector.Collect([file], recursive: false).Sweeps)
+            .ToList();
 
     /// <summary>Solve times from a timing.csv, when there is one (case names never hold commas they would quote).</summary>
     private static Dictionary<string, double> Timing(string path)

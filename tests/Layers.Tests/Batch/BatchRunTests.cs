@@ -74,6 +74,42 @@ public sealed class BatchRunTests
     }
 
     [Fact]
+    public void Sharded_sweeps_get_their_plot_from_merge()
+    {
+        using var temp = new TempFolder();
+        var sweep = temp.WriteFile("lag.json", BatchCases.ThicknessSweep("10 um", "20 um", "40 um"));
+        string[] small = ["--plot-width", "400", "--plot-height", "300"];
+        CliRun.Invoke(["run", sweep, "--out", temp.Combine("s1"), "--shard", "1/2", .. small]);
+        CliRun.Invoke(["run", sweep, "--out", temp.Combine("s2"), "--shard", "2/2", .. small]);
+
+        var merge = CliRun.Invoke("merge", temp.Combine("s1"), temp.Combine("s2"), "--out", temp.Combine("merged"));
+
+        Assert.True(merge.ExitCode == ExitCodes.Success, merge.Error);
+        Assert.False(File.Exists(temp.Combine("s1", "lag.sweep.png")));
+        Assert.True(File.Exists(temp.Combine("merged", "lag.sweep.png")));
+        Assert.Equal(3, SummaryCsv.Read(temp.Combine("merged", "summary.csv")).Count);
+    }
+
+    [Fact]
+    public void Two_cases_with_one_name_keep_the_first_and_refuse_the_second()
+    {
+        using var temp = new TempFolder();
+        temp.WriteFile(Path.Combine("a", "same.json"), BatchCases.Membrane);
+        temp.WriteFile(Path.Combine("b", "same.json"), BatchCases.Membrane);
+
+        var outcome = CliRun.Invoke("run", temp.Combine("b"), temp.Combine("a"), "--out", temp.Combine("out"), "--no-plots");
+
+        Assert.Equal(ExitCodes.InvalidInput, outcome.ExitCode);
+        var rows = SummaryCsv.Read(temp.Combine("out", "summary.csv"));
+        Assert.Equal(["succeeded", "invalid"], rows.Select(row => row["status"]));
+        Assert.EndsWith(Path.Combine("a", "same.json"), rows[0]["file"], StringComparison.Ordinal);
+        Assert.Contains("is already used by", rows[1]["message"], StringComparison.Ordinal);
+        var markdown = File.ReadAllText(temp.Combine("out", "summary.md"));
+        Assert.Contains("solveSeconds", markdown, StringComparison.Ordinal);
+        Assert.Contains(Layers.Core.Reports.CautionText.Paragraph, markdown, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Merge_refuses_a_case_found_in_two_shards()
     {
         using var temp = new TempFolder();
