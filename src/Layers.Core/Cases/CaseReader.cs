@@ -70,10 +70,10 @@ public static class CaseReader
         {
             var errors = new List<CaseError>();
             var simulation = Read(document.RootElement, fileName, new ReadContext(errors));
-            if (document.RootElement.ValueKind == JsonValueKind.Object && document.RootElement.TryGetProperty("sweep", out _))
+            if (errors.Count == 0 && document.RootElement.ValueKind == JsonValueKind.Object && document.RootElement.TryGetProperty("sweep", out _))
             {
-                // A sweep document read as one case is its base case; its sweep must still expand, so that
-                // `layers check` reports the sweep's own mistakes too.
+                // A sweep document read as one case is its base case; once that is valid its sweep must still
+                // expand, so that `layers check` reports the sweep's own mistakes too.
                 errors.AddRange(SweepExpander.Expand(json, fileName).Errors);
             }
 

@@ -33,7 +33,8 @@ public static partial class SweepExpander
     {
         try
         {
-            return JsonNode.Parse(json) is JsonObject root && root.ContainsKey("sweep");
+            using var document = JsonDocument.Parse(json);
+            return document.RootElement.ValueKind == JsonValueKind.Object && document.RootElement.TryGetProperty("sweep", out _);
         }
         catch (JsonException)
         {
@@ -47,6 +48,14 @@ public static partial class SweepExpander
     public static SweepExpansion Expand(string json, string fileName)
     {
         var errors = new List<CaseError>();
+        using (var document = JsonDocument.Parse(json))
+        {
+            if (DuplicateKeys.First(document.RootElement) is { } repeated)
+            {
+                return Failed(new CaseError(repeated, "appears more than once in this object; keep one"));
+            }
+        }
+
         var root = (JsonObject)JsonNode.Parse(json)!;
         var sweep = root["sweep"] as JsonObject;
         if (sweep is null)

@@ -114,3 +114,26 @@ public sealed class SweepFormatReferenceTests
         Assert.Equal(3, DocumentedMessages.Count);
     }
 }
+
+/// <summary>Keys written twice are reported at their path, never as a crash of the sweep expansion.</summary>
+public sealed class SweepDuplicateKeyTests
+{
+    [Theory]
+    [InlineData("""{ "title": "a", "title": "b", "layers": [], "sweep": { "parameters": [], "result": "lagTime" } }""", "$.title")]
+    [InlineData("""{ "layers": [ { "name": "x", "name": "y" } ], "sweep": { "parameters": [], "result": "lagTime" } }""", "$.layers[0].name")]
+    [InlineData("""{ "sweep": { "result": "lagTime", "result": "steadyFlux" } }""", "$.sweep.result")]
+    public void A_repeated_key_is_an_error_at_its_path(string json, string path)
+    {
+        var expansion = SweepExpander.Expand(json, "d.json");
+
+        Assert.Equal(path, Assert.Single(expansion.Errors).JsonPath);
+    }
+
+    [Fact]
+    public void Check_of_a_sweep_with_a_repeated_key_reports_it_once()
+    {
+        var read = CaseReader.ReadText(CaseJson.With(BatchCases.ThicknessSweep("1 um"), ("$.sweep.result", "\"lagTime\"")).Replace("\"title\"", "\"title\": \"x\", \"title\"", StringComparison.Ordinal), "d.json");
+
+        Assert.Equal(["$.title"], read.Errors.Select(error => error.JsonPath));
+    }
+}
