@@ -44,7 +44,7 @@ internal static class RunCommand
         var height = new Option<int>("--plot-height") { Description = "Height of the plots in pixels.", DefaultValueFactory = _ => 800 };
         var logConcentration = new Option<bool>("--log-concentration") { Description = "Logarithmic concentration axis in profile.png." };
         var linearTime = new Option<bool>("--linear-time") { Description = "Linear time axis in transfer.png and equilibrium.png (default logarithmic)." };
-        var command = new Command("run", "Solve a case and write its results.");
+        var command = new Command("run", "Solve cases and write their results; several cases, folders or a sweep run as a batch with a summary.");
         command.Arguments.Add(caseFile);
         command.Options.Add(outputRoot);
         command.Options.Add(quiet);
