@@ -1,23 +1,38 @@
 namespace Layers.Cli;
 
-/// <summary>The exit codes of <c>layers</c>, documented in the README and docs/cli.md.</summary>
+/// <summary>
+/// The exit codes of <c>layers</c>, documented in the README and docs/cli.md. 0, 1 and 2 are the outcomes of the
+/// cases (for one case or a batch); 3 and 4 say more precisely what went wrong with a single case; usage errors
+/// have their own code so that 1 can only mean a limit was exceeded.
+/// </summary>
 public static class ExitCodes
 {
-    /// <summary>Success.</summary>
+    /// <summary>Every case succeeded (and was within its limit, where one is given).</summary>
     public const int Success = 0;
 
-    /// <summary>The command line itself was wrong (unknown option, missing argument).</summary>
-    public const int Usage = 1;
+    /// <summary>
+    /// Some case exceeded its limit. The case format has no limit key yet, so this code is reserved and not returned.
+    /// </summary>
+    public const int LimitExceeded = 1;
 
-    /// <summary>A case file is invalid: unreadable, not JSON, or breaking a rule of the format.</summary>
+    /// <summary>
+    /// A case file is invalid (unreadable, not JSON, or breaking a rule of the format); in a batch, some case was
+    /// invalid or failed.
+    /// </summary>
     public const int InvalidInput = 2;
 
-    /// <summary>The solver stopped before the end of the duration.</summary>
+    /// <summary>The solver stopped before the end of the duration (a single case).</summary>
     public const int SolverFailed = 3;
 
-    /// <summary>The results could not be written.</summary>
+    /// <summary>The results (or a batch's summary files) could not be written.</summary>
     public const int OutputFailed = 4;
 
     /// <summary><c>layers verify</c>: at least one benchmark is outside its tolerance.</summary>
     public const int VerificationFailed = 5;
+
+    /// <summary>The command line itself was wrong (unknown option, missing argument): EX_USAGE of sysexits.h.</summary>
+    public const int Usage = 64;
+
+    /// <summary>Interrupted (Ctrl+C): 128 + SIGINT, the shell convention.</summary>
+    public const int Cancelled = 130;
 }

@@ -16,6 +16,27 @@ public static class CliApp
         root.Subcommands.Add(RunCommand.Create(output, error));
         root.Subcommands.Add(CheckCommand.Create(output, error));
         root.Subcommands.Add(VerifyCommand.Create(output, error));
+        root.Subcommands.Add(MergeCommand.Create(output, error));
         return root;
+    }
+
+    /// <summary>
+    /// Invokes a parsed command line. System.CommandLine answers a usage error with 1, which layers keeps for
+    /// "a limit was exceeded"; usage errors are mapped to <see cref="ExitCodes.Usage"/> here.
+    /// </summary>
+    public static int Invoke(ParseResult parseResult, InvocationConfiguration? configuration = null)
+    {
+        var code = parseResult.Invoke(configuration);
+        return parseResult.Errors.Count > 0 && code == 1 ? ExitCodes.Usage : code;
+    }
+
+    /// <summary>
+    /// As <see cref="Invoke"/>, asynchronously: the form that hooks Ctrl+C (SIGINT, SIGTERM) to the cancellation
+    /// token of the actions, so that a batch can stop its cases and write its summary before the process ends.
+    /// </summary>
+    public static async Task<int> InvokeAsync(ParseResult parseResult, InvocationConfiguration? configuration = null)
+    {
+        var code = await parseResult.InvokeAsync(configuration).ConfigureAwait(false);
+        return parseResult.Errors.Count > 0 && code == 1 ? ExitCodes.Usage : code;
     }
 }

@@ -1,4 +1,6 @@
 using System.CommandLine;
+using Layers.Core.Batch;
+using Layers.Core.Cases;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
 using Layers.Plotting;
@@ -6,14 +8,30 @@ using Layers.Plotting;
 namespace Layers.Cli.Commands;
 
 /// <summary>
-/// <c>layers run CASE [--out DIR] [--quiet | --json] [--no-plots]</c>: solves a case and writes its result files
-/// into DIR/&lt;case name&gt;/, replacing an earlier folder of that name only once everything is written.
+/// <c>layers run CASE... [--out DIR] [--quiet | --json] [--no-plots] [--jobs N] [--recursive] [--shard I/N]</c>:
+/// solves cases and writes each one's result files into DIR/&lt;case name&gt;/, replacing an earlier folder of that
+/// name only once everything is written. One plain case file prints its tables; several cases, a folder, a sweep or
+/// a shard run as a batch (<see cref="BatchRun"/>).
 /// </summary>
 internal static class RunCommand
 {
     public static Command Create(TextWriter output, TextWriter error)
     {
-        var caseFile = CaseArgument.Create();
+        var caseFile = new Argument<string[]>("cases")
+        {
+            Description = "Case files (format: docs/case-format.md) and folders (every *.json in them).",
+            Arity = ArgumentArity.OneOrMore,
+        };
+        var jobs = new Option<int>("--jobs", "-j")
+        {
+            Description = "How many cases run at once.",
+            DefaultValueFactory = _ => Environment.ProcessorCount,
+        };
+        var recursive = new Option<bool>("--recursive", "-r") { Description = "Also take the *.json in sub-folders of the folders given." };
+        var shard = new Option<string?>("--shard")
+        {
+            Description = "Run only part I of N of the cases (ordered by name), e.g. 2/8 for the second of eight machines.",
+        };
         var outputRoot = new Option<string>("--out", "-o")
         {
             Description = "Folder that receives one sub-folder of results per case.",
@@ -26,7 +44,7 @@ internal static class RunCommand
         var height = new Option<int>("--plot-height") { Description = "Height of the plots in pixels.", DefaultValueFactory = _ => 800 };
         var logConcentration = new Option<bool>("--log-concentration") { Description = "Logarithmic concentration axis in profile.png." };
         var linearTime = new Option<bool>("--linear-time") { Description = "Linear time axis in transfer.png and equilibrium.png (default logarithmic)." };
-        var command = new Command("run", "Solve a case and write its results.");
+        var command = new Command("run", "Solve cases and write their results; several cases, folders or a sweep run as a batch with a summary.");
         command.Arguments.Add(caseFile);
         command.Options.Add(outputRoot);
         command.Options.Add(quiet);
@@ -36,6 +54,23 @@ internal static class RunCommand
         command.Options.Add(height);
         command.Options.Add(logConcentration);
         command.Options.Add(linearTime);
+        command.Options.Add(jobs);
+        command.Options.Add(recursive);
+        command.Options.Add(shard);
+        jobs.Validators.Add(result =>
+        {
+            if (result.GetValueOrDefault<int>() is < 1 or > 1024)
+            {
+                result.AddError($"--jobs must be from 1 to 1024; got {result.GetValueOrDefault<int>()}");
+            }
+        });
+        shard.Validators.Add(result =>
+        {
+            if (!ShardSpec.TryParse(result.GetValueOrDefault<string?>() ?? string.Empty, out _, out var problem))
+            {
+                result.AddError(problem!);
+            }
+        });
         foreach (var size in new[] { width, height })
         {
             size.Validators.Add(result =>
@@ -46,9 +81,12 @@ internal static class RunCommand
                 }
             });
         }
-        command.SetAction(parseResult => Execute(
-            new RunSettings(parseResult.GetValue(caseFile)!, parseResult.GetValue(outputRoot)!)
+        command.SetAction((parseResult, cancellation) =>
+        {
+            var paths = parseResult.GetValue(caseFile)!;
+            var settings = new RunSettings(paths[0], parseResult.GetValue(outputRoot)!)
             {
+                CasePaths = paths,
                 Quiet = parseResult.GetValue(quiet),
                 Json = parseResult.GetValue(json),
                 Plots = !parseResult.GetValue(noPlots),
@@ -57,13 +95,38 @@ internal static class RunCommand
                     parseResult.GetValue(height),
                     parseResult.GetValue(logConcentration),
                     !parseResult.GetValue(linearTime)),
-            },
-            output,
-            error));
+                Jobs = parseResult.GetValue(jobs),
+                Recursive = parseResult.GetValue(recursive),
+                Shard = parseResult.GetValue(shard) is { } text && ShardSpec.TryParse(text, out var part, out _) ? part : null,
+            };
+            using var interrupt = new InterruptScope(cancellation);
+            return Task.FromResult(IsSingleCase(settings)
+                ? Execute(settings, output, error, interrupt.Token)
+                : BatchRun.Execute(settings, output, error, interrupt.Token));
+        });
         return command;
     }
 
-    private static int Execute(RunSettings settings, TextWriter output, TextWriter error)
+    /// <summary>One case file that is not a sweep, without --shard: the single-case behaviour, tables on stdout.</summary>
+    private static bool IsSingleCase(RunSettings settings)
+    {
+        var path = settings.CasePaths[0];
+        if (settings.CasePaths.Count != 1 || settings.Shard is not null || Directory.Exists(path))
+        {
+            return false;
+        }
+
+        try
+        {
+            return !SweepExpander.Declares(File.ReadAllText(path));
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            return true; // The single-case path reports the unreadable file.
+        }
+    }
+
+    private static int Execute(RunSettings settings, TextWriter output, TextWriter error, CancellationToken cancellation)
     {
         var casePath = settings.CasePath;
         var read = CaseArgument.ReadOrReport(casePath, error);
@@ -72,7 +135,13 @@ internal static class RunCommand
             return ExitCodes.InvalidInput;
         }
 
-        var result = Simulator.Run(simulation);
+        var result = Simulator.Run(simulation, cancellation);
+        if (result.Statistics.StopReason == Core.TimeStepping.StopReason.Cancelled)
+        {
+            error.WriteLine($"{casePath}: cancelled; no results were written.");
+            return ExitCodes.Cancelled;
+        }
+
         if (!result.Completed)
         {
             error.WriteLine($"{casePath}: the solver stopped early ({result.Statistics}); no results were written.");

@@ -1,3 +1,4 @@
+using Layers.Core.Batch;
 using Layers.Plotting;
 
 namespace Layers.Cli.Commands;
@@ -18,4 +19,16 @@ internal sealed record RunSettings(string CasePath, string OutputRoot)
 
     /// <summary>Size and axis choices of the plots.</summary>
     public PlotOptions PlotOptions { get; init; } = new();
+
+    /// <summary>Every case file and folder given; <see cref="CasePath"/> is the first.</summary>
+    public IReadOnlyList<string> CasePaths { get; init; } = [];
+
+    /// <summary>How many cases run at once.</summary>
+    public int Jobs { get; init; } = Environment.ProcessorCount;
+
+    /// <summary>Look into sub-folders of the folders given.</summary>
+    public bool Recursive { get; init; }
+
+    /// <summary>The part of the batch to run; null for all of it.</summary>
+    public ShardSpec? Shard { get; init; }
 }

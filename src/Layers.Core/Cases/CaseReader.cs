@@ -16,7 +16,7 @@ public static class CaseReader
     private static readonly string[] TopKeys =
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
-        "duration", "reportTimes", "extraOutputTimes", "numerics", "display",
+        "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "sweep",
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
@@ -70,6 +70,13 @@ public static class CaseReader
         {
             var errors = new List<CaseError>();
             var simulation = Read(document.RootElement, fileName, new ReadContext(errors));
+            if (errors.Count == 0 && document.RootElement.ValueKind == JsonValueKind.Object && document.RootElement.TryGetProperty("sweep", out _))
+            {
+                // A sweep document read as one case is its base case; once that is valid its sweep must still
+                // expand, so that `layers check` reports the sweep's own mistakes too.
+                errors.AddRange(SweepExpander.Expand(json, fileName).Errors);
+            }
+
             if (errors.Count == 0)
             {
                 var hash = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(Encoding.UTF8.GetBytes(json)));

@@ -19,9 +19,9 @@ internal static class CliRun
     {
         using var output = new StringWriter(CultureInfo.InvariantCulture);
         using var error = new StringWriter(CultureInfo.InvariantCulture);
-        var exitCode = CliApp.Build(output, error)
-            .Parse(args)
-            .Invoke(new InvocationConfiguration { Output = output, Error = error });
+        var exitCode = CliApp.Invoke(
+            CliApp.Build(output, error).Parse(args),
+            new InvocationConfiguration { Output = output, Error = error });
         return new CliOutcome(exitCode, output.ToString(), error.ToString());
     }
 }

@@ -1,0 +1,140 @@
+using System.CommandLine;
+using System.Text.Json;
+using Layers.Core.Batch;
+using Layers.Core.Reports;
+
+namespace Layers.Cli.Commands;
+
+/// <summary>
+/// <c>layers merge FOLDER... [--out DIR]</c>: combines the summary.json of shard runs (<c>layers run --shard I/N</c>)
+/// into one set of summary files, as if the batch had run on one machine. A case that appears in two shards is an
+/// error, since shards are disjoint by construction.
+/// </summary>
+internal static class MergeCommand
+{
+    public static Command Create(TextWriter output, TextWriter error)
+    {
+        var folders = new Argument<string[]>("folders")
+        {
+            Description = "Output folders of shard runs, each holding a summary.json.",
+            Arity = ArgumentArity.OneOrMore,
+        };
+        var outputRoot = new Option<string>("--out", "-o")
+        {
+            Description = "Folder that receives the merged summary files.",
+            DefaultValueFactory = _ => "results",
+        };
+        var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
+        var json = new Option<bool>("--json") { Description = "Print the merged summary.json to stdout instead of the table." };
+        var noPlots = new Option<bool>("--no-plots") { Description = "Skip the sweep plots." };
+        var command = new Command("merge", "Combine the summaries of shard runs into one.");
+        command.Arguments.Add(folders);
+        command.Options.Add(outputRoot);
+        command.Options.Add(quiet);
+        command.Options.Add(json);
+        command.Options.Add(noPlots);
+        command.SetAction(parseResult => Execute(
+            parseResult.GetValue(folders)!,
+            new RunSettings(string.Empty, parseResult.GetValue(outputRoot)!) {
+                Quiet = parseResult.GetValue(quiet),
+                Json = parseResult.GetValue(json),
+                Plots = !parseResult.GetValue(noPlots),
+            },
+            output,
+            error));
+        return command;
+    }
+
+    private static int Execute(IReadOnlyList<string> folders, RunSettings settings, TextWriter output, TextWriter error)
+    {
+        var rows = new List<BatchRow>();
+        var origin = new Dictionary<string, string>(StringComparer.Ordinal);
+        var problems = 0;
+        foreach (var folder in folders)
+        {
+            var path = Path.Combine(folder, BatchSummaryFiles.Json);
+            IReadOnlyList<BatchRow> shard;
+            try
+            {
+                shard = BatchSummaryJson.Read(File.ReadAllText(path));
+            }
+            catch (Exception exception) when (exception is IOException or UnauthorizedAccessException or JsonException or KeyNotFoundException or InvalidOperationException)
+            {
+                error.WriteLine($"{path}: not a batch summary: {exception.Message}");
+                problems++;
+                continue;
+            }
+
+            var times = Timing(Path.Combine(folder, BatchSummaryFiles.Timing));
+            foreach (var row in shard)
+            {
+                var key = $"{row.Name}\u0000{row.File}";
+                if (!origin.TryAdd(key, path))
+                {
+                    error.WriteLine($"{path}: case '{row.Name}' is also in {origin[key]}; shards of one batch never share a case");
+                    problems++;
+                    continue;
+                }
+
+                rows.Add(row with { SolveSeconds = times.TryGetValue(row.Name, out var seconds) ? seconds : null });
+            }
+        }
+
+        if (problems > 0)
+        {
+            return ExitCodes.InvalidInput;
+        }
+
+        var ordered = BatchRow.Ordered(rows);
+        try
+        {
+            if (settings.Plots)
+            {
+                BatchRun.WriteSweepPlots(SweepsOf(ordered), ordered, settings);
+            }
+
+            BatchSummaryFiles.WriteTo(settings.OutputRoot, ordered);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            error.WriteLine($"cannot write the merged summary under '{settings.OutputRoot}': {exception.Message}");
+            return ExitCodes.OutputFailed;
+        }
+
+        BatchRun.Report(ordered, settings, output, error, cancelled: false);
+        return BatchRun.OutcomeCode(ordered, cancelled: false);
+    }
+
+    /// <summary>
+    /// The sweeps whose sub-cases the rows hold, read again from their case files (which the shards read by the
+    /// same paths); a sweep file that is gone or changed simply gets no plot.
+    /// </summary>
+    private static List<SweepGroup> SweepsOf(IReadOnlyList<BatchRow> rows) =>
+        rows.Where(row => row.Parameters.Count > 0)
+            .Select(row => row.File)
+            .Distinct(StringComparer.Ordinal)
+            .Where(File.Exists)
+            .SelectMany(file => BatchCollector.Collect([file], recursive: false).Sweeps)
+            .ToList();
+
+    /// <summary>Solve times from a timing.csv, when there is one (case names never hold commas they would quote).</summary>
+    private static Dictionary<string, double> Timing(string path)
+    {
+        var times = new Dictionary<string, double>(StringComparer.Ordinal);
+        if (!File.Exists(path))
+        {
+            return times;
+        }
+
+        foreach (var line in File.ReadAllLines(path).Skip(1))
+        {
+            var comma = line.LastIndexOf(',');
+            if (comma > 0 && double.TryParse(line[(comma + 1)..], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out var seconds))
+            {
+                times[line[..comma].Trim('"')] = seconds;
+            }
+        }
+
+        return times;
+    }
+}

@@ -1,0 +1,86 @@
+using Layers.Core.Cases;
+
+namespace Layers.Core.Batch;
+
+/// <summary>
+/// Turns the paths given to <c>layers run</c> into the list of cases to run: a folder stands for every <c>*.json</c>
+/// in it (in its sub-folders too when recursive), a sweep file for its sub-cases. A file that cannot be read or a
+/// sweep that cannot be expanded becomes a case with its errors, so that it gets its own row like any other bad
+/// case. The list is ordered by name, so everything derived from it is independent of the order of the paths.
+/// </summary>
+public static class BatchCollector
+{
+    /// <summary>Collects the cases.</summary>
+    /// <param name="paths">Case files and folders as given.</param>
+    /// <param name="recursive">Look into sub-folders of the folders given.</param>
+    public static BatchCollection Collect(IEnumerable<string> paths, bool recursive)
+    {
+        var files = new List<string>();
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var path in paths)
+        {
+            var found = Directory.Exists(path)
+                ? Directory.EnumerateFiles(path, "*.json", recursive ? SearchOption.AllDirectories : SearchOption.TopDirectoryOnly)
+                    .Order(StringComparer.Ordinal).ToList()
+                : new List<string> { path };
+            files.AddRange(found.Where(file => seen.Add(Path.GetFullPath(file))));
+        }
+
+        var items = new List<BatchItem>();
+        var sweeps = new List<SweepGroup>();
+        foreach (var file in files)
+        {
+            items.AddRange(Expand(file, sweeps));
+        }
+
+        return new BatchCollection(MarkDuplicates(items), sweeps.OrderBy(sweep => sweep.Name, StringComparer.Ordinal).ToList());
+    }
+
+    private static IEnumerable<BatchItem> Expand(string file, List<SweepGroup> sweeps)
+    {
+        var name = Path.GetFileNameWithoutExtension(file);
+        string text;
+        try
+        {
+            text = File.ReadAllText(file);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            return [new BatchItem(name, file, null, [new CaseError("$", $"cannot read the file: {exception.Message}")], [])];
+        }
+
+        if (!SweepExpander.Declares(text))
+        {
+            return [new BatchItem(name, file, text, [], [])];
+        }
+
+        var expansion = SweepExpander.Expand(text, file);
+        if (!expansion.IsValid || expansion.Result is not { } result)
+        {
+            return [new BatchItem(name, file, null, expansion.Errors, [])];
+        }
+
+        sweeps.Add(new SweepGroup(name, file, result, expansion.Variants.Select(variant => variant.Name).ToList()));
+        return expansion.Variants.Select(variant => new BatchItem(variant.Name, file, variant.Json, [], variant.Values));
+    }
+
+    /// <summary>
+    /// Two cases with one name would write the same results folder: the first by file path keeps the name, the
+    /// others are refused with a message naming the file that has it.
+    /// </summary>
+    private static List<BatchItem> MarkDuplicates(List<BatchItem> items)
+    {
+        var ordered = items.OrderBy(item => item.Name, StringComparer.Ordinal).ThenBy(item => item.File, StringComparer.Ordinal).ToList();
+        for (var i = 1; i < ordered.Count; i++)
+        {
+            var first = ordered.FindIndex(item => item.Name == ordered[i].Name);
+            if (first < i)
+            {
+                var error = new CaseError("$", $"the case name '{ordered[i].Name}' is already used by {ordered[first].File}; results folders are named after the case, so rename one file");
+                ordered[i] = ordered[i] with { Json = null, Errors = [.. ordered[i].Errors, error] };
+            }
+        }
+
+        return ordered;
+    }
+}

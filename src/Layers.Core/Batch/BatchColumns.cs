@@ -1,0 +1,50 @@
+using System.Globalization;
+using Layers.Core.Reports;
+
+namespace Layers.Core.Batch;
+
+/// <summary>
+/// The columns of summary.csv and summary.md, in order, with their units in the names: one place, so that the CSV,
+/// the Markdown table and docs/outputs.md agree.
+/// </summary>
+public static class BatchColumns
+{
+    /// <summary>Column names of summary.csv.</summary>
+    public static IReadOnlyList<string> Names { get; } =
+    [
+        "case", "file", "parameters", "status", "finalState", "leftReceivedKgPerSquareMeter", "rightReceivedKgPerSquareMeter",
+        "steadyFluxKgPerSquareMeterSecond", "lagTimeSeconds", "timeTo90PercentSeconds", "worstMassBalanceError",
+        "limit", "limitVerdict", "message",
+    ];
+
+    /// <summary>The cells of a row, in the order of <see cref="Names"/>; numbers in invariant culture, G10.</summary>
+    public static IReadOnlyList<string> Cells(BatchRow row)
+    {
+        var results = row.Results;
+        return
+        [
+            row.Name, row.File, Parameters(row), StatusName(row.Status), results?.FinalState ?? string.Empty,
+            Number(results?.LeftReceivedKgPerSquareMeter), Number(results?.RightReceivedKgPerSquareMeter),
+            Number(results?.SteadyFluxKgPerSquareMeterSecond), Number(results?.LagTimeSeconds),
+            Number(results?.TimeTo90PercentSeconds), Number(results?.WorstMassBalanceError),
+            row.Limit is { } limit ? $"{limit.Quantity} <= {CsvText.Number(limit.LimitSi)}" : string.Empty,
+            row.Limit is { } check ? (check.Exceeded ? "exceeded" : "within") : string.Empty,
+            row.Message,
+        ];
+    }
+
+    /// <summary>"path = value; ..." of the swept values.</summary>
+    public static string Parameters(BatchRow row) => string.Join("; ", row.Parameters.Select(value => $"{value.Path} = {value.Written}"));
+
+    /// <summary>The status as written in the summaries: succeeded, invalid, failed, cancelled.</summary>
+    public static string StatusName(BatchStatus status) => status.ToString().ToLowerInvariant();
+
+    /// <summary>Reads a status name back.</summary>
+    public static BatchStatus? ParseStatus(string text) =>
+        Enum.GetValues<BatchStatus>().Where(status => StatusName(status) == text).Select(status => (BatchStatus?)status).FirstOrDefault();
+
+    private static string Number(double? value) => value is { } number && double.IsFinite(number) ? CsvText.Number(number) : string.Empty;
+
+    /// <summary>Seconds for a timing column.</summary>
+    internal static string Seconds(double? value) => value?.ToString("F3", CultureInfo.InvariantCulture) ?? string.Empty;
+}

@@ -1,0 +1,114 @@
+using System.Diagnostics;
+using Layers.Core.Cases;
+using Layers.Core.Reports;
+using Layers.Core.Results;
+using Layers.Core.Simulation;
+
+namespace Layers.Core.Batch;
+
+/// <summary>What the runner tells its caller as cases start and end (called from worker threads).</summary>
+public interface IBatchProgress
+{
+    /// <summary>A case has started.</summary>
+    void Started(BatchItem item);
+
+    /// <summary>A case has ended, with its row.</summary>
+    void Finished(BatchRow row);
+}
+
+/// <summary>
+/// Runs the cases of a batch in parallel, at most <c>jobs</c> at a time. Each case is read, solved and written on
+/// its own: a bad or failing case becomes a row with its message and never stops the others. Each case folder is
+/// written as a whole (<see cref="CaseOutputFolder"/>). On cancellation the cases running are stopped, the ones not
+/// started are marked cancelled, and the cases already written keep their results.
+/// </summary>
+public static class BatchRunner
+{
+    /// <summary>Runs the cases and returns one row per case, in the order of <see cref="BatchRow.Ordered"/>.</summary>
+    /// <param name="items">The cases.</param>
+    /// <param name="outputRoot">The folder that receives one folder per case.</param>
+    /// <param name="jobs">How many cases run at once (at least 1).</param>
+    /// <param name="buildFiles">The files to write for a solved case, by name (summary.json, CSV, plots ...).</param>
+    /// <param name="progress">Told about starts and ends; may be null.</param>
+    /// <param name="cancellation">Stops the batch.</param>
+    public static IReadOnlyList<BatchRow> Run(
+        IReadOnlyList<BatchItem> items,
+        string outputRoot,
+        int jobs,
+        Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
+        IBatchProgress? progress,
+        CancellationToken cancellation)
+    {
+        var rows = new BatchRow[items.Count];
+        var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, jobs) };
+        // The token is checked per case rather than given to Parallel.For, which would throw instead of letting the
+        // cases not started get their cancelled rows.
+        Parallel.For(0, items.Count, options, index =>
+        {
+            var item = items[index];
+            if (cancellation.IsCancellationRequested)
+            {
+                rows[index] = Row(item, BatchStatus.Cancelled, "not started: the run was cancelled");
+                return;
+            }
+
+            progress?.Started(item);
+            rows[index] = RunOne(item, outputRoot, buildFiles, cancellation);
+            progress?.Finished(rows[index]);
+        });
+        return BatchRow.Ordered(rows);
+    }
+
+    private static BatchRow RunOne(
+        BatchItem item,
+        string outputRoot,
+        Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
+        CancellationToken cancellation)
+    {
+        if (item.Json is null)
+        {
+            return Row(item, BatchStatus.Invalid, Describe(item.Errors, item.File));
+        }
+
+        var read = CaseReader.ReadText(item.Json, item.File);
+        if (read.Case is not { } simulation)
+        {
+            return Row(item, BatchStatus.Invalid, Describe(read.Errors, item.File));
+        }
+
+        var clock = Stopwatch.StartNew();
+        try
+        {
+            var result = Simulator.Run(simulation, cancellation);
+            var seconds = clock.Elapsed.TotalSeconds;
+            if (!result.Completed)
+            {
+                return result.Statistics.StopReason == TimeStepping.StopReason.Cancelled
+                    ? Row(item, BatchStatus.Cancelled, "stopped: the run was cancelled; nothing written")
+                    : Row(item, BatchStatus.Failed, $"the solver stopped early ({result.Statistics}); nothing written");
+            }
+
+            CaseOutputFolder.Write(outputRoot, item.Name, buildFiles(result, item));
+            return new BatchRow(item.Name, item.File, item.Parameters, BatchStatus.Succeeded, string.Empty, BatchKeyResults.From(result))
+            {
+                SolveSeconds = seconds,
+            };
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            return Row(item, BatchStatus.Failed, $"cannot write results under '{outputRoot}': {exception.Message}");
+        }
+#pragma warning disable CA1031 // One case's unexpected failure (a bug) must not stop the other cases: it becomes its row.
+        catch (Exception exception)
+#pragma warning restore CA1031
+        {
+            return Row(item, BatchStatus.Failed, $"unexpected error: {exception.GetType().Name}: {exception.Message}");
+        }
+    }
+
+    private static BatchRow Row(BatchItem item, BatchStatus status, string message) =>
+        new(item.Name, item.File, item.Parameters, status, message, null);
+
+    private static string Describe(IReadOnlyList<CaseError> errors, string file) =>
+        string.Join("; ", errors.Select(error => error.Format(file)));
+}

@@ -1,0 +1,121 @@
+using System.Text;
+using System.Text.Json;
+using Layers.Core.Cases;
+using Layers.Core.Reports;
+
+namespace Layers.Core.Batch;
+
+/// <summary>
+/// summary.json of a batch: tool, caution, counts by status and one entry per case with its key results in SI
+/// units. Deterministic (no clock readings). <see cref="Read"/> reads it back for <c>layers merge</c>.
+/// </summary>
+public static class BatchSummaryJson
+{
+    /// <summary>The JSON text for rows already in order.</summary>
+    public static string Write(IReadOnlyList<BatchRow> rows)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            json.WriteStartObject();
+            json.WriteStartObject("tool");
+            json.WriteString("name", ToolInfo.Name);
+            json.WriteString("version", ToolInfo.Version);
+            json.WriteEndObject();
+            json.WriteString("caution", CautionText.Paragraph);
+            json.WriteStartObject("counts");
+            foreach (var status in Enum.GetValues<BatchStatus>())
+            {
+                json.WriteNumber(BatchColumns.StatusName(status), rows.Count(row => row.Status == status));
+            }
+
+            json.WriteEndObject();
+            json.WriteStartArray("cases");
+            foreach (var row in rows)
+            {
+                WriteRow(json, row);
+            }
+
+            json.WriteEndArray();
+            json.WriteEndObject();
+        }
+
+        return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+    }
+
+    /// <summary>The rows of a summary.json; throws <see cref="JsonException"/> or <see cref="KeyNotFoundException"/> when it is not one.</summary>
+    public static IReadOnlyList<BatchRow> Read(string text)
+    {
+        using var document = JsonDocument.Parse(text);
+        var rows = new List<BatchRow>();
+        foreach (var entry in document.RootElement.GetProperty("cases").EnumerateArray())
+        {
+            var status = BatchColumns.ParseStatus(entry.GetProperty("status").GetString()!)
+                ?? throw new JsonException($"unknown status '{entry.GetProperty("status").GetString()}'");
+            var parameters = entry.GetProperty("parameters").EnumerateArray()
+                .Select(value => SweepValues.Of(value.GetProperty("path").GetString()!, value.GetProperty("value").GetString()!))
+                .ToList();
+            rows.Add(new BatchRow(
+                entry.GetProperty("name").GetString()!,
+                entry.GetProperty("file").GetString()!,
+                parameters,
+                status,
+                entry.GetProperty("message").GetString()!,
+                entry.GetProperty("results") is { ValueKind: JsonValueKind.Object } results ? ReadResults(results) : null));
+        }
+
+        return rows;
+    }
+
+    private static void WriteRow(Utf8JsonWriter json, BatchRow row)
+    {
+        json.WriteStartObject();
+        json.WriteString("name", row.Name);
+        json.WriteString("file", row.File);
+        json.WriteStartArray("parameters");
+        foreach (var value in row.Parameters)
+        {
+            json.WriteStartObject();
+            json.WriteString("path", value.Path);
+            json.WriteString("value", value.Written);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+        json.WriteString("status", BatchColumns.StatusName(row.Status));
+        json.WriteString("message", row.Message);
+        if (row.Results is { } results)
+        {
+            json.WriteStartObject("results");
+            json.WriteString("finalState", results.FinalState);
+            SummaryJson.WriteNullable(json, "leftReceivedKgPerSquareMeter", results.LeftReceivedKgPerSquareMeter);
+            SummaryJson.WriteNullable(json, "rightReceivedKgPerSquareMeter", results.RightReceivedKgPerSquareMeter);
+            SummaryJson.WriteNullable(json, "steadyFluxKgPerSquareMeterSecond", results.SteadyFluxKgPerSquareMeterSecond);
+            SummaryJson.WriteNullable(json, "lagTimeSeconds", results.LagTimeSeconds);
+            SummaryJson.WriteNullable(json, "timeTo90PercentSeconds", results.TimeTo90PercentSeconds);
+            json.WriteNumber("worstMassBalanceError", results.WorstMassBalanceError);
+            json.WriteEndObject();
+        }
+        else
+        {
+            json.WriteNull("results");
+        }
+
+        // Reserved for the limit key of the case format (see LimitCheck); null until then.
+        json.WriteNull("limit");
+        json.WriteEndObject();
+    }
+
+    private static BatchKeyResults ReadResults(JsonElement results)
+    {
+        double? Optional(string key) => results.GetProperty(key) is { ValueKind: JsonValueKind.Number } value ? value.GetDouble() : null;
+        return new BatchKeyResults(
+            results.GetProperty("finalState").GetString()!,
+            Optional("leftReceivedKgPerSquareMeter"),
+            Optional("rightReceivedKgPerSquareMeter"),
+            Optional("steadyFluxKgPerSquareMeterSecond"),
+            Optional("lagTimeSeconds"),
+            Optional("timeTo90PercentSeconds"),
+            results.GetProperty("worstMassBalanceError").GetDouble());
+    }
+}

@@ -1,0 +1,195 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using System.Text.RegularExpressions;
+
+namespace Layers.Core.Cases;
+
+/// <summary>
+/// Expands a case that declares <c>"sweep"</c> into one document per combination of the swept values (the
+/// Cartesian product, first parameter varying slowest). Each value is substituted into the document at its JSON
+/// path before the case is read, so every rule of the case format checks every sub-case.
+/// The keys are described in docs/case-format.md, section "Sweeps".
+/// </summary>
+public static partial class SweepExpander
+{
+    /// <summary>The most sub-cases one sweep may produce; a larger product is almost always a typing mistake.</summary>
+    public const int MaximumVariants = 100_000;
+
+    private static readonly string[] SweepKeys = ["parameters", "result"];
+
+    private static readonly Dictionary<string, SweepResult> ResultNames = new(StringComparer.Ordinal)
+    {
+        ["leftReceived"] = SweepResult.LeftReceived,
+        ["rightReceived"] = SweepResult.RightReceived,
+        ["steadyFlux"] = SweepResult.SteadyFlux,
+        ["lagTime"] = SweepResult.LagTime,
+        ["timeTo90Percent"] = SweepResult.TimeTo90Percent,
+    };
+
+    /// <summary>True when <paramref name="json"/> is a JSON object with a top-level <c>sweep</c> member.</summary>
+    public static bool Declares(string json)
+    {
+        try
+        {
+            using var document = JsonDocument.Parse(json);
+            return document.RootElement.ValueKind == JsonValueKind.Object && document.RootElement.TryGetProperty("sweep", out _);
+        }
+        catch (JsonException)
+        {
+            return false;
+        }
+    }
+
+    /// <summary>The sub-cases of a sweep document, or the errors in its <c>sweep</c> member.</summary>
+    /// <param name="json">The whole case document, which declares <c>sweep</c>.</param>
+    /// <param name="fileName">The file, whose name without extension starts every sub-case name.</param>
+    public static SweepExpansion Expand(string json, string fileName)
+    {
+        var errors = new List<CaseError>();
+        using (var document = JsonDocument.Parse(json))
+        {
+            if (DuplicateKeys.First(document.RootElement) is { } repeated)
+            {
+                return Failed(new CaseError(repeated, "appears more than once in this object; keep one"));
+            }
+        }
+
+        var root = (JsonObject)JsonNode.Parse(json)!;
+        var sweep = root["sweep"] as JsonObject;
+        if (sweep is null)
+        {
+            return Failed(new CaseError("$.sweep", "expected an object { \"parameters\": [...], \"result\": ... }"));
+        }
+
+        foreach (var (key, _) in sweep)
+        {
+            if (!SweepKeys.Contains(key))
+            {
+                errors.Add(new CaseError($"$.sweep.{key}", $"unknown key; expected one of {string.Join(", ", SweepKeys)}"));
+            }
+        }
+
+        var result = ReadResult(sweep, errors);
+        var parameters = ReadParameters(root, sweep, errors);
+        if (errors.Count > 0)
+        {
+            return new SweepExpansion([], result, errors);
+        }
+
+        var total = parameters.Aggregate(1L, (product, parameter) => product * parameter.Values.Count);
+        if (total > MaximumVariants)
+        {
+            return Failed(new CaseError("$.sweep.parameters", FormattableString.Invariant(
+                $"the sweep would make {total} sub-cases; at most {MaximumVariants} are allowed")));
+        }
+
+        root.Remove("sweep");
+        var stem = Path.GetFileNameWithoutExtension(fileName);
+        var title = root["title"] is JsonValue given && given.TryGetValue<string>(out var text) ? text : stem;
+        var variants = new List<SweepVariant>();
+        var width = Math.Max(2, total.ToString(CultureInfo.InvariantCulture).Length);
+        foreach (var combination in Combinations(parameters))
+        {
+            var copy = root.DeepClone().AsObject();
+            foreach (var (parameter, value) in parameters.Zip(combination))
+            {
+                JsonPathSteps.Replace(copy, parameter.Steps, value.Node.DeepClone());
+            }
+
+            var values = combination.Select(value => value.Value).ToList();
+            var variant = new SweepVariant(
+                $"{stem}.{(variants.Count + 1).ToString(CultureInfo.InvariantCulture).PadLeft(width, '0')}_{Slug(values)}",
+                string.Empty,
+                values);
+            copy["title"] = $"{title} ({variant.Describe()})";
+            variants.Add(variant with { Json = copy.ToJsonString(new JsonSerializerOptions { WriteIndented = true }) });
+        }
+
+        return new SweepExpansion(variants, result, []);
+    }
+
+    private static SweepExpansion Failed(CaseError error) => new([], null, [error]);
+
+    private static SweepResult? ReadResult(JsonObject sweep, List<CaseError> errors)
+    {
+        var expected = string.Join(", ", ResultNames.Keys);
+        if (sweep["result"] is null)
+        {
+            errors.Add(new CaseError("$.sweep.result", $"is required; one of {expected}"));
+            return null;
+        }
+
+        if (sweep["result"] is JsonValue value && value.TryGetValue<string>(out var name) && ResultNames.TryGetValue(name, out var result))
+        {
+            return result;
+        }
+
+        errors.Add(new CaseError("$.sweep.result", $"must be one of {expected}; got {sweep["result"]!.ToJsonString()}"));
+        return null;
+    }
+
+    private static List<SweepParameter> ReadParameters(JsonObject root, JsonObject sweep, List<CaseError> errors)
+    {
+        var parameters = new List<SweepParameter>();
+        if (sweep["parameters"] is not JsonArray list || list.Count == 0)
+        {
+            errors.Add(new CaseError("$.sweep.parameters", "expected a non-empty array of parameters"));
+            return parameters;
+        }
+
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        for (var i = 0; i < list.Count; i++)
+        {
+            var at = FormattableString.Invariant($"$.sweep.parameters[{i}]");
+            if (SweepParameterReader.Read(root, list[i], at, errors) is { } parameter)
+            {
+                if (!seen.Add(parameter.Path))
+                {
+                    errors.Add(new CaseError($"{at}.path", $"'{parameter.Path}' is already swept by an earlier parameter"));
+                }
+
+                parameters.Add(parameter);
+            }
+        }
+
+        return parameters;
+    }
+
+    private static IEnumerable<IReadOnlyList<SweepParameter.Choice>> Combinations(IReadOnlyList<SweepParameter> parameters)
+    {
+        IEnumerable<IReadOnlyList<SweepParameter.Choice>> combinations = [[]];
+        foreach (var parameter in parameters)
+        {
+            var current = combinations;
+            combinations = current.SelectMany(prefix => parameter.Values.Select(value => (IReadOnlyList<SweepParameter.Choice>)[.. prefix, value]));
+        }
+
+        return combinations;
+    }
+
+    /// <summary>
+    /// A short, filesystem-safe text of the values: letters, digits, '.', '+' and '-' kept, spaces dropped, anything
+    /// else (such as the '/' of a unit) replaced by '_', so the name is the same on every operating system.
+    /// </summary>
+    private static string Slug(IEnumerable<SweepValue> values)
+    {
+        var slug = new StringBuilder();
+        foreach (var value in values)
+        {
+            if (slug.Length > 0)
+            {
+                slug.Append('_');
+            }
+
+            var label = value.Label[(value.Label.LastIndexOf('.') + 1)..];
+            slug.Append(SafeName().Replace(label, "_")).Append('-').Append(SafeName().Replace(value.Written.Replace(" ", string.Empty, StringComparison.Ordinal), "_"));
+        }
+
+        return slug.Length > 80 ? slug.ToString(0, 80) : slug.ToString();
+    }
+
+    [GeneratedRegex("[^A-Za-z0-9.+-]")]
+    private static partial Regex SafeName();
+}
