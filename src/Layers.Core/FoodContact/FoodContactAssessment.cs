@@ -15,7 +15,7 @@ namespace Layers.Core.FoodContact;
 /// start of the accepted step over which the food crossed the limit, the stage's system is re-integrated (with the
 /// same error control) to a trial time, and the root of c_food(t) - limit is bracketed in that step. The time is
 /// therefore as accurate as the integration: a relative error e in c_food moves it by about e c / (dc/dt);
-/// the root finder's own tolerance is 1e-9 of the step.
+/// the root finder's own tolerance is 1e-10 of the step and of c/limit.
 /// </remarks>
 internal static class FoodContactAssessment
 {
@@ -79,19 +79,21 @@ internal static class FoodContactAssessment
             return bracket.StartSeconds;
         }
 
+        // Relative excess c/level - 1 and the time as a fraction of the step, so that Brent's tolerance (which
+        // Math.NET applies to the function value as well as to the argument) means the same for every case.
         var system = stages[bracket.Stage].System;
-        double Excess(double step) => step <= 0
-            ? watcher.ValueOf(bracket.StartState) - level
-            : watcher.ValueOf(Integrate(system, bracket.StartState, step, options)) - level;
+        double Excess(double fraction) => fraction <= 0
+            ? (watcher.ValueOf(bracket.StartState) / level) - 1
+            : (watcher.ValueOf(Integrate(system, bracket.StartState, fraction * width, options)) / level) - 1;
 
         // Re-integrating the whole step with sub-steps can land a hair below the limit when the step itself ended a
         // hair above it; the crossing is then at the step's end to within the integration tolerance.
-        if (Excess(width) < 0)
+        if (Excess(1) < 0)
         {
             return bracket.EndSeconds;
         }
 
-        return bracket.StartSeconds + Brent.FindRoot(Excess, 0, width, 1e-9 * width, 200);
+        return bracket.StartSeconds + (width * Brent.FindRoot(Excess, 0, 1, 1e-10, 200));
     }
 
     private static double[] Integrate(DiffusionSystem system, double[] start, double seconds, SolverOptions options)
