@@ -67,8 +67,8 @@ internal static class FoodContactReader
 
         ReadStages(fields, input, context);
         ReadLayerDiffusion(fields, input, context);
-        input.Limit = MassFraction(fields, "specificMigrationLimit", context);
-        input.DetectionLimit = MassFraction(fields, "detectionLimit", context) ?? input.DetectionLimit;
+        input.Limit = ReadContext.Positive(fields, "specificMigrationLimit", Dimension.MassFraction, required: false);
+        input.DetectionLimit = ReadContext.Positive(fields, "detectionLimit", Dimension.MassFraction, required: false) ?? input.DetectionLimit;
         if (fields.Member("testCondition") is { } testElement
             && JsonFields.Open(testElement, fields.PathOf("testCondition"), context.Errors, TestKeys) is { } test)
         {
@@ -264,13 +264,6 @@ internal static class FoodContactReader
 
             input.Layers[member.Name] = (null, reference is { } r && energy is { } ea ? new ArrheniusDiffusivity(double.NaN, r, ea.SiValue) : null, path);
         }
-    }
-
-    private static double? MassFraction(JsonFields fields, string key, ReadContext context)
-    {
-        var value = ReadContext.Positive(fields, key, Dimension.MassFraction, required: false);
-        _ = context;
-        return value;
     }
 
     private static Side? FoodSide(Input input, FaceCondition? left, FaceCondition? right, ReadContext context)

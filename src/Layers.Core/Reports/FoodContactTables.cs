@@ -22,7 +22,33 @@ public static class FoodContactTables
     public static IReadOnlyList<TextTable> For(SimulationResult result)
     {
         ArgumentNullException.ThrowIfNull(result);
-        return result.FoodContact is { } food ? [Figures(result, food), Diffusivities(result, food)] : [];
+        return result.FoodContact is { } food ? [Figures(result, food), .. Stages(result.Case)] : [];
+    }
+
+    /// <summary>
+    /// Each stage's temperature and every layer's D in it with where it comes from, for a case with food-contact
+    /// settings (empty otherwise); shown by <c>check</c> as well, since the layer table there gives D at the first stage.
+    /// </summary>
+    public static IReadOnlyList<TextTable> Stages(SimulationCase simulation)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        if (simulation.FoodContact is not { } settings)
+        {
+            return [];
+        }
+
+        var format = new DisplayFormat(simulation.Display);
+        var rows = new List<IReadOnlyList<string>>();
+        foreach (var stage in settings.Stages)
+        {
+            foreach (var layer in simulation.Stack.Layers)
+            {
+                var (value, origin) = stage.DiffusivityOf(layer.Name, settings.Diffusivities[layer.Name]);
+                rows.Add([$"{stage.Name}, {format.Time(stage.DurationSeconds)} at {Celsius(stage.TemperatureKelvin)}", layer.Name, Number(value * 1e4), origin]);
+            }
+        }
+
+        return [new TextTable("Diffusion coefficients by stage", ["stage", "layer", "D [cm2/s]", "where it comes from"], rows)];
     }
 
     private static TextTable Figures(SimulationResult result, FoodContactResult food)
@@ -76,21 +102,6 @@ public static class FoodContactTables
         }
 
         return new TextTable("Food contact", ["quantity", "value"], rows);
-    }
-
-    private static TextTable Diffusivities(SimulationResult result, FoodContactResult food)
-    {
-        var rows = new List<IReadOnlyList<string>>();
-        foreach (var stage in food.Stages)
-        {
-            foreach (var (layer, value, origin) in stage.Diffusivities)
-            {
-                rows.Add([$"{stage.Name} ({Celsius(stage.TemperatureKelvin)})", layer, Number(value * 1e4), origin]);
-            }
-        }
-
-        _ = result;
-        return new TextTable("Diffusion coefficients by stage", ["stage", "layer", "D [cm2/s]", "where it comes from"], rows);
     }
 
     private static string MgPerKg(double massFraction) => $"{Number(massFraction * 1e6)} mg/kg";

@@ -130,10 +130,6 @@ public static class StagedIntegration
                 BathsAtEnd = Shift(bathInflow);
                 _reachedEnd = true;
             }
-            else if (!_reachedEnd)
-            {
-                BathsAtEnd = Shift(default);
-            }
         }
 
         private BathTotals Shift(BathTotals stage)
