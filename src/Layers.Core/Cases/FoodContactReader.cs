@@ -86,14 +86,6 @@ internal static class FoodContactReader
             input.Convention = null;
         }
 
-        foreach (var (name, entry) in input.Layers)
-        {
-            if (entry.Source is EstimatedDiffusivity)
-            {
-                context.LayersWithEstimatedDiffusivity.Add(name);
-            }
-        }
-
         return input;
     }
 
@@ -104,8 +96,10 @@ internal static class FoodContactReader
     public static (FoodContactSettings? Settings, List<Layer> Layers) Resolve(
         Input input, JsonFields root, List<Layer> layers, FaceCondition? left, FaceCondition? right, ReadContext context)
     {
-        var names = layers.Select(layer => layer.Name).ToHashSet(StringComparer.Ordinal);
-        var known = string.Join(", ", layers.Select(layer => $"'{layer.Name}'"));
+        // Names as written, so that a layer dropped for an error of its own is still known here.
+        var written = WrittenLayerNames(root);
+        var names = written.ToHashSet(StringComparer.Ordinal);
+        var known = string.Join(", ", written.Select(name => $"'{name}'"));
         foreach (var (name, entry) in input.Layers.Where(pair => !names.Contains(pair.Key)))
         {
             context.Errors.Add(new CaseError(entry.Path, $"no layer is named '{name}'; the layers are {known}"));
@@ -149,6 +143,25 @@ internal static class FoodContactReader
             EquivalenceActivationEnergy = input.ActivationEnergy,
             PartitionConvention = input.Convention,
         }, placed);
+    }
+
+    private static List<string> WrittenLayerNames(JsonFields root)
+    {
+        var names = new List<string>();
+        if (root.Member("layers") is { ValueKind: JsonValueKind.Array } array)
+        {
+            foreach (var element in array.EnumerateArray())
+            {
+                if (element.ValueKind == JsonValueKind.Object
+                    && element.TryGetProperty("name", out var name)
+                    && name.ValueKind == JsonValueKind.String)
+                {
+                    names.Add(name.GetString()!);
+                }
+            }
+        }
+
+        return names;
     }
 
     private static void ReadStages(JsonFields fields, Input input, ReadContext context)
@@ -236,6 +249,8 @@ internal static class FoodContactReader
 
             if (isEstimate)
             {
+                // Even with a mistake in the estimate, the layer is meant to give no D of its own: say so only once.
+                context.LayersWithEstimatedDiffusivity.Add(member.Name);
                 var polymerName = entry.Text("polymer", required: true);
                 var polymer = polymerName is null ? null : PolymerTable.Find(polymerName);
                 if (polymerName is not null && polymer is null)
