@@ -20,7 +20,7 @@ internal static class CheckCommand
             }
 
             output.WriteLine($"{simulation.Title} ({parseResult.GetValue(caseFile)}): valid");
-            ConsoleTables.Write(output, InputTables.Layers(simulation), InputTables.Conditions(simulation));
+            ConsoleTables.Write(output, [InputTables.Layers(simulation), InputTables.Conditions(simulation), .. FoodContactTables.Stages(simulation)]);
             return ExitCodes.Success;
         });
         return command;

@@ -168,10 +168,14 @@ internal static class RunCommand
         {
             output.WriteLine($"{simulation.Title} ({casePath})");
             output.WriteLine($"  stack: {StackText.Describe(simulation)}");
-            ConsoleTables.Write(output, ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result));
+            ConsoleTables.Write(output, [ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result), .. FoodContactTables.For(result)]);
             output.WriteLine($"results: {folder}");
             output.WriteLine();
             output.WriteLine(CautionText.Paragraph);
+            if (result.FoodContact is not null)
+            {
+                output.WriteLine(FoodContactTables.Caution);
+            }
         }
 
         return ExitCodes.Success;

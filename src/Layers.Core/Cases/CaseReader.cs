@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using Layers.Core.Discretization;
@@ -16,7 +17,7 @@ public static class CaseReader
     private static readonly string[] TopKeys =
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
-        "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "sweep",
+        "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "sweep", "foodContact",
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
@@ -102,15 +103,21 @@ public static class CaseReader
         var title = root.Text("title") ?? Path.GetFileNameWithoutExtension(fileName);
         root.Text("description");
         var referenceName = ReadBasisAndReference(root, context);
+        var food = FoodContactReader.Read(root, context);
         var layers = LayerReader.Read(root, context);
         var left = FaceReader.Read(root, "left", context);
         var right = FaceReader.Read(root, "right", context);
-        var duration = TimesReader.Duration(root, context);
-        var durationText = root.Written("duration");
+        var (duration, durationText) = ReadDuration(root, food, context);
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
         var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));
+        FoodContact.FoodContactSettings? foodSettings = null;
+        if (food is not null)
+        {
+            (foodSettings, layers) = FoodContactReader.Resolve(food, root, layers, left, right, context);
+        }
+
         if (context.Errors.Count > 0 || left is null || right is null || duration is not { } end)
         {
             return null;
@@ -129,7 +136,27 @@ public static class CaseReader
             Grid = grid,
             Solver = solver,
             Display = display,
+            FoodContact = foodSettings,
         };
+    }
+
+    /// <summary>The duration: given, or with food-contact stages their sum (then it must not be given as well).</summary>
+    private static (double? Seconds, string Text) ReadDuration(JsonFields root, FoodContactReader.Input? food, ReadContext context)
+    {
+        if (food is null)
+        {
+            return (TimesReader.Duration(root, context), root.Written("duration"));
+        }
+
+        if (root.Has("duration"))
+        {
+            root.Error("duration", "must be left out: $.foodContact.stages give the duration");
+        }
+
+        var total = food.TotalSeconds;
+        return total > 0
+            ? (total, string.Create(CultureInfo.InvariantCulture, $"{total / 86400:0.####} d, the sum of the stages"))
+            : (null, string.Empty);
     }
 
     private static string ReadBasisAndReference(JsonFields root, ReadContext context)

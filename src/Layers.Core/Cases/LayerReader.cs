@@ -57,7 +57,14 @@ internal static class LayerReader
     private static Layer? ReadLayer(JsonFields fields, ReadContext context, string? name)
     {
         var thickness = ReadContext.Positive(fields, "thickness", Dimension.Length, required: true);
-        var diffusivity = ReadContext.Positive(fields, "diffusionCoefficient", Dimension.Diffusivity, required: true);
+        // A layer whose D is estimated from its polymer gives none itself; it is placed by FoodContactReader.Resolve.
+        var estimated = name is not null && context.LayersWithEstimatedDiffusivity.Contains(name);
+        if (estimated && fields.Has("diffusionCoefficient"))
+        {
+            fields.Error("diffusionCoefficient", $"must be left out: $.foodContact.layerDiffusion.{name} estimates it");
+        }
+
+        var diffusivity = estimated ? double.NaN : ReadContext.Positive(fields, "diffusionCoefficient", Dimension.Diffusivity, required: true);
         var density = ReadContext.Positive(fields, "density", Dimension.MassConcentration, required: false);
         var k = context.PartitionCoefficient(fields, density);
         var concentration = context.Concentration(fields, "initialConcentration", density);

@@ -22,6 +22,9 @@ internal sealed class ReadContext
     /// <summary>True once any concentration was given as a mass fraction (a hint that the case is about foods).</summary>
     public bool SawMassFraction { get; private set; }
 
+    /// <summary>Names of the layers whose D is estimated in foodContact.layerDiffusion, so they give none themselves.</summary>
+    public HashSet<string> LayersWithEstimatedDiffusivity { get; } = new(StringComparer.Ordinal);
+
     /// <summary>True once a compartment was given by its mass (as foods are).</summary>
     public bool SawCompartmentByMass { get; set; }
 

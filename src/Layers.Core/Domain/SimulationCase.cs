@@ -1,4 +1,5 @@
 using Layers.Core.Discretization;
+using Layers.Core.FoodContact;
 using Layers.Core.TimeStepping;
 
 namespace Layers.Core.Domain;
@@ -43,6 +44,12 @@ public sealed record SimulationCase
 
     /// <summary>Units the user wrote, used only to present results in familiar units.</summary>
     public DisplayUnits Display { get; init; } = new();
+
+    /// <summary>
+    /// The food-contact settings (time-temperature stages, sources of D, limits), or null for a case solved at one
+    /// set of coefficients over <see cref="DurationSeconds"/>.
+    /// </summary>
+    public FoodContactSettings? FoodContact { get; init; }
 
     /// <summary>The face condition on the given side.</summary>
     public FaceCondition Face(Side side) => side == Side.Left ? Left : Right;

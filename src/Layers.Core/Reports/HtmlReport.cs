@@ -38,6 +38,15 @@ public static class HtmlReport
         html.Append("<h2>Results</h2>\n");
         AppendTable(html, ResultTables.AtReportTimes(result));
         AppendTable(html, ResultTables.KeyFigures(result));
+        foreach (var table in FoodContactTables.For(result))
+        {
+            AppendTable(html, table);
+        }
+
+        if (result.FoodContact is not null)
+        {
+            html.Append("<p class=\"caution\">").Append(Encode(FoodContactTables.Caution)).Append("</p>\n");
+        }
         foreach (var (name, png) in pictures)
         {
             html.Append(CultureInfo.InvariantCulture, $"<figure><img alt=\"{Encode(name)}\" src=\"data:image/png;base64,{Convert.ToBase64String(png)}\"><figcaption class=\"meta\">{Encode(name)}</figcaption></figure>\n");
@@ -59,6 +68,14 @@ public static class HtmlReport
         yield return "Each layer is homogeneous with a constant diffusion coefficient and partition coefficient; no swelling, reaction or concentration dependence.";
         yield return $"At every interface the flux is continuous and the concentrations are in partition equilibrium (c_i / c_j = K_i / K_j, K relative to {result.Case.ReferenceMedium}).";
         yield return "Compartments are perfectly mixed apart from any film resistance given; baths hold a fixed concentration.";
+        if (result.FoodContact is not null)
+        {
+            foreach (var assumption in Layers.Core.FoodContact.FoodContactResult.Assumptions)
+            {
+                yield return $"Food contact: {assumption}.";
+            }
+        }
+
         yield return string.Create(CultureInfo.InvariantCulture,
             $"Numerics: finite volumes ({result.Grid.CellCount} cells, graded toward interfaces), TR-BDF2 time steps ({result.Statistics.AcceptedSteps} accepted, relative tolerance {result.Case.Solver.RelativeTolerance:G2}); worst mass-balance error {result.WorstMassBalanceError:G2}.");
     }

@@ -32,6 +32,7 @@ public static class SummaryJson
             json.WriteEndObject();
             WriteMassBalance(json, result);
             SummaryJsonFinalState.Write(json, result);
+            SummaryJsonFoodContact.Write(json, result);
             WriteSolver(json, result);
             json.WriteEndObject();
         }

@@ -1,5 +1,6 @@
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
+using Layers.Core.FoodContact;
 using Layers.Core.TimeStepping;
 
 namespace Layers.Core.Results;
@@ -30,6 +31,9 @@ public sealed record SimulationResult
 
     /// <summary>Solver counters.</summary>
     public required SolverStatistics Statistics { get; init; }
+
+    /// <summary>The food-contact assessment, for a case with food-contact settings that ran to its end.</summary>
+    public FoodContactResult? FoodContact { get; init; }
 
     /// <summary>True when the time loop reached the end of the duration.</summary>
     public bool Completed => Statistics.StopReason == StopReason.Completed;

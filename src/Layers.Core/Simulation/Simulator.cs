@@ -1,6 +1,7 @@
 using Layers.Core.Analytics;
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
+using Layers.Core.FoodContact;
 using Layers.Core.Results;
 using Layers.Core.TimeStepping;
 
@@ -23,8 +24,12 @@ public static class Simulator
         var recorder = new ResultRecorder(simulation, system, initial, final);
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
-        var plan = new TimeLoopPlan(outputs, simulation.DurationSeconds, horizon, InitialStep(simulation, grid, outputs[0]));
-        var statistics = new TransientSolver(system, simulation.Solver).Run(initial, plan, recorder, cancellation);
+        var stages = StageSystem.For(simulation, grid);
+        var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(simulation, system, stages, initial);
+        ITimeLoopObserver observer = watcher is null ? recorder : new ObserverPair(recorder, watcher);
+        var statistics = StagedIntegration.Run(
+            stages, initial, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
+            simulation.Solver, observer, cancellation).Statistics;
 
         return new SimulationResult
         {
@@ -42,6 +47,9 @@ public static class Simulator
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
             Statistics = statistics,
+            FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
+                ? null
+                : FoodContactAssessment.Assess(simulation, grid, stages, initial, watcher, cancellation),
         };
     }
 
@@ -49,7 +57,7 @@ public static class Simulator
     /// First trial step: a thousandth of the fastest cell's diffusion time h^2/D, so that the first step resolves
     /// a step change in the initial concentration; the controller grows it geometrically from there.
     /// </summary>
-    private static double InitialStep(SimulationCase simulation, Grid grid, double firstOutput)
+    internal static double InitialStep(SimulationCase simulation, Grid grid, double firstOutput)
     {
         var fastest = double.PositiveInfinity;
         for (var cell = 0; cell < grid.CellCount; cell++)

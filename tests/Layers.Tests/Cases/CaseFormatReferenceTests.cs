@@ -36,6 +36,11 @@ public sealed class CaseFormatReferenceTests
         ["$.right"] = () => CaseJson.With(Film, ("$.right.mass", "\"150 g\"")),
         ["$.reportTimes[3]"] = () => CaseJson.With(Film, ("$.reportTimes[3]", "\"12 d\"")),
         ["$.numerics.cells"] = () => CaseJson.With(Film, ("$.numerics.cells", "4")),
+        ["$.foodContact.layerDiffusion.core"] = () => CaseJson.With(
+            Film,
+            ("$.duration", null),
+            ("$.foodContact", """{ "stages": [{ "duration": "10 d", "temperature": "25 degC" }], "layerDiffusion": { "core": { "referenceTemperature": "23 degC", "activationEnergy": "80 kJ/mol" } } }""")),
+        ["$.duration"] = () => CaseJson.With(Film, ("$.foodContact", """{ "stages": [{ "duration": "10 d", "temperature": "25 degC" }] }""")),
         // A missing comma after the thickness: the parser stops at the next key, line 5, column 7.
         ["$"] = () =>
             "{\n  \"layers\": [\n    {\n      \"thickness\": \"50 um\"\n      \"name\": \"film\"\n    }\n  ]\n}\n",

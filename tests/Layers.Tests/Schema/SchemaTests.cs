@@ -400,8 +400,9 @@ public class SchemaTests
     {
         if (subschema["properties"] is not JsonObject properties)
         {
-            // A dispatcher such as the face schema: its oneOf branches are the closed objects.
-            if (subschema["oneOf"] is null)
+            // A dispatcher such as the face schema: its oneOf branches are the closed objects. A map keyed by layer
+            // names (foodContact.layerDiffusion) has no fixed keys: its values' schema is additionalProperties.
+            if (subschema["oneOf"] is null && subschema["additionalProperties"] is not JsonObject)
             {
                 problems.Add($"{location}: an object schema without properties or oneOf");
             }

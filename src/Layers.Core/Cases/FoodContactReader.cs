@@ -1,0 +1,349 @@
+using System.Globalization;
+using System.Text.Json;
+using Layers.Core.Domain;
+using Layers.Core.FoodContact;
+using Layers.Core.Units;
+
+namespace Layers.Core.Cases;
+
+/// <summary>
+/// Reads <c>foodContact</c>: the time-temperature stages, where each layer's D comes from, the food face, the
+/// limits, a test condition and a worst-case partition convention. Read in two passes: <see cref="Read"/> before
+/// the layers (the layers need to know which of them have an estimated D and what the duration is),
+/// <see cref="Resolve"/> after them (layer names are checked and D placed at the first stage's temperature).
+/// </summary>
+internal static class FoodContactReader
+{
+    private static readonly string[] Keys =
+    [
+        "food", "stages", "layerDiffusion", "specificMigrationLimit", "detectionLimit", "testCondition",
+        "equivalenceActivationEnergy", "partitionConvention",
+    ];
+
+    private static readonly string[] StageKeys = ["name", "duration", "temperature", "diffusionCoefficients"];
+    private static readonly string[] TestKeys = ["duration", "temperature"];
+    private static readonly string[] ArrheniusKeys = ["referenceTemperature", "activationEnergy"];
+    private static readonly string[] EstimateKeys = ["polymer", "relativeMolarMass"];
+
+    /// <summary>What the first pass found, with the JSON paths needed to report problems in the second.</summary>
+    internal sealed class Input
+    {
+        public string? Food { get; set; }
+
+        public List<(TemperatureStage Stage, string Path, Dictionary<string, string> OverridePaths)> Stages { get; } = [];
+
+        public Dictionary<string, (DiffusivitySource? Source, ArrheniusDiffusivity? Arrhenius, string Path)> Layers { get; } = [];
+
+        public double? Limit { get; set; }
+
+        public double DetectionLimit { get; set; } = FoodContactSettings.DefaultDetectionLimit;
+
+        public TemperatureStage? Test { get; set; }
+
+        public double ActivationEnergy { get; set; } = Arrhenius.RegulatoryActivationEnergy;
+
+        public string? Convention { get; set; }
+
+        public string Path { get; set; } = "$.foodContact";
+
+        public double TotalSeconds => Stages.Sum(stage => stage.Stage.DurationSeconds);
+    }
+
+    /// <summary>First pass; null when the case has no <c>foodContact</c>.</summary>
+    public static Input? Read(JsonFields root, ReadContext context)
+    {
+        if (root.Member("foodContact") is not { } element
+            || JsonFields.Open(element, root.PathOf("foodContact"), context.Errors, Keys) is not { } fields)
+        {
+            return null;
+        }
+
+        var input = new Input { Path = fields.Path };
+        input.Food = fields.Text("food");
+        if (input.Food is not (null or "left" or "right"))
+        {
+            fields.Error("food", $"expected \"left\" or \"right\"; got \"{input.Food}\"");
+        }
+
+        ReadStages(fields, input, context);
+        ReadLayerDiffusion(fields, input, context);
+        input.Limit = ReadContext.Positive(fields, "specificMigrationLimit", Dimension.MassFraction, required: false);
+        input.DetectionLimit = ReadContext.Positive(fields, "detectionLimit", Dimension.MassFraction, required: false) ?? input.DetectionLimit;
+        if (fields.Member("testCondition") is { } testElement
+            && JsonFields.Open(testElement, fields.PathOf("testCondition"), context.Errors, TestKeys) is { } test)
+        {
+            var duration = ReadContext.Positive(test, "duration", Dimension.Time, required: true);
+            var temperature = ReadContext.Positive(test, "temperature", Dimension.Temperature, required: true);
+            input.Test = duration is { } d && temperature is { } t ? new TemperatureStage("test", d, t) : null;
+        }
+
+        input.ActivationEnergy = ReadContext.Positive(fields, "equivalenceActivationEnergy", Dimension.MolarEnergy, required: false)
+            ?? input.ActivationEnergy;
+        input.Convention = fields.Text("partitionConvention");
+        if (input.Convention is { } convention && !PartitionConvention.Values.ContainsKey(convention))
+        {
+            fields.Error("partitionConvention", $"expected one of {string.Join(", ", PartitionConvention.Values.Keys.Select(key => $"\"{key}\""))}; got \"{convention}\"");
+            input.Convention = null;
+        }
+
+        return input;
+    }
+
+    /// <summary>
+    /// Second pass: checks names against the layers and the food face, applies the partition convention, and
+    /// returns the settings with the layers' D at the first stage's temperature.
+    /// </summary>
+    public static (FoodContactSettings? Settings, List<Layer> Layers) Resolve(
+        Input input, JsonFields root, List<Layer> layers, FaceCondition? left, FaceCondition? right, ReadContext context)
+    {
+        // Names as written, so that a layer dropped for an error of its own is still known here.
+        var written = WrittenLayerNames(root);
+        var names = written.ToHashSet(StringComparer.Ordinal);
+        var known = string.Join(", ", written.Select(name => $"'{name}'"));
+        foreach (var (name, entry) in input.Layers.Where(pair => !names.Contains(pair.Key)))
+        {
+            context.Errors.Add(new CaseError(entry.Path, $"no layer is named '{name}'; the layers are {known}"));
+        }
+
+        foreach (var (_, _, overrides) in input.Stages)
+        {
+            foreach (var (name, path) in overrides.Where(pair => !names.Contains(pair.Key)))
+            {
+                context.Errors.Add(new CaseError(path, $"no layer is named '{name}'; the layers are {known}"));
+            }
+        }
+
+        var side = FoodSide(input, left, right, context);
+        var convention = ApplyConvention(input, root, layers, side is { } s ? (s == Side.Left ? left : right) : null, context);
+        if (side is not { } foodSide || input.Stages.Count == 0 || context.Errors.Count > 0)
+        {
+            return (null, layers);
+        }
+
+        var sources = convention.ToDictionary(
+            layer => layer.Name,
+            layer => input.Layers.TryGetValue(layer.Name, out var entry) && entry.Source is { } estimated
+                ? estimated
+                : input.Layers.TryGetValue(layer.Name, out var arrhenius) && arrhenius.Arrhenius is { } given
+                    ? given with { ReferenceDiffusivity = layer.DiffusivitySquareMetersPerSecond }
+                    : (DiffusivitySource)new GivenDiffusivity(layer.DiffusivitySquareMetersPerSecond),
+            StringComparer.Ordinal);
+        var stages = input.Stages.Select(entry => entry.Stage).ToArray();
+        var placed = convention
+            .Select(layer => layer with { DiffusivitySquareMetersPerSecond = stages[0].DiffusivityOf(layer.Name, sources[layer.Name]).Value })
+            .ToList();
+        return (new FoodContactSettings
+        {
+            Stages = stages,
+            Diffusivities = sources,
+            FoodSide = foodSide,
+            SpecificMigrationLimit = input.Limit,
+            DetectionLimit = input.DetectionLimit,
+            TestCondition = input.Test,
+            EquivalenceActivationEnergy = input.ActivationEnergy,
+            PartitionConvention = input.Convention,
+        }, placed);
+    }
+
+    private static List<string> WrittenLayerNames(JsonFields root)
+    {
+        var names = new List<string>();
+        if (root.Member("layers") is { ValueKind: JsonValueKind.Array } array)
+        {
+            foreach (var element in array.EnumerateArray())
+            {
+                if (element.ValueKind == JsonValueKind.Object
+                    && element.TryGetProperty("name", out var name)
+                    && name.ValueKind == JsonValueKind.String)
+                {
+                    names.Add(name.GetString()!);
+                }
+            }
+        }
+
+        return names;
+    }
+
+    private static void ReadStages(JsonFields fields, Input input, ReadContext context)
+    {
+        if (fields.Member("stages", required: true) is not { } array)
+        {
+            return;
+        }
+
+        if (array.ValueKind != JsonValueKind.Array || array.GetArrayLength() == 0)
+        {
+            fields.Error("stages", $"expected a non-empty array of stages such as {{ \"duration\": \"10 d\", \"temperature\": \"25 degC\" }}; found {JsonFields.Describe(array)}");
+            return;
+        }
+
+        var index = 0;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{fields.PathOf("stages")}[{index++}]";
+            if (JsonFields.Open(element, path, context.Errors, StageKeys) is not { } stage)
+            {
+                continue;
+            }
+
+            var name = stage.Text("name") ?? $"stage {index}";
+            var duration = ReadContext.Positive(stage, "duration", Dimension.Time, required: true);
+            var temperature = ReadContext.Positive(stage, "temperature", Dimension.Temperature, required: true);
+            var overrides = new Dictionary<string, double>(StringComparer.Ordinal);
+            var paths = new Dictionary<string, string>(StringComparer.Ordinal);
+            if (stage.Member("diffusionCoefficients") is { } map)
+            {
+                if (map.ValueKind != JsonValueKind.Object)
+                {
+                    stage.Error("diffusionCoefficients", $"expected an object of layer name to diffusion coefficient, e.g. {{ \"core layer\": \"1e-9 cm2/s\" }}; found {JsonFields.Describe(map)}");
+                }
+                else
+                {
+                    foreach (var member in map.EnumerateObject())
+                    {
+                        var memberPath = $"{stage.PathOf("diffusionCoefficients")}.{member.Name}";
+                        paths[member.Name] = memberPath;
+                        if (JsonFields.ParseQuantity(member.Value, memberPath, [Dimension.Diffusivity], context.Errors) is { } value)
+                        {
+                            if (value.SiValue > 0)
+                            {
+                                overrides[member.Name] = value.SiValue;
+                            }
+                            else
+                            {
+                                context.Errors.Add(new CaseError(memberPath, $"must be > 0; got '{member.Value.GetString()?.Trim()}'"));
+                            }
+                        }
+                    }
+                }
+            }
+
+            if (duration is { } d && temperature is { } t)
+            {
+                input.Stages.Add((new TemperatureStage(name, d, t) { DiffusivityOverrides = overrides }, path, paths));
+            }
+        }
+    }
+
+    private static void ReadLayerDiffusion(JsonFields fields, Input input, ReadContext context)
+    {
+        if (fields.Member("layerDiffusion") is not { } map)
+        {
+            return;
+        }
+
+        if (map.ValueKind != JsonValueKind.Object)
+        {
+            fields.Error("layerDiffusion", $"expected an object of layer name to settings; found {JsonFields.Describe(map)}");
+            return;
+        }
+
+        foreach (var member in map.EnumerateObject())
+        {
+            var path = $"{fields.PathOf("layerDiffusion")}.{member.Name}";
+            var isEstimate = member.Value.ValueKind == JsonValueKind.Object && member.Value.TryGetProperty("polymer", out _);
+            if (JsonFields.Open(member.Value, path, context.Errors, isEstimate ? EstimateKeys : ArrheniusKeys) is not { } entry)
+            {
+                continue;
+            }
+
+            if (isEstimate)
+            {
+                // Even with a mistake in the estimate, the layer is meant to give no D of its own: say so only once.
+                context.LayersWithEstimatedDiffusivity.Add(member.Name);
+                var polymerName = entry.Text("polymer", required: true);
+                var polymer = polymerName is null ? null : PolymerTable.Find(polymerName);
+                if (polymerName is not null && polymer is null)
+                {
+                    entry.Error("polymer", $"unknown polymer '{polymerName}'; known: {string.Join(", ", PolymerTable.All.Select(row => row.Name))}");
+                }
+
+                var molarMass = entry.Number("relativeMolarMass", required: true);
+                if (molarMass is { } mass && !(mass > 0))
+                {
+                    entry.Error("relativeMolarMass", $"must be > 0; got {mass.ToString(CultureInfo.InvariantCulture)}");
+                    molarMass = null;
+                }
+
+                input.Layers[member.Name] = (polymer is not null && molarMass is { } m ? new EstimatedDiffusivity(polymer, m) : null, null, path);
+                continue;
+            }
+
+            var reference = ReadContext.Positive(entry, "referenceTemperature", Dimension.Temperature, required: true);
+            var energy = entry.Quantity("activationEnergy", [Dimension.MolarEnergy], required: true);
+            if (energy is { } e && !(e.SiValue >= 0))
+            {
+                entry.Error("activationEnergy", $"must be >= 0; got '{entry.Written("activationEnergy")}'");
+                energy = null;
+            }
+
+            input.Layers[member.Name] = (null, reference is { } r && energy is { } ea ? new ArrheniusDiffusivity(double.NaN, r, ea.SiValue) : null, path);
+        }
+    }
+
+    private static Side? FoodSide(Input input, FaceCondition? left, FaceCondition? right, ReadContext context)
+    {
+        var path = $"{input.Path}.food";
+        switch (input.Food)
+        {
+            case "left" when left is CompartmentFace:
+                return Side.Left;
+            case "right" when right is CompartmentFace:
+                return Side.Right;
+            case "left" or "right":
+                if ((input.Food == "left" ? left : right) is not null)
+                {
+                    context.Errors.Add(new CaseError(path, $"the food must be a compartment; $.{input.Food} is not"));
+                }
+
+                return null;
+            case null when left is CompartmentFace && right is CompartmentFace:
+                context.Errors.Add(new CaseError(path, "is required: both faces are compartments; say which one is the food (\"left\" or \"right\")"));
+                return null;
+            case null when left is CompartmentFace:
+                return Side.Left;
+            case null when right is CompartmentFace:
+                return Side.Right;
+            case null when left is not null && right is not null:
+                context.Errors.Add(new CaseError(input.Path, "needs the food as a compartment on one face; neither $.left nor $.right is a compartment"));
+                return null;
+            default:
+                return null;
+        }
+    }
+
+    /// <summary>
+    /// A worst-case convention gives every layer K = K_P,F relative to the food (the food's own K stays 1), so a K
+    /// written in the case would be silently overruled: that is an error instead.
+    /// </summary>
+    private static List<Layer> ApplyConvention(Input input, JsonFields root, List<Layer> layers, FaceCondition? food, ReadContext context)
+    {
+        if (input.Convention is not { } convention)
+        {
+            return layers;
+        }
+
+        var conventionPath = $"{input.Path}.partitionConvention";
+        if (root.Member("layers") is { ValueKind: JsonValueKind.Array } array)
+        {
+            var index = 0;
+            foreach (var element in array.EnumerateArray())
+            {
+                if (element.ValueKind == JsonValueKind.Object && element.TryGetProperty("partitionCoefficient", out _))
+                {
+                    context.Errors.Add(new CaseError($"$.layers[{index}].partitionCoefficient", $"must be left out when {conventionPath} is given (the convention sets it)"));
+                }
+
+                index++;
+            }
+        }
+
+        if (food is CompartmentFace compartment && compartment.PartitionCoefficient != 1)
+        {
+            context.Errors.Add(new CaseError(conventionPath, "needs the food's partition coefficient to be 1 (the food is what K_P,F refers to)"));
+        }
+
+        var k = PartitionConvention.Values[convention];
+        return layers.Select(layer => layer with { PartitionCoefficient = k }).ToList();
+    }
+}

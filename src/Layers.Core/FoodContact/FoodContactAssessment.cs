@@ -1,0 +1,256 @@
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.Simulation;
+using Layers.Core.TimeStepping;
+using MathNet.Numerics.RootFinding;
+
+namespace Layers.Core.FoodContact;
+
+/// <summary>
+/// Turns a run with food-contact settings into the engineer's figures: concentration in the food, verdict against
+/// the limit and when it is reached, functional-barrier times, test versus shelf life, maximum loading.
+/// </summary>
+/// <remarks>
+/// Times at which a limit is reached are located by Brent's method on the solution itself: from the state at the
+/// start of the accepted step over which the food crossed the limit, the stage's system is re-integrated (with the
+/// same error control) to a trial time, and the root of c_food(t) - limit is bracketed in that step. The time is
+/// therefore as accurate as the integration: a relative error e in c_food moves it by about e c / (dc/dt);
+/// the root finder's own tolerance is 1e-10 of the step and of c/limit.
+/// </remarks>
+internal static class FoodContactAssessment
+{
+    public static FoodContactResult Assess(
+        SimulationCase simulation,
+        Grid grid,
+        IReadOnlyList<StageSystem> stages,
+        double[] initial,
+        FoodConcentrationWatcher watcher,
+        CancellationToken cancellation)
+    {
+        var settings = simulation.FoodContact!;
+        var food = (CompartmentFace)simulation.Face(settings.FoodSide);
+        var density = food.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
+        var final = watcher.StageEndValues[^1];
+        var foodMassPerArea = food.VolumePerAreaMeters * density;
+        var detection = watcher.Crossings[0] is { } seen ? CrossingTime(seen, watcher.Levels[0], stages, watcher, simulation.Solver) : (double?)null;
+        var limit = watcher.Levels.Length > 1 && watcher.Crossings[1] is { } over
+            ? CrossingTime(over, watcher.Levels[1], stages, watcher, simulation.Solver)
+            : (double?)null;
+
+        return new FoodContactResult
+        {
+            FoodName = food.Name,
+            FoodSide = settings.FoodSide,
+            FoodDensityKgPerCubicMeter = density,
+            FoodDensityAssumed = food.DensityKgPerCubicMeter is null,
+            AreaPerFoodMassSquareMetersPerKilogram = food.ContactAreaSquareMeters / (food.VolumeCubicMeters * density),
+            Stages = StageReports(simulation, settings, watcher),
+            DiffusivityOrigins = simulation.Stack.Layers
+                .Select(layer => (layer.Name, Origin(layer.Name, settings)))
+                .ToArray(),
+            FinalConcentration = final,
+            FinalMigrationPerArea = (final - (food.InitialConcentrationKgPerCubicMeter / density)) * foodMassPerArea,
+            SpecificMigrationLimit = settings.SpecificMigrationLimit,
+            LimitReachedSeconds = limit,
+            DetectionLimit = settings.DetectionLimit,
+            DetectionReachedSeconds = detection,
+            BarrierLags = BarrierLags(simulation, settings),
+            Test = settings.TestCondition is { } test ? Compare(simulation, grid, settings, test, initial, watcher, cancellation) : null,
+            MaximumLoading = settings.SpecificMigrationLimit is { } sml ? Loading(simulation, grid, stages, final, sml, watcher, cancellation) : null,
+            PartitionConvention = settings.PartitionConvention,
+        };
+    }
+
+    /// <summary>Food concentration at the end of integrating the stages from a state, kg/kg.</summary>
+    internal static double FinalValue(
+        IReadOnlyList<StageSystem> stages, double[] start, Grid grid, SimulationCase simulation, FoodConcentrationWatcher watcher, CancellationToken cancellation)
+    {
+        var outcome = StagedIntegration.Run(
+            stages, start, [], 0, (stage, first) => Simulator.InitialStep(stage.Case, grid, first), simulation.Solver, NullObserver.Instance, cancellation);
+        return outcome.Statistics.StopReason == StopReason.Completed ? watcher.ValueOf(outcome.FinalState) : double.NaN;
+    }
+
+    private static double CrossingTime(
+        FoodConcentrationWatcher.Bracket bracket, double level, IReadOnlyList<StageSystem> stages, FoodConcentrationWatcher watcher, SolverOptions options)
+    {
+        var width = bracket.EndSeconds - bracket.StartSeconds;
+        if (width <= 0)
+        {
+            return bracket.StartSeconds;
+        }
+
+        // Relative excess c/level - 1 and the time as a fraction of the step, so that Brent's tolerance (which
+        // Math.NET applies to the function value as well as to the argument) means the same for every case.
+        var system = stages[bracket.Stage].System;
+        double Excess(double fraction) => fraction <= 0
+            ? (watcher.ValueOf(bracket.StartState) / level) - 1
+            : (watcher.ValueOf(Integrate(system, bracket.StartState, fraction * width, options)) / level) - 1;
+
+        // Re-integrating the whole step with sub-steps can land a hair below the limit when the step itself ended a
+        // hair above it; the crossing is then at the step's end to within the integration tolerance.
+        if (Excess(1) < 0)
+        {
+            return bracket.EndSeconds;
+        }
+
+        return bracket.StartSeconds + (width * Brent.FindRoot(Excess, 0, 1, 1e-10, 200));
+    }
+
+    private static double[] Integrate(DiffusionSystem system, double[] start, double seconds, SolverOptions options)
+    {
+        var end = new EndState();
+        new TransientSolver(system, options).Run(start, new TimeLoopPlan([seconds], seconds, seconds, seconds), end);
+        return end.State ?? start;
+    }
+
+    private static TestComparison Compare(
+        SimulationCase simulation, Grid grid, FoodContactSettings settings, TemperatureStage test, double[] initial,
+        FoodConcentrationWatcher watcher, CancellationToken cancellation)
+    {
+        var stages = StageSystem.For(simulation, grid, [test], settings.Diffusivities);
+        var value = FinalValue(stages, initial, grid, simulation, watcher, cancellation);
+        var equivalent = settings.Stages.Sum(stage => Arrhenius.EquivalentTestSeconds(
+            stage.DurationSeconds, stage.TemperatureKelvin, test.TemperatureKelvin, settings.EquivalenceActivationEnergy));
+        return new TestComparison(test, value, equivalent, settings.EquivalenceActivationEnergy);
+    }
+
+    /// <summary>
+    /// The problem is linear in the initial state, so c_food(end) is affine in a factor s on the loaded layers'
+    /// initial concentrations: offset from a run with them empty (skipped when everything else starts empty, where
+    /// the offset is exactly zero), slope from the actual run.
+    /// </summary>
+    private static MaximumLoading? Loading(
+        SimulationCase simulation, Grid grid, IReadOnlyList<StageSystem> stages, double final, double limit,
+        FoodConcentrationWatcher watcher, CancellationToken cancellation)
+    {
+        var loaded = simulation.Stack.Layers.Where(layer => layer.InitialConcentrationKgPerCubicMeter > 0).ToArray();
+        if (loaded.Length == 0)
+        {
+            return null;
+        }
+
+        var offset = 0.0;
+        if (!OnlyLoadedLayersCarrySubstance(simulation))
+        {
+            var empty = simulation with
+            {
+                Stack = new LayerStack(simulation.Stack.Layers.Select(layer => layer with { InitialConcentrationKgPerCubicMeter = 0 })),
+            };
+            var start = DiffusionSystemBuilder.Build(empty, grid).InitialState;
+            offset = FinalValue(stages, start, grid, simulation, watcher, cancellation);
+        }
+
+        var slope = final - offset;
+        var factor = slope > 0 ? Math.Max(0, (limit - offset) / slope) : double.PositiveInfinity;
+        return new MaximumLoading(
+            offset,
+            slope,
+            factor,
+            loaded.Select(layer => (
+                layer.Name,
+                layer.InitialConcentrationKgPerCubicMeter * factor,
+                layer.DensityKgPerCubicMeter is { } rho ? layer.InitialConcentrationKgPerCubicMeter * factor / rho : (double?)null))
+            .ToArray());
+    }
+
+    private static bool OnlyLoadedLayersCarrySubstance(SimulationCase simulation)
+    {
+        static bool Empty(FaceCondition face) => face switch
+        {
+            BathFace bath => bath.ConcentrationKgPerCubicMeter == 0,
+            CompartmentFace compartment => compartment.InitialConcentrationKgPerCubicMeter == 0,
+            _ => true,
+        };
+
+        return Empty(simulation.Left) && Empty(simulation.Right);
+    }
+
+    private static List<StageReport> StageReports(SimulationCase simulation, FoodContactSettings settings, FoodConcentrationWatcher watcher)
+    {
+        var reports = new List<StageReport>();
+        var start = 0.0;
+        for (var index = 0; index < settings.Stages.Count; index++)
+        {
+            var stage = settings.Stages[index];
+            var values = simulation.Stack.Layers
+                .Select(layer =>
+                {
+                    var (value, origin) = stage.DiffusivityOf(layer.Name, settings.Diffusivities[layer.Name]);
+                    return (layer.Name, value, origin);
+                })
+                .ToArray();
+            reports.Add(new StageReport(stage.Name, start, start + stage.DurationSeconds, stage.TemperatureKelvin, values, watcher.StageEndValues[index]));
+            start += stage.DurationSeconds;
+        }
+
+        return reports;
+    }
+
+    private static string Origin(string layer, FoodContactSettings settings)
+    {
+        var origin = settings.Diffusivities[layer].Describe();
+        var overridden = settings.Stages.Where(stage => stage.DiffusivityOverrides.ContainsKey(layer)).Select(stage => stage.Name).ToArray();
+        return overridden.Length == 0 ? origin : $"{origin}; given per stage in: {string.Join(", ", overridden)}";
+    }
+
+    /// <summary>Layers between the food and the nearest layer that starts loaded, in each stage.</summary>
+    private static List<BarrierLag> BarrierLags(SimulationCase simulation, FoodContactSettings settings)
+    {
+        var layers = simulation.Stack.Layers;
+        var loaded = Enumerable.Range(0, layers.Count).Where(index => layers[index].InitialConcentrationKgPerCubicMeter > 0).ToArray();
+        var lags = new List<BarrierLag>();
+        if (loaded.Length == 0)
+        {
+            return lags;
+        }
+
+        var barrier = settings.FoodSide == Side.Right
+            ? Enumerable.Range(loaded.Max() + 1, layers.Count - loaded.Max() - 1)
+            : Enumerable.Range(0, loaded.Min());
+        foreach (var index in barrier)
+        {
+            var layer = layers[index];
+            foreach (var stage in settings.Stages)
+            {
+                var diffusivity = stage.DiffusivityOf(layer.Name, settings.Diffusivities[layer.Name]).Value;
+                lags.Add(new BarrierLag(layer.Name, stage.Name, layer.ThicknessMeters * layer.ThicknessMeters / (6 * diffusivity)));
+            }
+        }
+
+        return lags;
+    }
+
+    private sealed class EndState : ITimeLoopObserver
+    {
+        public double[]? State { get; private set; }
+
+        public bool WantsMoreTime => false;
+
+        public void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        {
+            if (timeSeconds > 0)
+            {
+                State = state.ToArray();
+            }
+        }
+
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        {
+        }
+    }
+
+    private sealed class NullObserver : ITimeLoopObserver
+    {
+        public static readonly NullObserver Instance = new();
+
+        public bool WantsMoreTime => false;
+
+        public void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        {
+        }
+
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        {
+        }
+    }
+}

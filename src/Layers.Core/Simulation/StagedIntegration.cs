@@ -1,0 +1,138 @@
+using Layers.Core.TimeStepping;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// Integrates through a sequence of stages, each with its own assembled system on the same grid: the state vector
+/// and the bath totals at the end of one stage start the next, so no mass is lost between stages, and the observer
+/// sees one clock and one running bath total.
+/// </summary>
+public static class StagedIntegration
+{
+    /// <summary>What a staged run ends with.</summary>
+    /// <param name="Statistics">Solver counters summed over the stages.</param>
+    /// <param name="FinalState">u at the end of the last stage (or where the loop stopped).</param>
+    /// <param name="Baths">Bath totals at that time.</param>
+    public sealed record Outcome(SolverStatistics Statistics, double[] FinalState, BathTotals Baths);
+
+    /// <summary>Runs the stages from <paramref name="initialState"/> at t = 0.</summary>
+    /// <param name="stages">Consecutive stages starting at 0.</param>
+    /// <param name="initialState">u(0).</param>
+    /// <param name="outputTimes">Ascending output times on the run's clock, within the stages.</param>
+    /// <param name="horizonSeconds">How far past the end the last stage may run while the observer wants more time.</param>
+    /// <param name="initialStep">First trial step for a stage.</param>
+    /// <param name="options">Time-stepping settings.</param>
+    /// <param name="observer">Receives outputs and steps.</param>
+    /// <param name="cancellation">Stops the loop.</param>
+    public static Outcome Run(
+        IReadOnlyList<StageSystem> stages,
+        ReadOnlySpan<double> initialState,
+        IReadOnlyList<double> outputTimes,
+        double horizonSeconds,
+        Func<StageSystem, double, double> initialStep,
+        SolverOptions options,
+        ITimeLoopObserver observer,
+        CancellationToken cancellation = default)
+    {
+        ArgumentNullException.ThrowIfNull(stages);
+        ArgumentNullException.ThrowIfNull(initialStep);
+        var state = initialState.ToArray();
+        var baths = default(BathTotals);
+        var total = new SolverStatistics { StopReason = StopReason.Completed, SmallestStepSeconds = double.PositiveInfinity };
+        for (var index = 0; index < stages.Count; index++)
+        {
+            var stage = stages[index];
+            var last = index == stages.Count - 1;
+            var length = stage.EndSeconds - stage.StartSeconds;
+            var outputs = outputTimes
+                .Where(time => time > stage.StartSeconds * (1 + 1e-12) && time < stage.EndSeconds * (1 - 1e-12))
+                .Select(time => time - stage.StartSeconds)
+                .Append(length)
+                .ToArray();
+            var shifted = new ShiftedObserver(observer, stage.StartSeconds, length, baths, first: index == 0, last, outputTimes, state.Length);
+            var horizon = last ? Math.Max(length, horizonSeconds - stage.StartSeconds) : length;
+            var plan = new TimeLoopPlan(outputs, length, horizon, initialStep(stage, outputs[0]));
+            var statistics = new TransientSolver(stage.System, options).Run(state, plan, shifted, cancellation);
+            total = Add(total, statistics);
+            state = shifted.StateAtEnd ?? state;
+            baths = shifted.BathsAtEnd;
+            if (statistics.StopReason != StopReason.Completed)
+            {
+                break;
+            }
+        }
+
+        if (double.IsPositiveInfinity(total.SmallestStepSeconds))
+        {
+            total = total with { SmallestStepSeconds = 0 };
+        }
+
+        return new Outcome(total, state, baths);
+    }
+
+    private static SolverStatistics Add(SolverStatistics total, SolverStatistics stage) => new()
+    {
+        AcceptedSteps = total.AcceptedSteps + stage.AcceptedSteps,
+        RejectedSteps = total.RejectedSteps + stage.RejectedSteps,
+        SmallestStepSeconds = stage.AcceptedSteps > 0 ? Math.Min(total.SmallestStepSeconds, stage.SmallestStepSeconds) : total.SmallestStepSeconds,
+        LargestStepSeconds = Math.Max(total.LargestStepSeconds, stage.LargestStepSeconds),
+        Unknowns = stage.Unknowns,
+        WallSeconds = total.WallSeconds + stage.WallSeconds,
+        StopReason = stage.StopReason,
+    };
+
+    /// <summary>
+    /// Puts a stage's clock and bath totals on the run's, passes on only the outputs the run asked for (a stage end is
+    /// always integrated to but reported only if it was asked for), and keeps the state at the stage's end.
+    /// </summary>
+    private sealed class ShiftedObserver(
+        ITimeLoopObserver inner,
+        double offsetSeconds,
+        double lengthSeconds,
+        BathTotals offsetBaths,
+        bool first,
+        bool last,
+        IReadOnlyList<double> requested,
+        int nodeCount) : ITimeLoopObserver
+    {
+        private readonly double[] _end = new double[nodeCount];
+        private bool _reachedEnd;
+
+        public double[]? StateAtEnd => _reachedEnd ? _end : null;
+
+        public BathTotals BathsAtEnd { get; private set; }
+
+        public bool WantsMoreTime => last && inner.WantsMoreTime;
+
+        public void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        {
+            if (timeSeconds == 0 && !first)
+            {
+                return;
+            }
+
+            var time = timeSeconds + offsetSeconds;
+            if (timeSeconds == 0 || requested.Any(wanted => Math.Abs(wanted - time) <= 1e-12 * Math.Max(wanted, 1)))
+            {
+                inner.OnOutput(time, state, Shift(bathInflow));
+            }
+        }
+
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        {
+            inner.OnStep(timeSeconds + offsetSeconds, state, Shift(bathInflow));
+
+            // The loop lands exactly on the stage end (its last output); only the last stage may step past it, while the
+            // observer looks for the times to equilibrium, and those later states are not the stage's end.
+            if (timeSeconds <= lengthSeconds * (1 + 1e-12))
+            {
+                state.CopyTo(_end);
+                BathsAtEnd = Shift(bathInflow);
+                _reachedEnd = true;
+            }
+        }
+
+        private BathTotals Shift(BathTotals stage)
+            => new(stage.LeftPerArea + offsetBaths.LeftPerArea, stage.RightPerArea + offsetBaths.RightPerArea);
+    }
+}

@@ -1,0 +1,109 @@
+using Layers.Core.Domain;
+using Layers.Core.FoodContact;
+using Layers.Tests.TestSupport;
+
+namespace Layers.Tests.FoodContact;
+
+/// <summary>Reading <c>foodContact</c>: conversions to SI, where D comes from, and every rule with its JSON path.</summary>
+public sealed class FoodContactReaderTests
+{
+    // Invented: a two-layer film on 1 kg of food on 6 dm2, valid as it stands.
+    private const string Film = """
+        {
+          "layers": [
+            { "name": "core", "thickness": "40 um", "initialConcentration": "1000 mg/kg", "density": "0.92 g/cm3" },
+            { "name": "skin", "thickness": "10 um", "diffusionCoefficient": "1e-10 cm2/s" }
+          ],
+          "left": { "kind": "closed" },
+          "right": { "kind": "compartment", "mass": "1 kg", "density": "1 g/cm3", "area": "6 dm2" },
+          "foodContact": {
+            "stages": [
+              { "name": "fill", "duration": "2 h", "temperature": "70 degC" },
+              { "name": "storage", "duration": "10 d", "temperature": "25 degC", "diffusionCoefficients": { "skin": "2e-10 cm2/s" } }
+            ],
+            "layerDiffusion": { "core": { "polymer": "LDPE", "relativeMolarMass": 531 } },
+            "specificMigrationLimit": "0.05 mg/kg",
+            "testCondition": { "duration": "10 d", "temperature": "60 degC" }
+          }
+        }
+        """;
+
+    [Fact]
+    public void Stages_limits_and_sources_are_read_in_SI()
+    {
+        var result = CaseJson.Read(Film);
+
+        Assert.True(result.IsValid, result.FormatErrors());
+        var food = result.Case!.FoodContact!;
+        Assert.Equal(2, food.Stages.Count);
+        Assert.Equal(343.15, food.Stages[0].TemperatureKelvin, 9);
+        Assert.Equal(7200, food.Stages[0].DurationSeconds, 9);
+        Assert.Equal((7200 + (10 * 86400.0)), result.Case.DurationSeconds, 6);
+        Tolerance.Relative(2e-14, food.Stages[1].DiffusivityOverrides["skin"], 1e-12, "per-stage D");
+        Assert.Equal(0.05e-6, food.SpecificMigrationLimit!.Value, 15);
+        Assert.Equal(0.01e-6, food.DetectionLimit, 15);
+        Assert.Equal(333.15, food.TestCondition!.TemperatureKelvin, 9);
+        Assert.Equal(Side.Right, food.FoodSide);
+        Assert.IsType<EstimatedDiffusivity>(food.Diffusivities["core"]);
+        Assert.IsType<GivenDiffusivity>(food.Diffusivities["skin"]);
+    }
+
+    [Fact]
+    public void An_estimated_layer_starts_with_D_at_the_first_stage_temperature()
+    {
+        // By hand, LDPE (A_P' = 11.5, tau = 0, constants flagged unverified), Mr 531, 70 C = 343.15 K:
+        // exponent = 11.5 - 8.8590 + 1.593 - 10454/343.15 (= 30.4648) = -26.2308; D = 1e4 exp(-26.2308) cm2/s
+        // = 4.055e-8 cm2/s = 4.055e-12 m2/s (equation: Begley et al. 2005, constants from memory).
+        var result = CaseJson.Read(Film);
+
+        Tolerance.Relative(4.055e-12, result.Case!.Stack.Layers[0].DiffusivitySquareMetersPerSecond, 1e-3, "estimated D at 70 C");
+    }
+
+    [Fact]
+    public void A_partition_convention_sets_every_layer_K()
+    {
+        var result = CaseJson.Read(CaseJson.With(Film, ("$.foodContact.partitionConvention", "\"poorlySoluble\"")));
+
+        Assert.True(result.IsValid, result.FormatErrors());
+        Assert.All(result.Case!.Stack.Layers, layer => Assert.Equal(1000, layer.PartitionCoefficient));
+    }
+
+    [Theory]
+    [InlineData("$.layers[0].diffusionCoefficient", "\"1e-9 cm2/s\"", "$.layers[0].diffusionCoefficient: must be left out: $.foodContact.layerDiffusion.core estimates it")]
+    [InlineData("$.foodContact.layerDiffusion.core.polymer", "\"kevlar\"", "$.foodContact.layerDiffusion.core.polymer: unknown polymer 'kevlar'; known: LDPE, LLDPE, HDPE, PP, PP rubber, PS, HIPS, PET, PEN, PA")]
+    [InlineData("$.foodContact.stages[1].diffusionCoefficients.core2", "\"1e-9 cm2/s\"", "$.foodContact.stages[1].diffusionCoefficients.core2: no layer is named 'core2'; the layers are 'core', 'skin'")]
+    [InlineData("$.foodContact.stages[0].temperature", "\"-300 degC\"", "$.foodContact.stages[0].temperature: must be > 0; got '-300 degC'")]
+    [InlineData("$.foodContact.food", "\"left\"", "$.foodContact.food: the food must be a compartment; $.left is not")]
+    [InlineData("$.foodContact.specificMigrationLimit", "\"0.05 mg/L\"", "$.foodContact.specificMigrationLimit:")]
+    [InlineData("$.foodContact.partitionConvention", "\"sticky\"", "$.foodContact.partitionConvention: expected one of \"readilySoluble\", \"poorlySoluble\"; got \"sticky\"")]
+    [InlineData("$.foodContact.stages", "[]", "$.foodContact.stages: expected a non-empty array of stages")]
+    [InlineData("$.duration", "\"10 d\"", "$.duration: must be left out: $.foodContact.stages give the duration")]
+    public void Each_rule_is_reported_at_its_path(string path, string value, string expectedStart)
+    {
+        var result = CaseJson.Read(CaseJson.With(Film, (path, value)));
+
+        Assert.False(result.IsValid);
+        Assert.Contains(result.Errors, error => $"{error.JsonPath}: {error.Message}".StartsWith(expectedStart, StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void A_layer_K_given_with_a_partition_convention_is_an_error_not_silently_overruled()
+    {
+        var json = CaseJson.With(Film, ("$.foodContact.partitionConvention", "\"readilySoluble\""), ("$.layers[1].partitionCoefficient", "3"));
+
+        var result = CaseJson.Read(json);
+
+        Assert.Contains(result.Errors, error => error.JsonPath == "$.layers[1].partitionCoefficient"
+            && error.Message.Contains("partitionConvention", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Food_contact_needs_a_compartment_as_food()
+    {
+        var json = CaseJson.With(Film, ("$.right", """{ "kind": "bath" }"""));
+
+        var result = CaseJson.Read(json);
+
+        Assert.Contains(result.Errors, error => error.JsonPath == "$.foodContact" && error.Message.Contains("compartment", StringComparison.Ordinal));
+    }
+}
