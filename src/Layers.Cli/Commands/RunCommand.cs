@@ -99,10 +99,15 @@ internal static class RunCommand
         {
             output.WriteLine($"{simulation.Title} ({casePath})");
             output.WriteLine($"  stack: {StackText.Describe(simulation)}");
-            ConsoleTables.Write(output, ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result));
+            ConsoleTables.Write(output, [ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result), .. DiffusionCellTables.For(result)]);
+            foreach (var warning in EstimateNotes.For(simulation).Concat(DiffusionCellTables.Warnings(result)))
+            {
+                output.WriteLine(warning);
+            }
+
             output.WriteLine($"results: {folder}");
             output.WriteLine();
-            output.WriteLine(CautionText.Paragraph);
+            output.WriteLine(CautionText.For(result));
         }
 
         return ExitCodes.Success;

@@ -16,7 +16,7 @@ public static class CaseReader
     private static readonly string[] TopKeys =
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
-        "duration", "reportTimes", "extraOutputTimes", "numerics", "display",
+        "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "permeationTest",
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
@@ -88,14 +88,17 @@ public static class CaseReader
         root.Text("description");
         var referenceName = ReadBasisAndReference(root, context);
         var layers = LayerReader.Read(root, context);
-        var left = FaceReader.Read(root, "left", context);
-        var right = FaceReader.Read(root, "right", context);
         var duration = TimesReader.Duration(root, context);
         var durationText = root.Written("duration");
+        context.DurationSeconds = duration;
+        context.DurationText = durationText;
+        var left = FaceReader.Read(root, "left", context);
+        var right = FaceReader.Read(root, "right", context);
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
         var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));
+        var permeationTest = PermeationTestReader.Read(root, context, fileName, right);
         if (context.Errors.Count > 0 || left is null || right is null || duration is not { } end)
         {
             return null;
@@ -114,6 +117,7 @@ public static class CaseReader
             Grid = grid,
             Solver = solver,
             Display = display,
+            PermeationTest = permeationTest,
         };
     }
 

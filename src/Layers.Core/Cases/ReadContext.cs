@@ -22,6 +22,12 @@ internal sealed class ReadContext
     /// <summary>True once any concentration was given as a mass fraction (a hint that the case is about foods).</summary>
     public bool SawMassFraction { get; private set; }
 
+    /// <summary>The case's duration, s, once read (null before or when invalid); bounds the sampling times.</summary>
+    public double? DurationSeconds { get; set; }
+
+    /// <summary>The duration as written, for messages.</summary>
+    public string? DurationText { get; set; }
+
     /// <summary>True once a compartment was given by its mass (as foods are).</summary>
     public bool SawCompartmentByMass { get; set; }
 

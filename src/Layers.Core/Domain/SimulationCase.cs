@@ -41,6 +41,9 @@ public sealed record SimulationCase
     /// <summary>Units the user wrote, used only to present results in familiar units.</summary>
     public DisplayUnits Display { get; init; } = new();
 
+    /// <summary>Permeation metrics asked for by the case, or null.</summary>
+    public PermeationTest? PermeationTest { get; init; }
+
     /// <summary>The face condition on the given side.</summary>
     public FaceCondition Face(Side side) => side == Side.Left ? Left : Right;
 

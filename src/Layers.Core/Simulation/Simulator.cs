@@ -20,11 +20,12 @@ public static class Simulator
         var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
         var final = FinalStateTarget.Of(simulation, system);
-        var recorder = new ResultRecorder(simulation, system, initial, final);
+        var sampling = new SamplingEvents(simulation, system);
+        var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
         var plan = new TimeLoopPlan(outputs, simulation.DurationSeconds, horizon, InitialStep(simulation, grid, outputs[0]));
-        var statistics = new TransientSolver(system, simulation.Solver).Run(initial, plan, recorder, cancellation);
+        var statistics = new TransientSolver(system, simulation.Solver).Run(initial, plan, recorder, sampling, cancellation);
 
         return new SimulationResult
         {
@@ -33,7 +34,9 @@ public static class Simulator
             TimeSeries = recorder.Samples,
             Reports = recorder.Reports,
             FinalState = recorder.Summary(horizon),
-            Permeation = final.Kind == FinalStateKind.SteadyPermeation
+            // With first-order removal the receiving "bath" is the removal itself, whose intake is not the amount
+            // permeated; the diffusion-cell metrics report that case instead.
+            Permeation = final.Kind == FinalStateKind.SteadyPermeation && simulation.Left is not CompartmentFace && simulation.Right is not CompartmentFace
                 ? new PermeationSummary(
                     final.Steady!.FluxKgPerSquareMeterSecond,
                     recorder.FluxAtEnd,
@@ -41,6 +44,7 @@ public static class Simulator
                     SingleMembrane.LagTimeSeconds(simulation))
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
+            DiffusionCell = DiffusionCellAnalysis.Of(simulation, recorder.Samples, sampling),
             Statistics = statistics,
         };
     }
