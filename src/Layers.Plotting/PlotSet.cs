@@ -14,20 +14,29 @@ public static class PlotSet
     /// <summary>File name of the approach-to-final-state plot (cumulative permeation for two baths).</summary>
     public const string EquilibriumFileName = "equilibrium.png";
 
+    /// <summary>File name of the model-and-measurement cumulative amount plot (cases with permeation metrics only).</summary>
+    public const string CumulativeFileName = "cumulative.png";
+
     /// <summary>Renders every plot of a result.</summary>
     /// <param name="result">A simulation result.</param>
     /// <param name="options">Picture size and axis choices.</param>
-    /// <returns>PNG bytes by file name: profile.png, transfer.png and equilibrium.png.</returns>
+    /// <returns>PNG bytes by file name: profile.png, transfer.png and equilibrium.png, and cumulative.png for cases with permeation metrics.</returns>
     public static IReadOnlyDictionary<string, byte[]> Render(SimulationResult result, PlotOptions options)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
-        return new Dictionary<string, byte[]>(StringComparer.Ordinal)
+        var plots = new Dictionary<string, byte[]>(StringComparer.Ordinal)
         {
             [ProfileFileName] = PngRenderer.Render(ProfilePlot.Create(result, options), options),
             [TransferFileName] = PngRenderer.Render(TransferPlot.Create(result, options), options),
             [EquilibriumFileName] = PngRenderer.Render(EquilibriumPlot.Create(result, options), options),
         };
+        if (CumulativeAmountPlot.Applies(result))
+        {
+            plots[CumulativeFileName] = PngRenderer.Render(CumulativeAmountPlot.Create(result, options), options);
+        }
+
+        return plots;
     }
 }

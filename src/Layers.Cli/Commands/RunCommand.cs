@@ -168,10 +168,15 @@ internal static class RunCommand
         {
             output.WriteLine($"{simulation.Title} ({casePath})");
             output.WriteLine($"  stack: {StackText.Describe(simulation)}");
-            ConsoleTables.Write(output, [ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result), .. FoodContactTables.For(result)]);
+            ConsoleTables.Write(output, [ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result), .. FoodContactTables.For(result), .. DiffusionCellTables.For(result)]);
+            foreach (var warning in EstimateNotes.For(simulation).Concat(DiffusionCellTables.Warnings(result)))
+            {
+                output.WriteLine(warning);
+            }
+
             output.WriteLine($"results: {folder}");
             output.WriteLine();
-            output.WriteLine(CautionText.Paragraph);
+            output.WriteLine(CautionText.For(result));
             if (result.FoodContact is not null)
             {
                 output.WriteLine(FoodContactTables.Caution);

@@ -17,7 +17,7 @@ public static class CaseReader
     private static readonly string[] TopKeys =
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
-        "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "sweep", "foodContact",
+        "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "sweep", "foodContact", "permeationTest",
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
@@ -105,9 +105,11 @@ public static class CaseReader
         var referenceName = ReadBasisAndReference(root, context);
         var food = FoodContactReader.Read(root, context);
         var layers = LayerReader.Read(root, context);
+        var (duration, durationText) = ReadDuration(root, food, context);
+        context.DurationSeconds = duration;
+        context.DurationText = durationText;
         var left = FaceReader.Read(root, "left", context);
         var right = FaceReader.Read(root, "right", context);
-        var (duration, durationText) = ReadDuration(root, food, context);
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
@@ -118,6 +120,7 @@ public static class CaseReader
             (foodSettings, layers) = FoodContactReader.Resolve(food, root, layers, left, right, context);
         }
 
+        var permeationTest = PermeationTestReader.Read(root, context, fileName, right);
         if (context.Errors.Count > 0 || left is null || right is null || duration is not { } end)
         {
             return null;
@@ -137,6 +140,7 @@ public static class CaseReader
             Solver = solver,
             Display = display,
             FoodContact = foodSettings,
+            PermeationTest = permeationTest,
         };
     }
 

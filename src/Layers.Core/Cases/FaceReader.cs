@@ -13,7 +13,9 @@ internal static class FaceReader
     private static readonly string[] CompartmentKeys =
     [
         "kind", "name", "volume", "mass", "area", "density", "partitionCoefficient", "initialConcentration", "filmCoefficient",
+        "sampling", "solubility", "sinkFraction", "removalHalfLife",
     ];
+
 
     public static FaceCondition? Read(JsonFields root, string key, ReadContext context)
     {
@@ -79,7 +81,19 @@ internal static class FaceReader
             return null;
         }
 
-        return new CompartmentFace(name, volume.Value, area.Value, k.Value, concentration.Value, film, density);
+        var cell = CellOptions.Read(fields, context, volume.Value);
+        if (cell is null)
+        {
+            return null;
+        }
+
+        return new CompartmentFace(name, volume.Value, area.Value, k.Value, concentration.Value, film, density)
+        {
+            Sampling = cell.Value.Sampling,
+            SolubilityKgPerCubicMeter = cell.Value.Solubility,
+            SinkFraction = cell.Value.SinkFraction,
+            RemovalRatePerSecond = cell.Value.RemovalRate,
+        };
     }
 
     /// <summary>The compartment's volume, given directly or as a mass with a density.</summary>

@@ -8,7 +8,7 @@ namespace Layers.Core.Cases;
 internal static class LayerReader
 {
     private static readonly string[] Keys =
-        ["name", "thickness", "diffusionCoefficient", "partitionCoefficient", "initialConcentration", "density"];
+        ["name", "thickness", "diffusionCoefficient", "partitionCoefficient", "initialConcentration", "density", "pottsGuy"];
 
     public static List<Layer> Read(JsonFields root, ReadContext context)
     {
@@ -57,6 +57,11 @@ internal static class LayerReader
     private static Layer? ReadLayer(JsonFields fields, ReadContext context, string? name)
     {
         var thickness = ReadContext.Positive(fields, "thickness", Dimension.Length, required: true);
+        if (fields.Has("pottsGuy"))
+        {
+            return PottsGuyReader.Read(fields, context, name, thickness);
+        }
+
         // A layer whose D is estimated from its polymer gives none itself; it is placed by FoodContactReader.Resolve.
         var estimated = name is not null && context.LayersWithEstimatedDiffusivity.Contains(name);
         if (estimated && fields.Has("diffusionCoefficient"))

@@ -25,6 +25,12 @@ internal sealed class ReadContext
     /// <summary>Names of the layers whose D is estimated in foodContact.layerDiffusion, so they give none themselves.</summary>
     public HashSet<string> LayersWithEstimatedDiffusivity { get; } = new(StringComparer.Ordinal);
 
+    /// <summary>The case's duration, s, once read (null before or when invalid); bounds the sampling times.</summary>
+    public double? DurationSeconds { get; set; }
+
+    /// <summary>The duration as written, for messages.</summary>
+    public string? DurationText { get; set; }
+
     /// <summary>True once a compartment was given by its mass (as foods are).</summary>
     public bool SawCompartmentByMass { get; set; }
 

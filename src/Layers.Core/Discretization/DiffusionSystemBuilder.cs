@@ -48,16 +48,24 @@ public static class DiffusionSystemBuilder
             conductance[last - 1] = 1 / (halfResistance[^1] + FilmResistance(rightCompartment));
         }
 
-        var leftBath = Coupling(simulation.Left, halfResistance[0]);
-        var rightBath = Coupling(simulation.Right, halfResistance[^1]);
+        var leftBath = Coupling(simulation.Left, halfResistance[0], capacity[0]);
+        var rightBath = Coupling(simulation.Right, halfResistance[^1], capacity[^1]);
         return (new DiffusionSystem(grid, capacity, conductance, leftBath, rightBath, first), initial);
     }
 
     private static double FilmResistance(CompartmentFace compartment)
         => SeriesResistance.Film(compartment.FilmCoefficientMetersPerSecond, compartment.PartitionCoefficient);
 
-    private static BathCoupling Coupling(FaceCondition face, double halfCellResistance)
+    private static BathCoupling Coupling(FaceCondition face, double halfCellResistance, double endCapacity)
     {
+        // First-order removal from a compartment, k V c per area and time = k (V/A) K u, is a link of conductance
+        // k (V/A) K from the compartment node to a bath at u = 0: the loss sits on the diagonal, the system stays
+        // tridiagonal, and the removed mass is counted by the bath quadrature, so the balance closes to round-off.
+        if (face is CompartmentFace { RemovalRatePerSecond: > 0 } removing)
+        {
+            return new BathCoupling(removing.RemovalRatePerSecond * endCapacity, 0);
+        }
+
         if (face is not BathFace bath)
         {
             return BathCoupling.None;

@@ -71,4 +71,22 @@ public sealed record CompartmentFace(
 
     /// <summary>Initial mass per unit contact area, kg/m2.</summary>
     public double InitialMassPerArea => InitialConcentrationKgPerCubicMeter * VolumePerAreaMeters;
+
+    /// <summary>Sampling with replacement by fresh medium, or null for an unsampled compartment.</summary>
+    public ReceptorSampling? Sampling { get; init; }
+
+    /// <summary>
+    /// First-order removal rate constant k, 1/s (from a half-life, k = ln 2 / t_half), an approximation of systemic
+    /// clearance: the compartment loses k V c per unit time; 0 for none.
+    /// </summary>
+    public double RemovalRatePerSecond { get; init; }
+
+    /// <summary>Solubility of the substance in this medium, kg/m3, for the sink-condition check; null for no check.</summary>
+    public double? SolubilityKgPerCubicMeter { get; init; }
+
+    /// <summary>Fraction of the solubility above which sink conditions are taken as lost (default 0.1).</summary>
+    public double SinkFraction { get; init; } = DefaultSinkFraction;
+
+    /// <summary>The default sink fraction: 10 % of solubility (common practice, no source; some texts accept 30 %).</summary>
+    public const double DefaultSinkFraction = 0.1;
 }

@@ -29,6 +29,9 @@ public sealed record Layer(
     /// <summary>Initial mass of substance per unit area of the stack, kg/m2.</summary>
     public double InitialMassPerArea => InitialConcentrationKgPerCubicMeter * ThicknessMeters;
 
+    /// <summary>How D and K were estimated (Potts-Guy), or null when the case gave them.</summary>
+    public Permeation.SkinEstimate? Estimate { get; init; }
+
     /// <summary>Diffusive resistance of the whole layer in the u = c/K variable, h / (D K), s/m.</summary>
     public double ResistanceSecondsPerMeter => ThicknessMeters / (DiffusivitySquareMetersPerSecond * PartitionCoefficient);
 }

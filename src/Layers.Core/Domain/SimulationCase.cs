@@ -51,6 +51,9 @@ public sealed record SimulationCase
     /// </summary>
     public FoodContactSettings? FoodContact { get; init; }
 
+    /// <summary>Permeation metrics asked for by the case, or null.</summary>
+    public PermeationTest? PermeationTest { get; init; }
+
     /// <summary>The face condition on the given side.</summary>
     public FaceCondition Face(Side side) => side == Side.Left ? Left : Right;
 

@@ -66,7 +66,7 @@ internal static class FoodContactAssessment
         IReadOnlyList<StageSystem> stages, double[] start, Grid grid, SimulationCase simulation, FoodConcentrationWatcher watcher, CancellationToken cancellation)
     {
         var outcome = StagedIntegration.Run(
-            stages, start, [], 0, (stage, first) => Simulator.InitialStep(stage.Case, grid, first), simulation.Solver, NullObserver.Instance, cancellation);
+            stages, start, [], 0, (stage, first) => Simulator.InitialStep(stage.Case, grid, first), simulation.Solver, NullObserver.Instance, cancellation: cancellation);
         return outcome.Statistics.StopReason == StopReason.Completed ? watcher.ValueOf(outcome.FinalState) : double.NaN;
     }
 

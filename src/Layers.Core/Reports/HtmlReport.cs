@@ -31,14 +31,14 @@ public static class HtmlReport
             .Append(Encode(simulation.Title)).Append("</title><style>").Append(Style).Append("</style></head><body>\n");
         html.Append("<h1>").Append(Encode(simulation.Title)).Append("</h1>\n");
         html.Append(CultureInfo.InvariantCulture, $"<p class=\"meta\">Case file {Encode(Path.GetFileName(caseFile))}; computed by {ToolInfo.Name} {ToolInfo.Version}.</p>\n");
-        html.Append("<p class=\"caution\"><strong>Caution.</strong> ").Append(Encode(CautionText.Paragraph)).Append("</p>\n");
+        html.Append("<p class=\"caution\"><strong>Caution.</strong> ").Append(Encode(CautionText.For(result))).Append("</p>\n");
         html.Append("<h2>Inputs</h2>\n");
         AppendTable(html, InputTables.Layers(simulation));
         AppendTable(html, InputTables.Conditions(simulation));
         html.Append("<h2>Results</h2>\n");
         AppendTable(html, ResultTables.AtReportTimes(result));
         AppendTable(html, ResultTables.KeyFigures(result));
-        foreach (var table in FoodContactTables.For(result))
+        foreach (var table in FoodContactTables.For(result).Concat(DiffusionCellTables.For(result)))
         {
             AppendTable(html, table);
         }
@@ -47,6 +47,11 @@ public static class HtmlReport
         {
             html.Append("<p class=\"caution\">").Append(Encode(FoodContactTables.Caution)).Append("</p>\n");
         }
+        foreach (var warning in EstimateNotes.For(simulation).Concat(DiffusionCellTables.Warnings(result)))
+        {
+            html.Append("<p class=\"caution\">").Append(Encode(warning)).Append("</p>\n");
+        }
+
         foreach (var (name, png) in pictures)
         {
             html.Append(CultureInfo.InvariantCulture, $"<figure><img alt=\"{Encode(name)}\" src=\"data:image/png;base64,{Convert.ToBase64String(png)}\"><figcaption class=\"meta\">{Encode(name)}</figcaption></figure>\n");

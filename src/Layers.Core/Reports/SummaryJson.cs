@@ -33,6 +33,7 @@ public static class SummaryJson
             WriteMassBalance(json, result);
             SummaryJsonFinalState.Write(json, result);
             SummaryJsonFoodContact.Write(json, result);
+            SummaryJsonDiffusionCell.Write(json, result);
             WriteSolver(json, result);
             json.WriteEndObject();
         }
@@ -57,7 +58,7 @@ public static class SummaryJson
         json.WriteString("referenceMedium", result.Case.ReferenceMedium);
         json.WriteNumber("durationSeconds", result.Case.DurationSeconds);
         json.WriteEndObject();
-        json.WriteString("caution", CautionText.Paragraph);
+        json.WriteString("caution", CautionText.For(result));
     }
 
     private static void WriteLayers(Utf8JsonWriter json, SimulationResult result)
@@ -73,6 +74,15 @@ public static class SummaryJson
             json.WriteNumber("diffusionCoefficientSquareMetersPerSecond", layer.DiffusivitySquareMetersPerSecond);
             json.WriteNumber("partitionCoefficientVolumeBasis", layer.PartitionCoefficient);
             json.WriteNumber("initialConcentrationKgPerCubicMeter", layer.InitialConcentrationKgPerCubicMeter);
+            if (layer.Estimate is { } estimate)
+            {
+                json.WriteString("estimate", EstimateNotes.Describe(estimate));
+            }
+            else
+            {
+                json.WriteNull("estimate");
+            }
+
             WriteSeries(json, "massPerAreaKgPerSquareMeter", result, sample => sample.LayerMassPerArea[i]);
             WriteSeries(json, "meanConcentrationKgPerCubicMeter", result, sample => sample.LayerMassPerArea[i] / layer.ThicknessMeters);
             json.WriteEndObject();

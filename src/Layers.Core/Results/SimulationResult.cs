@@ -26,6 +26,9 @@ public sealed record SimulationResult
     /// <summary>Steady permeation figures, when the case has two baths at different levels.</summary>
     public PermeationSummary? Permeation { get; init; }
 
+    /// <summary>Diffusion-cell and patch figures (sampling, sink check, removal, permeation metrics), or null.</summary>
+    public DiffusionCellSummary? DiffusionCell { get; init; }
+
     /// <summary>Largest |mass balance error| over all output times (relative).</summary>
     public required double WorstMassBalanceError { get; init; }
 

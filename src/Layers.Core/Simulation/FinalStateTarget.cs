@@ -31,6 +31,8 @@ internal sealed class FinalStateTarget
     public static FinalStateTarget Of(SimulationCase simulation, DiffusionSystem system)
     {
         var values = new double[system.NodeCount];
+        var original = simulation;
+        simulation = RemovalAsSink(simulation);
         if (simulation.IsClosed)
         {
             var equilibrium = ClosedSystemEquilibrium.Of(simulation).ContinuousVariable;
@@ -48,8 +50,37 @@ internal sealed class FinalStateTarget
             values[system.FirstCellNode + cell] = steady.ContinuousVariableInLayer(layer, depthInLayer);
         }
 
+        SetRemovingCompartment(original, system, steady, values);
         var kind = steady.FluxKgPerSquareMeterSecond == 0 ? FinalStateKind.BathEquilibrium : FinalStateKind.SteadyPermeation;
         return new FinalStateTarget(kind, values, steady, null);
+    }
+
+    /// <summary>
+    /// The case with every compartment that has first-order removal replaced by a sink at c = 0 behind the same
+    /// resistances: the film 1/(k_f K) and the removal 1/(k (V/A) K) in series give one film of coefficient
+    /// 1 / (1/k_f + A/(k V)). The stack's steady state is the same; the compartment's own value is set afterwards.
+    /// </summary>
+    private static SimulationCase RemovalAsSink(SimulationCase simulation)
+    {
+        static FaceCondition Replace(FaceCondition face) => face is CompartmentFace { RemovalRatePerSecond: > 0 } c
+            ? new BathFace(c.Name, 0, c.PartitionCoefficient, 1 / ((c.FilmCoefficientMetersPerSecond is { } film ? 1 / film : 0)
+                + (1 / (c.RemovalRatePerSecond * c.VolumePerAreaMeters))))
+            : face;
+        return simulation with { Left = Replace(simulation.Left), Right = Replace(simulation.Right) };
+    }
+
+    /// <summary>A removing compartment holds, at steady state, the u whose removal k (V/A) K u equals the flux it receives.</summary>
+    private static void SetRemovingCompartment(SimulationCase simulation, DiffusionSystem system, SteadyStateStack steady, double[] values)
+    {
+        if (simulation.Left is CompartmentFace { RemovalRatePerSecond: > 0 } left)
+        {
+            values[0] = -steady.FluxKgPerSquareMeterSecond / (left.RemovalRatePerSecond * system.Capacity[0]);
+        }
+
+        if (simulation.Right is CompartmentFace { RemovalRatePerSecond: > 0 } right)
+        {
+            values[^1] = steady.FluxKgPerSquareMeterSecond / (right.RemovalRatePerSecond * system.Capacity[^1]);
+        }
     }
 
     /// <summary>Final concentration at the left and right edge of a layer, kg/m3.</summary>

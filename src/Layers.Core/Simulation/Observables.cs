@@ -14,9 +14,16 @@ internal sealed class Observables
     private readonly double[] _initialState;
     private readonly double _initialMass;
     private readonly double _initialDistance;
+    private readonly SamplingEvents? _sampling;
 
-    public Observables(SimulationCase simulation, DiffusionSystem system, ReadOnlySpan<double> initialState, FinalStateTarget final)
+    public Observables(
+        SimulationCase simulation,
+        DiffusionSystem system,
+        ReadOnlySpan<double> initialState,
+        FinalStateTarget final,
+        SamplingEvents? sampling = null)
     {
+        _sampling = sampling;
         _case = simulation;
         _system = system;
         _final = final;
@@ -55,7 +62,8 @@ internal sealed class Observables
 
         var exchanged = baths.LeftPerArea + baths.RightPerArea;
         var reference = Math.Max(Math.Abs(_initialMass), Math.Abs(baths.LeftPerArea) + Math.Abs(baths.RightPerArea));
-        var imbalance = _system.TotalMass(state) - _initialMass - exchanged;
+        var withdrawn = (_sampling?.RemovedPerArea(Side.Left) ?? 0) + (_sampling?.RemovedPerArea(Side.Right) ?? 0);
+        var imbalance = _system.TotalMass(state) - _initialMass - exchanged + withdrawn;
         return new StateSample(
             time,
             layerMass,
@@ -71,7 +79,11 @@ internal sealed class Observables
         {
             case CompartmentFace compartment:
                 var node = _system.CompartmentNode(side, _case);
-                var transferred = _system.Capacity[node] * (state[node] - _initialState[node]);
+                // What crossed into the compartment: its change of content, plus what samples took out, plus what
+                // first-order removal took out (counted by the removal's bath link, as an inflow of opposite sign).
+                var transferred = (_system.Capacity[node] * (state[node] - _initialState[node]))
+                    + (_sampling?.RemovedPerArea(side) ?? 0)
+                    - bathInflow;
                 return new FaceSample(transferred, compartment.PartitionCoefficient * state[node], CompartmentFraction(side, state));
             case BathFace bath:
                 // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.

@@ -20,6 +20,24 @@ public static class OutputSchedule
         var end = simulation.DurationSeconds;
         var times = new List<double>(simulation.ReportTimesSeconds);
         times.AddRange(simulation.ExtraOutputTimesSeconds);
+        if (simulation.PermeationTest is not null)
+        {
+            // Day boundaries, so that the delivery per day is read from exact values.
+            for (var day = 1; day * Permeation.Delivery.DaySeconds <= end * (1 + 1e-12); day++)
+            {
+                times.Add(day * Permeation.Delivery.DaySeconds);
+            }
+        }
+
+        foreach (var face in new[] { simulation.Left, simulation.Right })
+        {
+            // Sampling happens at output times, which the loop lands on exactly.
+            if (face is CompartmentFace { Sampling: { } sampling })
+            {
+                times.AddRange(sampling.TimesSeconds);
+            }
+        }
+
         var count = (PointsPerDecade * Decades) + 1;
         for (var i = 0; i < count; i++)
         {

@@ -26,12 +26,17 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     private readonly CrossingTracker? _rightTracker;
     private double _systemFraction;
 
-    public ResultRecorder(SimulationCase simulation, DiffusionSystem system, ReadOnlySpan<double> initialState, FinalStateTarget final)
+    public ResultRecorder(
+        SimulationCase simulation,
+        DiffusionSystem system,
+        ReadOnlySpan<double> initialState,
+        FinalStateTarget final,
+        SamplingEvents? sampling = null)
     {
         _case = simulation;
         _system = system;
         _final = final;
-        _observables = new Observables(simulation, system, initialState, final);
+        _observables = new Observables(simulation, system, initialState, final, sampling);
         _profiles = new ProfileBuilder(simulation, system);
         _systemFraction = _observables.FractionOfFinalState(initialState);
         _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction);

@@ -21,7 +21,8 @@ public static class Simulator
         var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
         var final = FinalStateTarget.Of(simulation, system);
-        var recorder = new ResultRecorder(simulation, system, initial, final);
+        var sampling = new SamplingEvents(simulation, system);
+        var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
         var stages = StageSystem.For(simulation, grid);
@@ -29,7 +30,7 @@ public static class Simulator
         ITimeLoopObserver observer = watcher is null ? recorder : new ObserverPair(recorder, watcher);
         var statistics = StagedIntegration.Run(
             stages, initial, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
-            simulation.Solver, observer, cancellation).Statistics;
+            simulation.Solver, observer, sampling, cancellation).Statistics;
 
         return new SimulationResult
         {
@@ -38,7 +39,9 @@ public static class Simulator
             TimeSeries = recorder.Samples,
             Reports = recorder.Reports,
             FinalState = recorder.Summary(horizon),
-            Permeation = final.Kind == FinalStateKind.SteadyPermeation
+            // With first-order removal the receiving "bath" is the removal itself, whose intake is not the amount
+            // permeated; the diffusion-cell metrics report that case instead.
+            Permeation = final.Kind == FinalStateKind.SteadyPermeation && simulation.Left is not CompartmentFace && simulation.Right is not CompartmentFace
                 ? new PermeationSummary(
                     final.Steady!.FluxKgPerSquareMeterSecond,
                     recorder.FluxAtEnd,
@@ -46,6 +49,7 @@ public static class Simulator
                     SingleMembrane.LagTimeSeconds(simulation))
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
+            DiffusionCell = DiffusionCellAnalysis.Of(simulation, recorder.Samples, sampling),
             Statistics = statistics,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
                 ? null

@@ -23,6 +23,7 @@ public static class StagedIntegration
     /// <param name="initialStep">First trial step for a stage.</param>
     /// <param name="options">Time-stepping settings.</param>
     /// <param name="observer">Receives outputs and steps.</param>
+    /// <param name="events">Changes of the state at output times (receptor sampling), in times of the whole run; or null.</param>
     /// <param name="cancellation">Stops the loop.</param>
     public static Outcome Run(
         IReadOnlyList<StageSystem> stages,
@@ -32,6 +33,7 @@ public static class StagedIntegration
         Func<StageSystem, double, double> initialStep,
         SolverOptions options,
         ITimeLoopObserver observer,
+        IStateEvents? events = null,
         CancellationToken cancellation = default)
     {
         ArgumentNullException.ThrowIfNull(stages);
@@ -52,7 +54,8 @@ public static class StagedIntegration
             var shifted = new ShiftedObserver(observer, stage.StartSeconds, length, baths, first: index == 0, last, outputTimes, state.Length);
             var horizon = last ? Math.Max(length, horizonSeconds - stage.StartSeconds) : length;
             var plan = new TimeLoopPlan(outputs, length, horizon, initialStep(stage, outputs[0]));
-            var statistics = new TransientSolver(stage.System, options).Run(state, plan, shifted, cancellation);
+            var shiftedEvents = events is null ? null : new ShiftedEvents(events, stage.StartSeconds);
+            var statistics = new TransientSolver(stage.System, options).Run(state, plan, shifted, shiftedEvents, cancellation);
             total = Add(total, statistics);
             state = shifted.StateAtEnd ?? state;
             baths = shifted.BathsAtEnd;
@@ -85,6 +88,12 @@ public static class StagedIntegration
     /// Puts a stage's clock and bath totals on the run's, passes on only the outputs the run asked for (a stage end is
     /// always integrated to but reported only if it was asked for), and keeps the state at the stage's end.
     /// </summary>
+    /// <summary>State events (receptor sampling) at times of the whole run, applied inside one stage.</summary>
+    private sealed class ShiftedEvents(IStateEvents inner, double offsetSeconds) : IStateEvents
+    {
+        public void Apply(double timeSeconds, Span<double> state) => inner.Apply(timeSeconds + offsetSeconds, state);
+    }
+
     private sealed class ShiftedObserver(
         ITimeLoopObserver inner,
         double offsetSeconds,

@@ -28,6 +28,20 @@ public sealed class TransientSolver
         TimeLoopPlan plan,
         ITimeLoopObserver observer,
         CancellationToken cancellation = default)
+        => Run(initialState, plan, observer, null, cancellation);
+
+    /// <summary>Integrates from u(0) according to the plan, with instant changes of the state at output times.</summary>
+    /// <param name="initialState">u(0) at every node.</param>
+    /// <param name="plan">Output times, end and horizon.</param>
+    /// <param name="observer">Receives the state at outputs and steps.</param>
+    /// <param name="events">Changes of the state applied right after the output at each output time, or null.</param>
+    /// <param name="cancellation">Stops the loop early.</param>
+    public SolverStatistics Run(
+        ReadOnlySpan<double> initialState,
+        TimeLoopPlan plan,
+        ITimeLoopObserver observer,
+        IStateEvents? events,
+        CancellationToken cancellation = default)
     {
         var clock = Stopwatch.StartNew();
         var loop = new LoopState(_system.NodeCount, initialState, ToleranceScale(initialState));
@@ -89,6 +103,7 @@ public sealed class TransientSolver
             if (landsOnTarget && outputIndex < plan.OutputTimesSeconds.Count)
             {
                 observer.OnOutput(loop.Time, loop.Current, loop.Baths);
+                events?.Apply(loop.Time, loop.Current);
                 outputIndex++;
             }
         }

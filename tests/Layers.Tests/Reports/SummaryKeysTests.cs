@@ -14,8 +14,10 @@ namespace Layers.Tests.Reports;
 public sealed partial class SummaryKeysTests
 {
     private static readonly string[] Demos =
-        ["laminate-fatty-food", "patch-on-skin", "diffusion-cell-membrane", "two-liquid-layers", "membrane-time-lag",
-            "hot-fill-barrier-shelf-life"];
+        [
+            "laminate-fatty-food", "patch-on-skin", "diffusion-cell-membrane", "two-liquid-layers", "membrane-time-lag",
+            "hot-fill-barrier-shelf-life", "skin-diffusion-cell-sampling",
+        ];
 
     [Fact]
     public void Summary_keys_of_the_demos_and_the_documented_keys_are_the_same_set()
