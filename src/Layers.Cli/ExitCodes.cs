@@ -11,7 +11,7 @@ public static class ExitCodes
     public const int Success = 0;
 
     /// <summary>
-    /// Some case exceeded its limit. The case format has no limit key yet, so this code is reserved and not returned.
+    /// Some case exceeded its limit: the food's concentration at the end is above its specific migration limit.
     /// </summary>
     public const int LimitExceeded = 1;
 

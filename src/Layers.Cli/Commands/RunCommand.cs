@@ -183,6 +183,6 @@ internal static class RunCommand
             }
         }
 
-        return ExitCodes.Success;
+        return result.FoodContact?.MeetsLimit == false ? ExitCodes.LimitExceeded : ExitCodes.Success;
     }
 }

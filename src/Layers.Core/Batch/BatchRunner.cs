@@ -92,6 +92,7 @@ public static class BatchRunner
             return new BatchRow(item.Name, item.File, item.Parameters, BatchStatus.Succeeded, string.Empty, BatchKeyResults.From(result))
             {
                 SolveSeconds = seconds,
+                Limit = LimitCheck.Of(result),
             };
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)

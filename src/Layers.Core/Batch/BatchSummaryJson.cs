@@ -61,7 +61,12 @@ public static class BatchSummaryJson
                 parameters,
                 status,
                 entry.GetProperty("message").GetString()!,
-                entry.GetProperty("results") is { ValueKind: JsonValueKind.Object } results ? ReadResults(results) : null));
+                entry.GetProperty("results") is { ValueKind: JsonValueKind.Object } results ? ReadResults(results) : null)
+            {
+                Limit = entry.TryGetProperty("limit", out var limit) && limit.ValueKind == JsonValueKind.Object
+                    ? new LimitCheck(limit.GetProperty("quantity").GetString()!, limit.GetProperty("limit").GetDouble(), limit.GetProperty("value").GetDouble())
+                    : null,
+            });
         }
 
         return rows;
@@ -101,8 +106,19 @@ public static class BatchSummaryJson
             json.WriteNull("results");
         }
 
-        // Reserved for the limit key of the case format (see LimitCheck); null until then.
-        json.WriteNull("limit");
+        if (row.Limit is { } limit)
+        {
+            json.WriteStartObject("limit");
+            json.WriteString("quantity", limit.Quantity);
+            json.WriteNumber("limit", limit.LimitSi);
+            json.WriteNumber("value", limit.ValueSi);
+            json.WriteBoolean("exceeded", limit.Exceeded);
+            json.WriteEndObject();
+        }
+        else
+        {
+            json.WriteNull("limit");
+        }
         json.WriteEndObject();
     }
 

@@ -12,4 +12,13 @@ public sealed record LimitCheck(string Quantity, double LimitSi, double ValueSi)
 {
     /// <summary>True when the result is above the limit.</summary>
     public bool Exceeded => ValueSi > LimitSi;
+
+    /// <summary>Name of the quantity of a specific migration limit: the food's concentration at the end, kg/kg.</summary>
+    public const string FoodConcentration = "food concentration at the end [kg/kg]";
+
+    /// <summary>The limit check of a solved case: its specific migration limit, when the case gives one.</summary>
+    public static LimitCheck? Of(Results.SimulationResult result)
+        => result.FoodContact is { SpecificMigrationLimit: { } limit } food
+            ? new LimitCheck(FoodConcentration, limit, food.FinalConcentration)
+            : null;
 }
