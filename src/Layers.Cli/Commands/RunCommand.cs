@@ -49,6 +49,8 @@ internal static class RunCommand
         command.Options.Add(outputRoot);
         command.Options.Add(quiet);
         command.Options.Add(json);
+        var timing = new Option<bool>("--timing") { Description = "Print the solve time, steps accepted and rejected, cells and the time outside the solve (on stderr)." };
+        command.Options.Add(timing);
         command.Options.Add(noPlots);
         command.Options.Add(width);
         command.Options.Add(height);
@@ -89,6 +91,7 @@ internal static class RunCommand
                 CasePaths = paths,
                 Quiet = parseResult.GetValue(quiet),
                 Json = parseResult.GetValue(json),
+                Timing = parseResult.GetValue(timing),
                 Plots = !parseResult.GetValue(noPlots),
                 PlotOptions = new PlotOptions(
                     parseResult.GetValue(width),
@@ -128,6 +131,7 @@ internal static class RunCommand
 
     private static int Execute(RunSettings settings, TextWriter output, TextWriter error, CancellationToken cancellation)
     {
+        var clock = System.Diagnostics.Stopwatch.StartNew();
         var casePath = settings.CasePath;
         var read = CaseArgument.ReadOrReport(casePath, error);
         if (read?.Case is not { } simulation)
@@ -181,6 +185,14 @@ internal static class RunCommand
             {
                 output.WriteLine(FoodContactTables.Caution);
             }
+        }
+
+        if (settings.Timing)
+        {
+            var statistics = result.Statistics;
+            var total = clock.Elapsed.TotalSeconds;
+            error.WriteLine(FormattableString.Invariant(
+                $"timing: time loop {statistics.WallSeconds * 1e3:F2} ms ({statistics.AcceptedSteps} steps accepted, {statistics.RejectedSteps} rejected, {result.Grid.CellCount} cells, {statistics.Unknowns} unknowns); outside the time loop {(total - statistics.WallSeconds) * 1e3:F1} ms (reading, other solves, writing{(settings.Plots ? ", plots" : string.Empty)})"));
         }
 
         return result.FoodContact?.MeetsLimit == false ? ExitCodes.LimitExceeded : ExitCodes.Success;

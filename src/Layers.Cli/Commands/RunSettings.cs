@@ -14,6 +14,9 @@ internal sealed record RunSettings(string CasePath, string OutputRoot)
     /// <summary>Print summary.json on stdout instead of tables.</summary>
     public bool Json { get; init; }
 
+    /// <summary>Report the solve time, step counts and the time spent outside the solve, on stderr.</summary>
+    public bool Timing { get; init; }
+
     /// <summary>Write the PNG plots (and embed them in report.html).</summary>
     public bool Plots { get; init; } = true;
 

@@ -81,4 +81,16 @@ public sealed class RunOutputOptionsTests
         Assert.Contains("must be from 200 to 10000 pixels", outcome.Error, StringComparison.Ordinal);
         Assert.False(Directory.Exists(temp.Combine(CaseName)));
     }
+
+    [Fact]
+    public void Timing_goes_to_stderr_and_leaves_the_json_on_stdout_intact()
+    {
+        using var temp = new TempFolder();
+
+        var outcome = CliRun.Invoke("run", Case, "--out", temp.Path, "--json", "--no-plots", "--timing");
+
+        Assert.Equal(ExitCodes.Success, outcome.ExitCode);
+        Assert.Matches(@"^timing: time loop [0-9.]+ ms \([0-9]+ steps accepted, [0-9]+ rejected, [0-9]+ cells", outcome.Error);
+        Assert.Equal(File.ReadAllText(temp.Combine(CaseName, "summary.json")), outcome.Output);
+    }
 }
