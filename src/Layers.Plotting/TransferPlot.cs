@@ -62,7 +62,7 @@ public static class TransferPlot
 
         if (secondScale)
         {
-            model.Axes.Add(ConcentrationScale(compartments[0], low, high, massUnit, concentrationUnit));
+            model.Axes.Add(ConcentrationScale(compartments[0], low, high, massUnit, simulation.Display));
         }
         else if (panel)
         {
@@ -145,14 +145,21 @@ public static class TransferPlot
 
     // A right-hand scale on which the amount curve of the one compartment reads as its concentration:
     // c = c0 + m / (V / A) is linear in m, so the scale is the mass axis mapped through it.
+    /// <summary>
+    /// The compartment's concentration as a second scale: a mass fraction (mg/kg of food) where the display asks for
+    /// one and the medium's density is known, as the console tables do, else mass per volume.
+    /// </summary>
     private static LinearAxis ConcentrationScale(
-        Medium medium, double low, double high, UnitDefinition massUnit, UnitDefinition concentrationUnit)
+        Medium medium, double low, double high, UnitDefinition massUnit, DisplayUnits display)
     {
         var compartment = (CompartmentFace)medium.Face;
-        double Map(double mass) => concentrationUnit.FromSi(
-            compartment.InitialConcentrationKgPerCubicMeter + massUnit.ToSi(mass) / compartment.VolumePerAreaMeters);
+        var asFraction = display.MediumMassFraction is not null && compartment.DensityKgPerCubicMeter is not null;
+        var unit = asFraction ? display.MediumMassFraction! : DisplayText.ConcentrationUnit(display);
+        var perVolume = asFraction ? compartment.DensityKgPerCubicMeter!.Value : 1;
+        double Map(double mass) => unit.FromSi(
+            (compartment.InitialConcentrationKgPerCubicMeter + (massUnit.ToSi(mass) / compartment.VolumePerAreaMeters)) / perVolume);
         var axis = PlotFrame.Linear(
-            AxisPosition.Right, $"Concentration in {medium.Name} ({DisplayText.Unit(concentrationUnit)})");
+            AxisPosition.Right, $"Concentration in {medium.Name} ({DisplayText.Unit(unit)})");
         axis.Key = ConcentrationAxisKey;
         axis.Minimum = Map(low);
         axis.Maximum = Map(high);

@@ -20,7 +20,7 @@ internal static class FoodContactReader
         "equivalenceActivationEnergy", "partitionConvention",
     ];
 
-    private static readonly string[] StageKeys = ["name", "duration", "temperature", "diffusionCoefficients"];
+    private static readonly string[] StageKeys = ["name", "duration", "temperature", "diffusionCoefficients", "partitionCoefficients"];
     private static readonly string[] TestKeys = ["duration", "temperature"];
     private static readonly string[] ArrheniusKeys = ["referenceTemperature", "activationEnergy"];
     private static readonly string[] EstimateKeys = ["polymer", "relativeMolarMass"];
@@ -31,6 +31,9 @@ internal static class FoodContactReader
         public string? Food { get; set; }
 
         public List<(TemperatureStage Stage, string Path, Dictionary<string, string> OverridePaths)> Stages { get; } = [];
+
+        /// <summary>Per stage (same order as <see cref="Stages"/>), the partition coefficients as written, with their paths.</summary>
+        public List<Dictionary<string, (double Written, string Path)>> StagePartitions { get; } = [];
 
         public Dictionary<string, (DiffusivitySource? Source, ArrheniusDiffusivity? Arrhenius, string Path)> Layers { get; } = [];
 
@@ -113,6 +116,8 @@ internal static class FoodContactReader
             }
         }
 
+        var partitions = StagePartitions(input, layers, left, right, context);
+
         var side = FoodSide(input, left, right, context);
         var convention = ApplyConvention(input, root, layers, side is { } s ? (s == Side.Left ? left : right) : null, context);
         if (side is not { } foodSide || input.Stages.Count == 0 || context.Errors.Count > 0)
@@ -128,7 +133,7 @@ internal static class FoodContactReader
                     ? given with { ReferenceDiffusivity = layer.DiffusivitySquareMetersPerSecond }
                     : (DiffusivitySource)new GivenDiffusivity(layer.DiffusivitySquareMetersPerSecond),
             StringComparer.Ordinal);
-        var stages = input.Stages.Select(entry => entry.Stage).ToArray();
+        var stages = input.Stages.Select((entry, index) => entry.Stage with { PartitionOverrides = partitions[index] }).ToArray();
         var placed = convention
             .Select(layer => layer with { DiffusivitySquareMetersPerSecond = stages[0].DiffusivityOf(layer.Name, sources[layer.Name]).Value })
             .ToList();
@@ -218,12 +223,97 @@ internal static class FoodContactReader
                 }
             }
 
+            var partitions = ReadStagePartitions(stage, context);
             if (duration is { } d && temperature is { } t)
             {
                 input.Stages.Add((new TemperatureStage(name, d, t) { DiffusivityOverrides = overrides }, path, paths));
+                input.StagePartitions.Add(partitions);
             }
         }
     }
+
+    private static Dictionary<string, (double Written, string Path)> ReadStagePartitions(JsonFields stage, ReadContext context)
+    {
+        var written = new Dictionary<string, (double, string)>(StringComparer.Ordinal);
+        if (stage.Member("partitionCoefficients") is not { } map)
+        {
+            return written;
+        }
+
+        if (map.ValueKind != JsonValueKind.Object)
+        {
+            stage.Error("partitionCoefficients", $"expected an object of layer or face name to partition coefficient, e.g. {{ \"sealant\": 1000 }}; found {JsonFields.Describe(map)}");
+            return written;
+        }
+
+        foreach (var member in map.EnumerateObject())
+        {
+            var path = $"{stage.PathOf("partitionCoefficients")}.{member.Name}";
+            if (member.Value.ValueKind == JsonValueKind.Number && member.Value.GetDouble() is var k && k > 0 && double.IsFinite(k))
+            {
+                written[member.Name] = (k, path);
+            }
+            else
+            {
+                context.Errors.Add(new CaseError(path, $"expected a number > 0 (a partition coefficient has no unit); found {JsonFields.Describe(member.Value)}"));
+            }
+        }
+
+        return written;
+    }
+
+    /// <summary>
+    /// The stages' partition coefficients on the volume basis, checked against the layer and face names; a stage
+    /// cannot change K while a partition convention sets it.
+    /// </summary>
+    private static List<Dictionary<string, double>> StagePartitions(
+        Input input, List<Layer> layers, FaceCondition? left, FaceCondition? right, ReadContext context)
+    {
+        var media = layers.Select(layer => (layer.Name, layer.DensityKgPerCubicMeter))
+            .Concat(new[] { left, right }.Select(Medium).OfType<(string, double?)>())
+            .GroupBy(medium => medium.Item1, StringComparer.Ordinal)
+            .ToDictionary(group => group.Key, group => group.First().Item2, StringComparer.Ordinal);
+        var known = string.Join(", ", media.Keys.Select(name => $"'{name}'"));
+        var result = new List<Dictionary<string, double>>();
+        foreach (var written in input.StagePartitions)
+        {
+            var stage = new Dictionary<string, double>(StringComparer.Ordinal);
+            foreach (var (name, (k, path)) in written)
+            {
+                if (input.Convention is not null)
+                {
+                    context.Errors.Add(new CaseError(path, $"must be left out when {input.Path}.partitionConvention is given (the convention sets K for the whole history)"));
+                }
+                else if (!media.TryGetValue(name, out var density))
+                {
+                    context.Errors.Add(new CaseError(path, $"no layer or face is named '{name}'; the names are {known}"));
+                }
+                else if (context.Basis == PartitionBasis.Volume)
+                {
+                    stage[name] = k;
+                }
+                else if (density is { } rho && context.ReferenceDensity is { } reference)
+                {
+                    stage[name] = k * rho / reference;
+                }
+                else
+                {
+                    context.Errors.Add(new CaseError(path, $"needs the density of '{name}' (and of the reference medium) because partitionBasis is \"mass\""));
+                }
+            }
+
+            result.Add(stage);
+        }
+
+        return result;
+    }
+
+    private static (string Name, double? Density)? Medium(FaceCondition? face) => face switch
+    {
+        CompartmentFace compartment => (compartment.Name, compartment.DensityKgPerCubicMeter),
+        BathFace bath => (bath.Name, null),
+        _ => null,
+    };
 
     private static void ReadLayerDiffusion(JsonFields fields, Input input, ReadContext context)
     {

@@ -81,10 +81,10 @@ internal static class FoodContactAssessment
 
         // Relative excess c/level - 1 and the time as a fraction of the step, so that Brent's tolerance (which
         // Math.NET applies to the function value as well as to the argument) means the same for every case.
-        var system = stages[bracket.Stage].System;
+        var stage = stages[bracket.Stage];
         double Excess(double fraction) => fraction <= 0
             ? (watcher.ValueOf(bracket.StartState) / level) - 1
-            : (watcher.ValueOf(Integrate(system, bracket.StartState, fraction * width, options)) / level) - 1;
+            : (watcher.ValueOf(Integrate(stage, bracket.StartState, fraction * width, options)) / level) - 1;
 
         // Re-integrating the whole step with sub-steps can land a hair below the limit when the step itself ended a
         // hair above it; the crossing is then at the step's end to within the integration tolerance.
@@ -96,11 +96,20 @@ internal static class FoodContactAssessment
         return bracket.StartSeconds + (width * Brent.FindRoot(Excess, 0, 1, 1e-10, 200));
     }
 
-    private static double[] Integrate(DiffusionSystem system, double[] start, double seconds, SolverOptions options)
+    /// <summary>Integrates one stage from a state in the case's own u = c/K and returns the end state in it too.</summary>
+    private static double[] Integrate(StageSystem stage, double[] start, double seconds, SolverOptions options)
     {
         var end = new EndState();
-        new TransientSolver(system, options).Run(start, new TimeLoopPlan([seconds], seconds, seconds, seconds), end);
-        return end.State ?? start;
+        var state = (double[])start.Clone();
+        stage.IntoStage(state);
+        new TransientSolver(stage.System, options).Run(state, new TimeLoopPlan([seconds], seconds, seconds, seconds), end);
+        if (end.State is not { } reached)
+        {
+            return start;
+        }
+
+        stage.OutOfStage(reached);
+        return reached;
     }
 
     private static TestComparison Compare(
@@ -179,7 +188,15 @@ internal static class FoodContactAssessment
                     return (layer.Name, value, origin);
                 })
                 .ToArray();
-            reports.Add(new StageReport(stage.Name, start, start + stage.DurationSeconds, stage.TemperatureKelvin, values, watcher.StageEndValues[index]));
+            var food = (CompartmentFace)simulation.Face(settings.FoodSide);
+            var partitions = simulation.Stack.Layers
+                .Select(layer => (layer.Name, stage.PartitionOf(layer.Name, layer.PartitionCoefficient)))
+                .Append((food.Name, stage.PartitionOf(food.Name, food.PartitionCoefficient)))
+                .ToArray();
+            reports.Add(new StageReport(stage.Name, start, start + stage.DurationSeconds, stage.TemperatureKelvin, values, watcher.StageEndValues[index])
+            {
+                Partitions = partitions,
+            });
             start += stage.DurationSeconds;
         }
 

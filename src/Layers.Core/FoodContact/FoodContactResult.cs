@@ -86,7 +86,11 @@ public sealed record StageReport(
     double EndSeconds,
     double TemperatureKelvin,
     IReadOnlyList<(string Layer, double Value, string Origin)> Diffusivities,
-    double FoodConcentrationAtEnd);
+    double FoodConcentrationAtEnd)
+{
+    /// <summary>Each layer's and then the food's partition coefficient in the stage (volume basis, relative to the reference medium).</summary>
+    public IReadOnlyList<(string Medium, double PartitionCoefficient)> Partitions { get; init; } = [];
+}
 
 /// <summary>Lag time d^2/(6D) of a barrier layer in one stage.</summary>
 /// <param name="Layer">Layer name.</param>

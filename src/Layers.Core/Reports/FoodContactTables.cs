@@ -48,7 +48,18 @@ public static class FoodContactTables
             }
         }
 
-        return [new TextTable("Diffusion coefficients by stage", ["stage", "layer", "D [cm2/s]", "where it comes from"], rows)];
+        var tables = new List<TextTable> { new("Diffusion coefficients by stage", ["stage", "layer", "D [cm2/s]", "where it comes from"], rows) };
+        if (settings.Stages.Any(stage => stage.PartitionOverrides.Count > 0))
+        {
+            var food = (CompartmentFace)simulation.Face(settings.FoodSide);
+            var media = simulation.Stack.Layers.Select(layer => (layer.Name, layer.PartitionCoefficient)).Append((food.Name, food.PartitionCoefficient)).ToArray();
+            var partitions = settings.Stages
+                .Select(stage => (IReadOnlyList<string>)[stage.Name, .. media.Select(medium => Number(stage.PartitionOf(medium.Name, medium.PartitionCoefficient)))])
+                .ToList();
+            tables.Add(new TextTable("Partition coefficients by stage (volume basis)", ["stage", .. media.Select(medium => medium.Name)], partitions));
+        }
+
+        return tables;
     }
 
     private static TextTable Figures(SimulationResult result, FoodContactResult food)

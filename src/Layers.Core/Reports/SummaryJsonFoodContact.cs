@@ -115,6 +115,16 @@ internal static class SummaryJsonFoodContact
             }
 
             json.WriteEndArray();
+            json.WriteStartArray("partitionCoefficients");
+            foreach (var (medium, k) in stage.Partitions)
+            {
+                json.WriteStartObject();
+                json.WriteString("name", medium);
+                json.WriteNumber("value", k);
+                json.WriteEndObject();
+            }
+
+            json.WriteEndArray();
             json.WriteEndObject();
         }
 

@@ -28,6 +28,31 @@ internal sealed class FinalStateTarget
 
     public double? ClosedValue { get; }
 
+    /// <summary>The case whose partition coefficients <see cref="Steady"/> and <see cref="ClosedValue"/> are in, when not the run's own.</summary>
+    private SimulationCase? PartitionCase { get; init; }
+
+    /// <summary>
+    /// The final state of a staged run: that of its last stage, whose partition coefficients (and D) hold from the
+    /// end of the run on, with the node values in the case's own u = c/K, as observers read states.
+    /// </summary>
+    public static FinalStateTarget ForStages(SimulationCase simulation, DiffusionSystem system, IReadOnlyList<StageSystem> stages)
+    {
+        var last = stages[^1];
+        if (last.ToStage is not { } factors)
+        {
+            return Of(simulation, system);
+        }
+
+        var target = Of(last.Case, last.System);
+        var values = new double[target.NodeValues.Length];
+        for (var n = 0; n < values.Length; n++)
+        {
+            values[n] = target.NodeValues[n] / factors[n];
+        }
+
+        return new FinalStateTarget(target.Kind, values, target.Steady, target.ClosedValue) { PartitionCase = last.Case };
+    }
+
     public static FinalStateTarget Of(SimulationCase simulation, DiffusionSystem system)
     {
         var values = new double[system.NodeCount];
@@ -86,7 +111,7 @@ internal sealed class FinalStateTarget
     /// <summary>Final concentration at the left and right edge of a layer, kg/m3.</summary>
     public (double Left, double Right) LayerEdges(SimulationCase simulation, int layer)
     {
-        var k = simulation.Stack.Layers[layer].PartitionCoefficient;
+        var k = (PartitionCase ?? simulation).Stack.Layers[layer].PartitionCoefficient;
         if (Steady is null)
         {
             return (k * ClosedValue!.Value, k * ClosedValue!.Value);

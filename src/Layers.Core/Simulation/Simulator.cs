@@ -20,12 +20,12 @@ public static class Simulator
     {
         var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
-        var final = FinalStateTarget.Of(simulation, system);
+        var stages = StageSystem.For(simulation, grid);
+        var final = FinalStateTarget.ForStages(simulation, system, stages);
         var sampling = new SamplingEvents(simulation, system);
         var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
-        var stages = StageSystem.For(simulation, grid);
         var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(simulation, system, stages, initial);
         ITimeLoopObserver observer = watcher is null ? recorder : new ObserverPair(recorder, watcher);
         var statistics = StagedIntegration.Run(

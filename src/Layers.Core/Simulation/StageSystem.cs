@@ -15,9 +15,17 @@ namespace Layers.Core.Simulation;
 public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, double StartSeconds, double EndSeconds)
 {
     /// <summary>
+    /// Per node, the factor from the case's own u = c/K to this stage's, K_case / K_stage (the ratio of the
+    /// storages, as both share the grid); null when the stage keeps the case's partition coefficients.
+    /// States outside a stage are always in the case's own variable, so a concentration carries over unchanged
+    /// when K changes and the mass, storage times u, is the same on both sides of a stage boundary.
+    /// </summary>
+    public double[]? ToStage { get; init; }
+
+    /// <summary>
     /// The stages of a case on a grid: one per temperature stage when the case has a history, else one for the whole
-    /// duration with the case as it is. Partition coefficients are the same in every stage, so storage (and with it
-    /// every mass the observers compute) is the same too; only the conductances change.
+    /// duration with the case as it is. Observers read every state in the case's own u = c/K (see
+    /// <see cref="ToStage"/>), so their masses and concentrations hold in every stage.
     /// </summary>
     public static IReadOnlyList<StageSystem> For(SimulationCase simulation, Grid grid)
     {
@@ -41,17 +49,71 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
         ArgumentNullException.ThrowIfNull(stages);
         var result = new List<StageSystem>();
         var start = 0.0;
+        var own = stages.Any(stage => stage.PartitionOverrides.Count > 0) ? DiffusionSystemBuilder.Build(simulation, grid).System : null;
         foreach (var stage in stages)
         {
+            var k = stage.PartitionOverrides;
             var layers = simulation.Stack.Layers
-                .Select(layer => layer with { DiffusivitySquareMetersPerSecond = stage.DiffusivityOf(layer.Name, sources[layer.Name]).Value })
+                .Select(layer => layer with
+                {
+                    DiffusivitySquareMetersPerSecond = stage.DiffusivityOf(layer.Name, sources[layer.Name]).Value,
+                    PartitionCoefficient = k.GetValueOrDefault(layer.Name, layer.PartitionCoefficient),
+                })
                 .ToArray();
-            var stageCase = simulation with { Stack = new LayerStack(layers) };
+            var stageCase = simulation with
+            {
+                Stack = new LayerStack(layers),
+                Left = WithPartition(simulation.Left, k),
+                Right = WithPartition(simulation.Right, k),
+            };
             var end = start + stage.DurationSeconds;
-            result.Add(new StageSystem(stageCase, DiffusionSystemBuilder.Build(stageCase, grid).System, start, end));
+            var system = DiffusionSystemBuilder.Build(stageCase, grid).System;
+            result.Add(new StageSystem(stageCase, system, start, end) { ToStage = k.Count > 0 ? StorageRatio(own!, system) : null });
             start = end;
         }
 
         return result;
+    }
+
+    /// <summary>This stage's u from the case's own (in place); nothing to do when K is the case's.</summary>
+    public void IntoStage(Span<double> state)
+    {
+        if (ToStage is { } factors)
+        {
+            for (var n = 0; n < state.Length; n++)
+            {
+                state[n] *= factors[n];
+            }
+        }
+    }
+
+    /// <summary>The case's own u from this stage's (in place).</summary>
+    public void OutOfStage(Span<double> state)
+    {
+        if (ToStage is { } factors)
+        {
+            for (var n = 0; n < state.Length; n++)
+            {
+                state[n] /= factors[n];
+            }
+        }
+    }
+
+    private static FaceCondition WithPartition(FaceCondition face, IReadOnlyDictionary<string, double> k) => face switch
+    {
+        BathFace bath when k.TryGetValue(bath.Name, out var value) => bath with { PartitionCoefficient = value },
+        CompartmentFace compartment when k.TryGetValue(compartment.Name, out var value) => compartment with { PartitionCoefficient = value },
+        _ => face,
+    };
+
+    private static double[] StorageRatio(DiffusionSystem own, DiffusionSystem stage)
+    {
+        var ratio = new double[own.NodeCount];
+        for (var n = 0; n < ratio.Length; n++)
+        {
+            ratio[n] = own.Capacity[n] / stage.Capacity[n];
+        }
+
+        return ratio;
     }
 }

@@ -5,19 +5,20 @@ namespace Layers.Core.Simulation;
 /// <summary>
 /// Integrates through a sequence of stages, each with its own assembled system on the same grid: the state vector
 /// and the bath totals at the end of one stage start the next, so no mass is lost between stages, and the observer
-/// sees one clock and one running bath total.
+/// sees one clock and one running bath total. States go in and come out in the case's own u = c/K; a stage whose
+/// partition coefficients differ works in its own (see <see cref="StageSystem.ToStage"/>).
 /// </summary>
 public static class StagedIntegration
 {
     /// <summary>What a staged run ends with.</summary>
     /// <param name="Statistics">Solver counters summed over the stages.</param>
-    /// <param name="FinalState">u at the end of the last stage (or where the loop stopped).</param>
+    /// <param name="FinalState">u at the end of the last stage (or where the loop stopped), in the case's own u = c/K.</param>
     /// <param name="Baths">Bath totals at that time.</param>
     public sealed record Outcome(SolverStatistics Statistics, double[] FinalState, BathTotals Baths);
 
     /// <summary>Runs the stages from <paramref name="initialState"/> at t = 0.</summary>
     /// <param name="stages">Consecutive stages starting at 0.</param>
-    /// <param name="initialState">u(0).</param>
+    /// <param name="initialState">u(0), in the case's own u = c/K.</param>
     /// <param name="outputTimes">Ascending output times on the run's clock, within the stages.</param>
     /// <param name="horizonSeconds">How far past the end the last stage may run while the observer wants more time.</param>
     /// <param name="initialStep">First trial step for a stage.</param>
@@ -51,11 +52,13 @@ public static class StagedIntegration
                 .Select(time => time - stage.StartSeconds)
                 .Append(length)
                 .ToArray();
-            var shifted = new ShiftedObserver(observer, stage.StartSeconds, length, baths, first: index == 0, last, outputTimes, state.Length);
+            var shifted = new ShiftedObserver(observer, stage, length, baths, first: index == 0, last, outputTimes, state.Length);
             var horizon = last ? Math.Max(length, horizonSeconds - stage.StartSeconds) : length;
             var plan = new TimeLoopPlan(outputs, length, horizon, initialStep(stage, outputs[0]));
             var shiftedEvents = events is null ? null : new ShiftedEvents(events, stage.StartSeconds);
-            var statistics = new TransientSolver(stage.System, options).Run(state, plan, shifted, shiftedEvents, cancellation);
+            var stageState = (double[])state.Clone();
+            stage.IntoStage(stageState);
+            var statistics = new TransientSolver(stage.System, options).Run(stageState, plan, shifted, shiftedEvents, cancellation);
             total = Add(total, statistics);
             state = shifted.StateAtEnd ?? state;
             baths = shifted.BathsAtEnd;
@@ -84,19 +87,20 @@ public static class StagedIntegration
         StopReason = stage.StopReason,
     };
 
-    /// <summary>
-    /// Puts a stage's clock and bath totals on the run's, passes on only the outputs the run asked for (a stage end is
-    /// always integrated to but reported only if it was asked for), and keeps the state at the stage's end.
-    /// </summary>
     /// <summary>State events (receptor sampling) at times of the whole run, applied inside one stage.</summary>
     private sealed class ShiftedEvents(IStateEvents inner, double offsetSeconds) : IStateEvents
     {
         public void Apply(double timeSeconds, Span<double> state) => inner.Apply(timeSeconds + offsetSeconds, state);
     }
 
+    /// <summary>
+    /// Puts a stage's clock, bath totals and state variable on the run's, passes on only the outputs the run asked for
+    /// (a stage end is always integrated to but reported only if it was asked for), and keeps the state at the
+    /// stage's end.
+    /// </summary>
     private sealed class ShiftedObserver(
         ITimeLoopObserver inner,
-        double offsetSeconds,
+        StageSystem stage,
         double lengthSeconds,
         BathTotals offsetBaths,
         bool first,
@@ -104,7 +108,9 @@ public static class StagedIntegration
         IReadOnlyList<double> requested,
         int nodeCount) : ITimeLoopObserver
     {
+        private readonly double _offsetSeconds = stage.StartSeconds;
         private readonly double[] _end = new double[nodeCount];
+        private readonly double[]? _own = stage.ToStage is null ? null : new double[nodeCount];
         private bool _reachedEnd;
 
         public double[]? StateAtEnd => _reachedEnd ? _end : null;
@@ -120,16 +126,17 @@ public static class StagedIntegration
                 return;
             }
 
-            var time = timeSeconds + offsetSeconds;
+            var time = timeSeconds + _offsetSeconds;
             if (timeSeconds == 0 || requested.Any(wanted => Math.Abs(wanted - time) <= 1e-12 * Math.Max(wanted, 1)))
             {
-                inner.OnOutput(time, state, Shift(bathInflow));
+                inner.OnOutput(time, Own(state), Shift(bathInflow));
             }
         }
 
-        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> stageState, BathTotals bathInflow)
         {
-            inner.OnStep(timeSeconds + offsetSeconds, state, Shift(bathInflow));
+            var state = Own(stageState);
+            inner.OnStep(timeSeconds + _offsetSeconds, state, Shift(bathInflow));
 
             // The loop lands exactly on the stage end (its last output); only the last stage may step past it, while the
             // observer looks for the times to equilibrium, and those later states are not the stage's end.
@@ -141,7 +148,19 @@ public static class StagedIntegration
             }
         }
 
-        private BathTotals Shift(BathTotals stage)
-            => new(stage.LeftPerArea + offsetBaths.LeftPerArea, stage.RightPerArea + offsetBaths.RightPerArea);
+        private BathTotals Shift(BathTotals stageTotals)
+            => new(stageTotals.LeftPerArea + offsetBaths.LeftPerArea, stageTotals.RightPerArea + offsetBaths.RightPerArea);
+
+        private ReadOnlySpan<double> Own(ReadOnlySpan<double> stageState)
+        {
+            if (_own is null)
+            {
+                return stageState;
+            }
+
+            stageState.CopyTo(_own);
+            stage.OutOfStage(_own);
+            return _own;
+        }
     }
 }

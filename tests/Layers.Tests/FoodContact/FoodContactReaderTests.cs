@@ -78,12 +78,64 @@ public sealed class FoodContactReaderTests
     [InlineData("$.foodContact.partitionConvention", "\"sticky\"", "$.foodContact.partitionConvention: expected one of \"readilySoluble\", \"poorlySoluble\"; got \"sticky\"")]
     [InlineData("$.foodContact.stages", "[]", "$.foodContact.stages: expected a non-empty array of stages")]
     [InlineData("$.duration", "\"10 d\"", "$.duration: must be left out: $.foodContact.stages give the duration")]
+    [InlineData("$.foodContact.stages[1].partitionCoefficients", "{ \"lid\": 5 }", "$.foodContact.stages[1].partitionCoefficients.lid: no layer or face is named 'lid'; the names are 'core', 'skin', ")]
+    [InlineData("$.foodContact.stages[1].partitionCoefficients", "{ \"skin\": \"5 mg/kg\" }", "$.foodContact.stages[1].partitionCoefficients.skin: expected a number > 0 (a partition coefficient has no unit)")]
+    [InlineData("$.foodContact.stages[1].partitionCoefficients", "{ \"skin\": 0 }", "$.foodContact.stages[1].partitionCoefficients.skin: expected a number > 0")]
+    [InlineData("$.foodContact.stages[1].partitionCoefficients", "[1000]", "$.foodContact.stages[1].partitionCoefficients: expected an object of layer or face name to partition coefficient")]
     public void Each_rule_is_reported_at_its_path(string path, string value, string expectedStart)
     {
         var result = CaseJson.Read(CaseJson.With(Film, (path, value)));
 
         Assert.False(result.IsValid);
         Assert.Contains(result.Errors, error => $"{error.JsonPath}: {error.Message}".StartsWith(expectedStart, StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Stage_partition_coefficients_are_read_by_layer_and_face_name()
+    {
+        var json = CaseJson.With(
+            Film,
+            ("$.right.name", "\"juice\""),
+            ("$.foodContact.stages[1].partitionCoefficients", """{ "skin": 1000, "juice": 2 }"""));
+
+        var result = CaseJson.Read(json);
+
+        Assert.True(result.IsValid, result.FormatErrors());
+        var stages = result.Case!.FoodContact!.Stages;
+        Assert.Empty(stages[0].PartitionOverrides);
+        Assert.Equal(1000, stages[1].PartitionOverrides["skin"]);
+        Assert.Equal(2, stages[1].PartitionOverrides["juice"]);
+    }
+
+    [Fact]
+    public void Stage_partition_coefficients_on_the_mass_basis_are_converted_with_the_densities()
+    {
+        // K_volume = K_mass x rho_medium / rho_reference (the definition of the two bases; docs/case-format.md).
+        var json = CaseJson.With(
+            Film,
+            ("$.partitionBasis", "\"mass\""),
+            ("$.referenceMedium", """{ "name": "food", "density": "1 g/cm3" }"""),
+            ("$.layers[1].density", "\"0.9 g/cm3\""),
+            ("$.foodContact.stages[1].partitionCoefficients", """{ "core": 10 }"""));
+
+        var result = CaseJson.Read(json);
+
+        Assert.True(result.IsValid, result.FormatErrors());
+        Tolerance.Relative(9.2, result.Case!.FoodContact!.Stages[1].PartitionOverrides["core"], 1e-12, "10 x 0.92 / 1.0");
+    }
+
+    [Fact]
+    public void Stage_partition_coefficients_with_a_partition_convention_are_an_error()
+    {
+        var json = CaseJson.With(
+            Film,
+            ("$.foodContact.partitionConvention", "\"readilySoluble\""),
+            ("$.foodContact.stages[0].partitionCoefficients", """{ "core": 3 }"""));
+
+        var result = CaseJson.Read(json);
+
+        Assert.Contains(result.Errors, error => error.JsonPath == "$.foodContact.stages[0].partitionCoefficients.core"
+            && error.Message.Contains("partitionConvention", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -114,9 +114,10 @@ public sealed class PlotContentTests(PlotCases cases) : IClassFixture<PlotCases>
         var amount = model.Axes.Single(axis => axis.Position == AxisPosition.Left);
         var concentration = model.Axes.Single(axis => axis.Position == AxisPosition.Right);
         var compartment = (CompartmentFace)result.Case.Right;
-        // mg/dm2 -> kg/m2 is 1e-4; kg/m3 -> mg/L is 1e3.
-        var expected = amount.Maximum * 1e-4 / compartment.VolumePerAreaMeters * 1e3;
+        // The food has a density, so the scale reads mg/kg like the console: mg/dm2 -> kg/m2 is 1e-4, kg/kg -> mg/kg is 1e6.
+        var expected = amount.Maximum * 1e-4 / compartment.VolumePerAreaMeters / compartment.DensityKgPerCubicMeter!.Value * 1e6;
         Assert.Equal(expected, concentration.Maximum, 9);
+        Assert.Contains("mg/kg", concentration.Title, StringComparison.Ordinal);
         Assert.Equal(0, concentration.Minimum, 12);
     }
 
