@@ -68,7 +68,7 @@ public sealed record FoodContactResult
         "one-dimensional diffusion through the thickness (edges and seals ignored)",
         "no swelling of the layers by the food or simulant, and no reaction or loss of the substance",
         "the food or simulant is well mixed (no resistance on its side unless a film coefficient is given)",
-        "partition coefficients constant over the whole history; diffusion coefficients constant within each stage",
+        "partition coefficients constant over the whole history unless a stage gives its own; diffusion and partition coefficients constant within each stage, with concentrations carried over unchanged at a stage boundary",
         "the substance starts uniformly distributed in each layer",
     ];
 }

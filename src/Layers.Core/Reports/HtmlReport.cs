@@ -70,7 +70,7 @@ public static class HtmlReport
     private static IEnumerable<string> Assumptions(SimulationResult result)
     {
         yield return "Diffusion is one-dimensional, across the stack; edges and lateral diffusion are ignored.";
-        yield return "Each layer is homogeneous with a constant diffusion coefficient and partition coefficient; no swelling, reaction or concentration dependence.";
+        yield return "Each layer is homogeneous with a constant diffusion coefficient and partition coefficient (within each stage of a history); no swelling, reaction or concentration dependence.";
         yield return $"At every interface the flux is continuous and the concentrations are in partition equilibrium (c_i / c_j = K_i / K_j, K relative to {result.Case.ReferenceMedium}).";
         yield return "Compartments are perfectly mixed apart from any film resistance given; baths hold a fixed concentration.";
         if (result.FoodContact is not null)
