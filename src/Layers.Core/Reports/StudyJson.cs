@@ -1,0 +1,57 @@
+using System.Text.Json;
+
+namespace Layers.Core.Reports;
+
+/// <summary>Pieces shared by the study files (design.json, uncertainty.json).</summary>
+internal static class StudyJson
+{
+    /// <summary>The tool and case file.</summary>
+    public static void Header(Utf8JsonWriter json, string caseFile)
+    {
+        json.WriteStartObject("tool");
+        json.WriteString("name", ToolInfo.Name);
+        json.WriteString("version", ToolInfo.Version);
+        json.WriteEndObject();
+        json.WriteString("caseFile", Path.GetFileName(caseFile));
+    }
+
+    /// <summary>A number, or null when missing or not finite (JSON has no infinity).</summary>
+    public static void Number(Utf8JsonWriter json, string name, double? value)
+    {
+        if (value is { } number && double.IsFinite(number))
+        {
+            json.WriteNumber(name, number);
+        }
+        else
+        {
+            json.WriteNull(name);
+        }
+    }
+
+    /// <summary>An array of numbers, non-finite ones as null; unnamed (an element of an array) when the name is null.</summary>
+    public static void Numbers(Utf8JsonWriter json, string? name, IEnumerable<double> values)
+    {
+        if (name is null)
+        {
+            json.WriteStartArray();
+        }
+        else
+        {
+            json.WriteStartArray(name);
+        }
+
+        foreach (var value in values)
+        {
+            if (double.IsFinite(value))
+            {
+                json.WriteNumberValue(value);
+            }
+            else
+            {
+                json.WriteNullValue();
+            }
+        }
+
+        json.WriteEndArray();
+    }
+}
