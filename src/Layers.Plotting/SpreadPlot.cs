@@ -15,7 +15,7 @@ public static class SpreadPlot
 {
     /// <summary>The PNG, or null when the case has no face medium.</summary>
     /// <param name="outcome">The completed study.</param>
-    /// <param name="options">Picture size and time-axis choice.</param>
+    /// <param name="options">Picture size and time-axis choice (the command line gives a linear time axis, on which the bands read best).</param>
     public static byte[]? Render(UncertaintyOutcome outcome, PlotOptions options)
     {
         ArgumentNullException.ThrowIfNull(outcome);
@@ -32,7 +32,7 @@ public static class SpreadPlot
         var timeUnit = DisplayText.TimeAxisUnit(simulation.DurationSeconds);
         var model = PlotFrame.Create(
             simulation.Title,
-            [$"{preferred}: percentiles over {settings.Samples} samples of " + string.Join("; ", settings.Inputs.Select(input => $"{input.Input.Label} {input.Distribution.Describe()}"))],
+            [$"{preferred}: percentiles over {settings.Samples} samples of " + string.Join("; ", settings.Inputs.Select(input => input.Describe()))],
             options);
         var timeTitle = $"Time ({DisplayText.Unit(timeUnit)})" + (options.LogTimeAxis ? ", logarithmic scale" : string.Empty);
         model.Axes.Add(PlotFrame.Axis(options.LogTimeAxis, AxisPosition.Bottom, timeTitle));

@@ -85,7 +85,7 @@ internal static class UncertaintyCommand
             ["percentiles.csv"] = Encoding.UTF8.GetBytes(UncertaintyReport.PercentilesCsv(outcome)),
             ["samples.csv"] = Encoding.UTF8.GetBytes(UncertaintyReport.SamplesCsv(outcome)),
         };
-        if (settings.Plots && SpreadPlot.Render(outcome, settings.PlotOptions) is { } png)
+        if (settings.Plots && SpreadPlot.Render(outcome, settings.PlotOptions with { LogTimeAxis = false }) is { } png)
         {
             files["spread.png"] = png;
         }

@@ -32,7 +32,7 @@ public static class UncertaintyReport
                 json.WriteStartObject();
                 json.WriteString("path", input.Input.Path);
                 json.WriteString("unit", input.Input.Unit);
-                json.WriteString("distribution", input.Distribution.Describe());
+                json.WriteString("distribution", input.Distribution.Describe(input.Input.Unit));
                 StudyJson.Numbers(json, "sampledPercentiles", Percentile.Of(outcome.InputValues.Select(row => row[i]), settings.Percentiles));
                 json.WriteEndObject();
             }
@@ -142,7 +142,7 @@ public static class UncertaintyReport
         var lines = new List<string>
         {
             $"{settings.Samples} samples ({JsonNamingPolicy.CamelCase.ConvertName(settings.Sampling.ToString())}, seed {settings.Seed}) of " +
-                string.Join("; ", settings.Inputs.Select(input => $"{input.Input.Label}: {input.Distribution.Describe()}")),
+                string.Join("; ", settings.Inputs.Select(input => input.Describe())),
         };
         foreach (var series in outcome.Series.Where(series => series.SiUnit == "kg/m2"))
         {

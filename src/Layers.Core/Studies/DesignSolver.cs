@@ -149,7 +149,7 @@ public static class DesignSolver
     /// <summary>The runs made so far, by value of the search variable, so that no value is solved twice.</summary>
     private sealed class Runs(JsonObject document, string fileName, DesignSettings settings, CancellationToken cancellation)
     {
-        private readonly ConcurrentDictionary<double, (double Result, SimulationResult Run)> _done = new();
+        private readonly ConcurrentDictionary<double, (double Value, double Result, SimulationResult Run)> _done = new();
         private readonly double[] _extraTimes = settings.Result.AtSeconds is { } at ? [at] : [];
 
         public double Miss(double search) => (Evaluate(search).Result / settings.TargetSi) - 1;
@@ -172,16 +172,16 @@ public static class DesignSolver
         }
 
         public List<DesignPoint> Points() =>
-            _done.Select(pair => new DesignPoint(settings.FromSearch(pair.Key), pair.Value.Result)).OrderBy(point => point.Value).ToList();
+            _done.Values.Select(done => new DesignPoint(done.Value, done.Result)).OrderBy(point => point.Value).ToList();
 
-        private (double Result, SimulationResult Run) Evaluate(double search)
+        private (double Value, double Result, SimulationResult Run) Evaluate(double search)
         {
             if (_done.TryGetValue(search, out var known))
             {
                 return known;
             }
 
-            var value = settings.FromSearch(search);
+            var value = Math.Clamp(settings.FromSearch(search), settings.Lowest, settings.Highest);
             var read = CaseVariation.Read(document, fileName, [(settings.Input, value)], _extraTimes);
             if (read.Case is not { } simulation)
             {
@@ -199,7 +199,7 @@ public static class DesignSolver
                 throw new StopException(DesignStatus.SolverFailed, $"with {settings.Input.Write(value)} at {settings.Input.Path} the solver stopped early ({run.Statistics})");
             }
 
-            var evaluated = (settings.Result.Read(run) ?? double.NaN, run);
+            var evaluated = (value, settings.Result.Read(run) ?? double.NaN, run);
             _done[search] = evaluated;
             return evaluated;
         }

@@ -14,11 +14,13 @@ public abstract record Distribution
     /// <param name="probability">Strictly between 0 and 1.</param>
     public abstract double Quantile(double probability);
 
-    /// <summary>The case-file name and parameters, e.g. "logNormal (median 1e-9, factor 2)".</summary>
-    public abstract string Describe();
+    /// <summary>The case-file name and parameters, e.g. "logNormal (median 1e-09 cm2/s, factor 2)".</summary>
+    /// <param name="unit">The unit the parameters are written in; empty for plain numbers.</param>
+    public abstract string Describe(string unit);
 
-    /// <summary>Formats a parameter for <see cref="Describe"/>.</summary>
-    protected static string Number(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
+    /// <summary>Formats a parameter with its unit for <see cref="Describe"/>.</summary>
+    protected static string Number(double value, string unit = "") =>
+        value.ToString("G6", CultureInfo.InvariantCulture) + (unit.Length > 0 ? " " + unit : string.Empty);
 }
 
 /// <summary>
@@ -33,7 +35,7 @@ public sealed record LogNormalDistribution(double Median, double Factor) : Distr
     public override double Quantile(double probability) => Median * Math.Pow(Factor, Normal.InvCDF(0, 1, probability));
 
     /// <inheritdoc/>
-    public override string Describe() => $"logNormal (median {Number(Median)}, factor {Number(Factor)})";
+    public override string Describe(string unit) => $"logNormal (median {Number(Median, unit)}, factor {Number(Factor)})";
 }
 
 /// <summary>Uniform between two values.</summary>
@@ -45,7 +47,7 @@ public sealed record UniformDistribution(double Minimum, double Maximum) : Distr
     public override double Quantile(double probability) => Minimum + (probability * (Maximum - Minimum));
 
     /// <inheritdoc/>
-    public override string Describe() => $"uniform ({Number(Minimum)} to {Number(Maximum)})";
+    public override string Describe(string unit) => $"uniform ({Number(Minimum, unit)} to {Number(Maximum, unit)})";
 }
 
 /// <summary>Uniform in the logarithm between two positive values: every decade equally likely.</summary>
@@ -57,7 +59,7 @@ public sealed record LogUniformDistribution(double Minimum, double Maximum) : Di
     public override double Quantile(double probability) => Minimum * Math.Pow(Maximum / Minimum, probability);
 
     /// <inheritdoc/>
-    public override string Describe() => $"logUniform ({Number(Minimum)} to {Number(Maximum)})";
+    public override string Describe(string unit) => $"logUniform ({Number(Minimum, unit)} to {Number(Maximum, unit)})";
 }
 
 /// <summary>Normal by its mean and standard deviation. Values that break a rule of the case (a negative thickness) make the study invalid.</summary>
@@ -69,5 +71,5 @@ public sealed record NormalDistribution(double Mean, double StandardDeviation) :
     public override double Quantile(double probability) => Normal.InvCDF(Mean, StandardDeviation, probability);
 
     /// <inheritdoc/>
-    public override string Describe() => $"normal (mean {Number(Mean)}, standard deviation {Number(StandardDeviation)})";
+    public override string Describe(string unit) => $"normal (mean {Number(Mean, unit)}, standard deviation {Number(StandardDeviation, unit)})";
 }

@@ -5,7 +5,11 @@ namespace Layers.Core.Studies;
 /// <summary>One uncertain input: where it is written in the case and how it spreads, in the unit it is written in.</summary>
 /// <param name="Input">The input.</param>
 /// <param name="Distribution">Its distribution.</param>
-public sealed record UncertainInput(StudyInput Input, Distribution Distribution);
+public sealed record UncertainInput(StudyInput Input, Distribution Distribution)
+{
+    /// <summary>"path: distribution (parameters with units)".</summary>
+    public string Describe() => $"{Input.Label}: {Distribution.Describe(Input.Unit)}";
+}
 
 /// <summary>A limit whose chance of being exceeded is reported.</summary>
 /// <param name="Result">The result compared with the limit.</param>
