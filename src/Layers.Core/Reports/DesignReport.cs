@@ -69,7 +69,7 @@ public static class DesignReport
         var question = $"{settings.Input.Label} for {settings.Result.Describe()} = {DesignSolver.Show(settings, settings.TargetSi)}";
         if (outcome.Answer is not { } answer)
         {
-            return $"{question}: {outcome.Message}";
+            return outcome.Message ?? question;
         }
 
         var tolerance = outcome.Tolerance is { } within ? $" +- {settings.Input.Show(within)}" : string.Empty;
