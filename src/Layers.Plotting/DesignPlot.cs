@@ -48,33 +48,27 @@ public static class DesignPlot
         };
         curve.Points.AddRange(points.Select(point => new DataPoint(point.Value, unit.FromSi(point.ResultSi))));
         model.Series.Add(curve);
-        model.Annotations.Add(new LineAnnotation
-        {
-            Type = LineAnnotationType.Horizontal,
-            Y = unit.FromSi(settings.TargetSi),
-            Color = PlotStyle.Limit,
-            LineStyle = LineStyle.Dash,
-            StrokeThickness = PlotStyle.ReferenceThickness,
-            Text = $"target {DisplayText.Quantity(unit.FromSi(settings.TargetSi), unit)}",
-            FontSize = PlotStyle.LabelFontSize,
-            TextColor = PlotStyle.Limit,
-        });
+        model.Annotations.Add(Marker(LineAnnotationType.Horizontal, unit.FromSi(settings.TargetSi), PlotStyle.Limit, LineStyle.Dash, $"target {DisplayText.Quantity(unit.FromSi(settings.TargetSi), unit)}"));
         if (outcome.Answer is { } answer)
         {
-            model.Annotations.Add(new LineAnnotation
-            {
-                Type = LineAnnotationType.Vertical,
-                X = answer,
-                Color = PlotStyle.Reference,
-                LineStyle = LineStyle.Dot,
-                StrokeThickness = PlotStyle.ReferenceThickness,
-                Text = $"answer {settings.Input.Show(answer)}",
-                FontSize = PlotStyle.LabelFontSize,
-                TextColor = PlotStyle.Reference,
-                TextOrientation = AnnotationTextOrientation.Vertical,
-            });
+            var line = Marker(LineAnnotationType.Vertical, answer, PlotStyle.Reference, LineStyle.Dot, $"answer {settings.Input.Show(answer)}");
+            line.TextOrientation = AnnotationTextOrientation.Vertical;
+            model.Annotations.Add(line);
         }
 
         return PngRenderer.Render(model, options);
     }
+
+    private static LineAnnotation Marker(LineAnnotationType type, double at, OxyColor color, LineStyle style, string text) => new()
+    {
+        Type = type,
+        X = at,
+        Y = at,
+        Color = color,
+        LineStyle = style,
+        StrokeThickness = PlotStyle.ReferenceThickness,
+        Text = text,
+        FontSize = PlotStyle.LabelFontSize,
+        TextColor = color,
+    };
 }

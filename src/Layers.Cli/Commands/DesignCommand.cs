@@ -35,20 +35,12 @@ internal static class DesignCommand
             return ExitCodes.InvalidInput;
         }
 
-        var errors = new List<Core.Cases.CaseError>();
-        var design = DesignReader.Read(document, casePath, simulation, errors)!;
+        // Read once already with the case, so valid here.
+        var design = DesignReader.Read(document, casePath, simulation, [])!;
         var outcome = DesignSolver.Solve(document, casePath, design, settings.Jobs, cancellation);
-        switch (outcome.Status)
+        if (StudyCase.Failure(casePath, outcome.Status, outcome.Message, outcome.Errors, error) is { } failed)
         {
-            case DesignStatus.Cancelled:
-                error.WriteLine($"{casePath}: cancelled; no results were written.");
-                return ExitCodes.Cancelled;
-            case DesignStatus.Invalid:
-                StudyCase.ReportErrors(casePath, $"{outcome.Message}; no results were written.", outcome.Errors, error);
-                return ExitCodes.InvalidInput;
-            case DesignStatus.SolverFailed:
-                error.WriteLine($"{casePath}: {outcome.Message}; no results were written.");
-                return ExitCodes.SolverFailed;
+            return failed;
         }
 
         var json = DesignReport.Json(outcome, casePath);
@@ -63,7 +55,7 @@ internal static class DesignCommand
             return ExitCodes.OutputFailed;
         }
 
-        if (outcome.Status == DesignStatus.NotReached)
+        if (outcome.Status == StudyStatus.NotReached)
         {
             error.WriteLine($"{casePath}: {DesignReport.Line(outcome)}");
         }
@@ -75,7 +67,7 @@ internal static class DesignCommand
         else if (!settings.Quiet)
         {
             output.WriteLine($"{simulation.Title} ({casePath})");
-            if (outcome.Status == DesignStatus.Found)
+            if (outcome.Status == StudyStatus.Done)
             {
                 output.WriteLine($"  {DesignReport.Line(outcome)}");
             }
@@ -85,6 +77,6 @@ internal static class DesignCommand
             output.WriteLine(outcome.RunAtAnswer is { } run ? CautionText.For(run) : CautionText.Paragraph);
         }
 
-        return outcome.Status == DesignStatus.Found ? ExitCodes.Success : ExitCodes.TargetNotReached;
+        return outcome.Status == StudyStatus.Done ? ExitCodes.Success : ExitCodes.TargetNotReached;
     }
 }

@@ -48,13 +48,26 @@ internal static class StudyCase
         }
     }
 
-    /// <summary>Reports the errors of an invalid variant like those of a case file.</summary>
-    public static void ReportErrors(string casePath, string message, IReadOnlyList<CaseError> errors, TextWriter error)
+    /// <summary>
+    /// For a study that could not finish, reports why (an invalid value with the reader's errors, like those of a
+    /// case file) and returns the exit code; null when it finished (with or without reaching a design's target).
+    /// </summary>
+    public static int? Failure(string casePath, StudyStatus status, string? message, IReadOnlyList<CaseError> errors, TextWriter error)
     {
-        error.WriteLine($"{casePath}: {message}");
-        if (errors.Count > 0)
+        switch (status)
         {
-            error.WriteLine(new CaseReadResult(casePath, null, errors).FormatErrors());
+            case StudyStatus.Cancelled:
+                error.WriteLine($"{casePath}: cancelled; no results were written.");
+                return ExitCodes.Cancelled;
+            case StudyStatus.Invalid:
+                error.WriteLine($"{casePath}: {message}; no results were written.");
+                error.WriteLine(new CaseReadResult(casePath, null, errors).FormatErrors());
+                return ExitCodes.InvalidInput;
+            case StudyStatus.SolverFailed:
+                error.WriteLine($"{casePath}: {message}; no results were written.");
+                return ExitCodes.SolverFailed;
+            default:
+                return null;
         }
     }
 }

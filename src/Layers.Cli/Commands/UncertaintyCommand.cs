@@ -57,6 +57,7 @@ internal static class UncertaintyCommand
             return ExitCodes.InvalidInput;
         }
 
+        // Read once already with the case, so valid here.
         var study = UncertaintyReader.Read(document, casePath, simulation, [])!;
         study = study with
         {
@@ -65,17 +66,9 @@ internal static class UncertaintyCommand
             Sampling = overrides.Latin ? SamplingMethod.LatinHypercube : study.Sampling,
         };
         var outcome = UncertaintyRunner.Run(document, casePath, simulation, study, settings.Jobs, cancellation);
-        switch (outcome.Status)
+        if (StudyCase.Failure(casePath, outcome.Status, outcome.Message, outcome.Errors, error) is { } failed)
         {
-            case UncertaintyStatus.Cancelled:
-                error.WriteLine($"{casePath}: cancelled; no results were written.");
-                return ExitCodes.Cancelled;
-            case UncertaintyStatus.Invalid:
-                StudyCase.ReportErrors(casePath, $"{outcome.Message}; no results were written.", outcome.Errors, error);
-                return ExitCodes.InvalidInput;
-            case UncertaintyStatus.SolverFailed:
-                error.WriteLine($"{casePath}: {outcome.Message}; no results were written.");
-                return ExitCodes.SolverFailed;
+            return failed;
         }
 
         var json = UncertaintyReport.Json(outcome, casePath);

@@ -17,11 +17,8 @@ public static class DesignReport
     {
         ArgumentNullException.ThrowIfNull(outcome);
         var settings = outcome.Settings;
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        return StudyJson.Write(caseFile, json =>
         {
-            json.WriteStartObject();
-            StudyJson.Header(json, caseFile);
             json.WriteStartObject("input");
             json.WriteString("path", settings.Input.Path);
             json.WriteString("unit", settings.Input.Unit);
@@ -35,7 +32,7 @@ public static class DesignReport
             json.WriteString("unit", settings.Result.SiUnit);
             json.WriteNumber("target", settings.TargetSi);
             json.WriteEndObject();
-            json.WriteString("status", JsonNamingPolicy.CamelCase.ConvertName(outcome.Status.ToString()));
+            json.WriteString("status", outcome.Status == StudyStatus.Done ? "found" : "notReached");
             json.WriteString("message", outcome.Message);
             StudyJson.Number(json, "answer", outcome.Answer);
             json.WriteString("answerText", outcome.Answer is { } answer ? settings.Input.Write(answer) : null);
@@ -55,10 +52,7 @@ public static class DesignReport
 
             json.WriteEndArray();
             json.WriteString("caution", outcome.RunAtAnswer is { } run ? CautionText.For(run) : CautionText.Paragraph);
-            json.WriteEndObject();
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+        });
     }
 
     /// <summary>The answer in one line for the console, or the reason there is none.</summary>

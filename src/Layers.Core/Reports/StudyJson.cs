@@ -5,8 +5,23 @@ namespace Layers.Core.Reports;
 /// <summary>Pieces shared by the study files (design.json, uncertainty.json).</summary>
 internal static class StudyJson
 {
+    /// <summary>An indented JSON object that starts with the tool and the case file, then the body; with a final newline.</summary>
+    public static string Write(string caseFile, Action<Utf8JsonWriter> body)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            json.WriteStartObject();
+            Header(json, caseFile);
+            body(json);
+            json.WriteEndObject();
+        }
+
+        return System.Text.Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+    }
+
     /// <summary>The tool and case file.</summary>
-    public static void Header(Utf8JsonWriter json, string caseFile)
+    private static void Header(Utf8JsonWriter json, string caseFile)
     {
         json.WriteStartObject("tool");
         json.WriteString("name", ToolInfo.Name);

@@ -16,11 +16,8 @@ public static class UncertaintyReport
     {
         ArgumentNullException.ThrowIfNull(outcome);
         var settings = outcome.Settings;
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        return StudyJson.Write(caseFile, json =>
         {
-            json.WriteStartObject();
-            StudyJson.Header(json, caseFile);
             json.WriteNumber("samples", settings.Samples);
             json.WriteNumber("seed", settings.Seed);
             json.WriteString("sampling", JsonNamingPolicy.CamelCase.ConvertName(settings.Sampling.ToString()));
@@ -72,10 +69,7 @@ public static class UncertaintyReport
             json.WriteEndArray();
             WriteExceedance(json, outcome.Exceedance);
             json.WriteString("caution", CautionText.Paragraph);
-            json.WriteEndObject();
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+        });
     }
 
     /// <summary>percentiles.csv: one row per output time, one column per result and percentile.</summary>

@@ -3,25 +3,6 @@ using Layers.Core.Results;
 
 namespace Layers.Core.Studies;
 
-/// <summary>How a design ended.</summary>
-public enum DesignStatus
-{
-    /// <summary>A value in the range gives the target; <see cref="DesignOutcome.Answer"/> holds it.</summary>
-    Found,
-
-    /// <summary>No value in the range gives the target; the message names the results found.</summary>
-    NotReached,
-
-    /// <summary>A value tried gave an invalid case (the message quotes the reader).</summary>
-    Invalid,
-
-    /// <summary>The solver stopped early for a value tried.</summary>
-    SolverFailed,
-
-    /// <summary>Interrupted.</summary>
-    Cancelled,
-}
-
 /// <summary>One value tried and the result it gave.</summary>
 /// <param name="Value">The input, in its unit.</param>
 /// <param name="ResultSi">The result, SI; NaN when the case does not define it at this value.</param>
@@ -34,9 +15,9 @@ public sealed record DesignOutcome
     public required DesignSettings Settings { get; init; }
 
     /// <summary>How it ended.</summary>
-    public required DesignStatus Status { get; init; }
+    public required StudyStatus Status { get; init; }
 
-    /// <summary>For anything but <see cref="DesignStatus.Found"/>, what went wrong in plain words.</summary>
+    /// <summary>For anything but <see cref="StudyStatus.Done"/>, what went wrong in plain words.</summary>
     public string? Message { get; init; }
 
     /// <summary>Errors of an invalid value, with their JSON paths.</summary>

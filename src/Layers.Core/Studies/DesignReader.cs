@@ -21,15 +21,13 @@ public static class DesignReader
     /// <param name="errors">Receives the problems.</param>
     public static DesignSettings? Read(JsonObject root, string fileName, SimulationCase baseCase, List<CaseError> errors)
     {
-        ArgumentNullException.ThrowIfNull(root);
         ArgumentNullException.ThrowIfNull(errors);
         var before = errors.Count;
-        if (StudyValues.Object(root["design"], At, "{ \"input\": {...}, \"result\": ..., \"target\": ... }", errors) is not { } design)
+        if (StudyValues.Section(root, "design", "{ \"input\": {...}, \"result\": ..., \"target\": ... }", Keys, errors) is not { } design)
         {
             return null;
         }
 
-        StudyValues.Unknown(design, At, Keys, errors);
         var range = ReadInput(root, fileName, design, errors);
         var result = StudyValues.Measure(design["result"], $"{At}.result", baseCase, errors);
         var target = result is null ? null : StudyValues.Quantity(design["target"], $"{At}.target", result.Dimension, errors);

@@ -76,7 +76,7 @@ public static class DesignSolver
         return new DesignOutcome
         {
             Settings = settings,
-            Status = DesignStatus.Found,
+            Status = StudyStatus.Done,
             Points = runs.Points(),
             Answer = settings.FromSearch(root),
             Tolerance = tolerance,
@@ -93,7 +93,7 @@ public static class DesignSolver
         // answer then stops either within the input tolerance or with the result within that fraction of the target.
         return Brent.TryFindRoot(runs.Miss, low, high, settings.SearchAccuracy, MaximumIterations, out var root)
             ? root
-            : throw new StopException(DesignStatus.SolverFailed, $"the root finder did not settle within {MaximumIterations} runs; the result may not be continuous in {settings.Input.Label}");
+            : throw new StopException(StudyStatus.SolverFailed, $"the root finder did not settle within {MaximumIterations} runs; the result may not be continuous in {settings.Input.Label}");
     }
 
     /// <summary>The tolerance of the answer, and whether results on either side of the target confirm it.</summary>
@@ -136,7 +136,7 @@ public static class DesignSolver
                 $"({points.Count} values tried{(undefined > 0 ? $", {undefined} without a result" : string.Empty)}); widen the range or change the target";
         }
 
-        return new DesignOutcome { Settings = settings, Status = DesignStatus.NotReached, Message = message, Points = points };
+        return new DesignOutcome { Settings = settings, Status = StudyStatus.NotReached, Message = message, Points = points };
     }
 
     /// <summary>A result in the unit the target was written in.</summary>
@@ -185,18 +185,18 @@ public static class DesignSolver
             var read = CaseVariation.Read(document, fileName, [(settings.Input, value)], _extraTimes);
             if (read.Case is not { } simulation)
             {
-                throw new StopException(DesignStatus.Invalid, $"with {settings.Input.Write(value)} at {settings.Input.Path} the case is invalid", read.Errors);
+                throw new StopException(StudyStatus.Invalid, $"with {settings.Input.Write(value)} at {settings.Input.Path} the case is invalid", read.Errors);
             }
 
             var run = Simulator.Run(simulation, cancellation);
             if (run.Statistics.StopReason == StopReason.Cancelled)
             {
-                throw new StopException(DesignStatus.Cancelled, "cancelled");
+                throw new StopException(StudyStatus.Cancelled, "cancelled");
             }
 
             if (!run.Completed)
             {
-                throw new StopException(DesignStatus.SolverFailed, $"with {settings.Input.Write(value)} at {settings.Input.Path} the solver stopped early ({run.Statistics})");
+                throw new StopException(StudyStatus.SolverFailed, $"with {settings.Input.Write(value)} at {settings.Input.Path} the solver stopped early ({run.Statistics})");
             }
 
             var evaluated = (value, settings.Result.Read(run) ?? double.NaN, run);
@@ -206,9 +206,9 @@ public static class DesignSolver
     }
 
     /// <summary>Ends the search from inside the root finder's callback; carries a user-facing outcome, not a bug.</summary>
-    private sealed class StopException(DesignStatus status, string message, IReadOnlyList<CaseError>? errors = null) : Exception(message)
+    private sealed class StopException(StudyStatus status, string message, IReadOnlyList<CaseError>? errors = null) : Exception(message)
     {
-        public DesignStatus Status { get; } = status;
+        public StudyStatus Status { get; } = status;
 
         public IReadOnlyList<CaseError> Errors { get; } = errors ?? [];
     }

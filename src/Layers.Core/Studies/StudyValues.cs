@@ -128,6 +128,20 @@ internal static class StudyValues
         }
     }
 
+    /// <summary>The study section <c>$.key</c> of the document, with its unknown keys reported; null with an error when it is not an object.</summary>
+    public static JsonObject? Section(JsonObject root, string key, string shape, IReadOnlyList<string> keys, List<CaseError> errors)
+    {
+        ArgumentNullException.ThrowIfNull(root);
+        ArgumentNullException.ThrowIfNull(errors);
+        if (Object(root[key], $"$.{key}", shape, errors) is not { } section)
+        {
+            return null;
+        }
+
+        Unknown(section, $"$.{key}", keys, errors);
+        return section;
+    }
+
     /// <summary>The node as a JSON object; null with an error naming the expected shape otherwise.</summary>
     public static JsonObject? Object(JsonNode? node, string at, string shape, List<CaseError> errors)
     {

@@ -3,22 +3,6 @@ using Layers.Core.Domain;
 
 namespace Layers.Core.Studies;
 
-/// <summary>How an uncertainty study ended.</summary>
-public enum UncertaintyStatus
-{
-    /// <summary>Every sample was solved.</summary>
-    Completed,
-
-    /// <summary>A sample gave an invalid case; nothing was solved.</summary>
-    Invalid,
-
-    /// <summary>The solver stopped early for a sample.</summary>
-    SolverFailed,
-
-    /// <summary>Interrupted.</summary>
-    Cancelled,
-}
-
 /// <summary>Percentiles of one result over the samples.</summary>
 /// <param name="Result">The result.</param>
 /// <param name="Values">One value per sample, SI (NaN where the sample has no such result, +infinity for a time never reached).</param>
@@ -57,9 +41,9 @@ public sealed record UncertaintyOutcome
     public required SimulationCase BaseCase { get; init; }
 
     /// <summary>How it ended.</summary>
-    public required UncertaintyStatus Status { get; init; }
+    public required StudyStatus Status { get; init; }
 
-    /// <summary>For anything but <see cref="UncertaintyStatus.Completed"/>, what went wrong.</summary>
+    /// <summary>For anything but <see cref="StudyStatus.Done"/>, what went wrong.</summary>
     public string? Message { get; init; }
 
     /// <summary>The errors of the first invalid sample.</summary>

@@ -28,16 +28,14 @@ public static class UncertaintyReader
     /// <param name="errors">Receives the problems.</param>
     public static UncertaintySettings? Read(JsonObject root, string fileName, SimulationCase baseCase, List<CaseError> errors)
     {
-        ArgumentNullException.ThrowIfNull(root);
         ArgumentNullException.ThrowIfNull(baseCase);
         ArgumentNullException.ThrowIfNull(errors);
         var before = errors.Count;
-        if (StudyValues.Object(root["uncertainty"], At, "{ \"inputs\": [...], \"samples\": 200 }", errors) is not { } study)
+        if (StudyValues.Section(root, "uncertainty", "{ \"inputs\": [...], \"samples\": 200 }", Keys, errors) is not { } study)
         {
             return null;
         }
 
-        StudyValues.Unknown(study, At, Keys, errors);
         var inputs = ReadInputs(root, fileName, study, errors);
         var samples = StudyValues.Number(study, "samples", At, 2, UncertaintySettings.MaximumSamples, UncertaintySettings.DefaultSamples, errors);
         var seed = StudyValues.Number(study, "seed", At, 0, int.MaxValue, UncertaintySettings.DefaultSeed, errors);

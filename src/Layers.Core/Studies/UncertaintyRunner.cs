@@ -39,7 +39,7 @@ public static class UncertaintyRunner
         var extra = times
             .Concat(settings.Results.Concat(settings.Limit is { } limit ? [limit.Result] : []).Select(result => result.AtSeconds ?? 0))
             .ToArray();
-        var outcome = new UncertaintyOutcome { Settings = settings, BaseCase = baseCase, Status = UncertaintyStatus.Completed, InputValues = values, TimesSeconds = times };
+        var outcome = new UncertaintyOutcome { Settings = settings, BaseCase = baseCase, Status = StudyStatus.Done, InputValues = values, TimesSeconds = times };
 
         var cases = new SimulationCase?[settings.Samples];
         var reads = new CaseReadResult[settings.Samples];
@@ -53,7 +53,7 @@ public static class UncertaintyRunner
         {
             return outcome with
             {
-                Status = UncertaintyStatus.Invalid,
+                Status = StudyStatus.Invalid,
                 Message = $"sample {invalid + 1} of {settings.Samples} ({Describe(settings, values[invalid])}) is not a valid case; " +
                     "narrow the distribution or choose one that stays within the rules (logNormal for values that must be > 0)",
                 Errors = reads[invalid].Errors,
@@ -80,19 +80,19 @@ public static class UncertaintyRunner
         }
         catch (OperationCanceledException)
         {
-            return outcome with { Status = UncertaintyStatus.Cancelled, Message = "cancelled" };
+            return outcome with { Status = StudyStatus.Cancelled, Message = "cancelled" };
         }
 
         if (cancellation.IsCancellationRequested)
         {
-            return outcome with { Status = UncertaintyStatus.Cancelled, Message = "cancelled" };
+            return outcome with { Status = StudyStatus.Cancelled, Message = "cancelled" };
         }
 
         if (Array.FindIndex(failures, failure => failure is not null) is var failed and >= 0)
         {
             return outcome with
             {
-                Status = UncertaintyStatus.SolverFailed,
+                Status = StudyStatus.SolverFailed,
                 Message = $"sample {failed + 1} of {settings.Samples} ({Describe(settings, values[failed])}): the solver stopped early ({failures[failed]})",
             };
         }

@@ -18,9 +18,9 @@ public sealed class DesignTests
             "design": { "input": { "path": "$.layers[0].thickness", "from": "5 um", "to": "200 um" }, "result": "lagTime", "target": "100 s" }
             """));
 
-        var outcome = DesignSolver.Solve(document, "design.json", design, jobs: 2);
+        var outcome = DesignSolver.Solve(document, "study.json", design, jobs: 2);
 
-        Assert.Equal(DesignStatus.Found, outcome.Status);
+        Assert.Equal(StudyStatus.Done, outcome.Status);
         Assert.True(design.LogScale, "a range spanning more than a decade is searched on a log scale");
         var expected = Math.Sqrt(6 * 1e-12 * 100) * 1e6;
         // The solver's lag time is within about 1 % (see SweepTimeLagTests), i.e. 0.5 % in the thickness, plus the
@@ -57,9 +57,9 @@ public sealed class DesignTests
 
         var expected = Brent.FindRoot(d => Fraction(d) - 0.5, 1e-16, 1e-10, 1e-24) * 1e4; // cm2/s
 
-        var outcome = DesignSolver.Solve(document, "design.json", design, jobs: 2);
+        var outcome = DesignSolver.Solve(document, "study.json", design, jobs: 2);
 
-        Assert.Equal(DesignStatus.Found, outcome.Status);
+        Assert.Equal(StudyStatus.Done, outcome.Status);
         // Dt/l^2 = 0.1967 at half release (0.0492 for the full thickness 2l, Crank's t_1/2 = 0.049 (2l)^2/D).
         Assert.Equal(0.1967, expected * 1e-4 * t / (l * l), 3);
         // Near half release M goes roughly as sqrt(D), so 0.5 % in the amount is about 1 % in D.
@@ -74,9 +74,9 @@ public sealed class DesignTests
             "design": { "input": { "path": "$.layers[0].thickness", "from": "5 um", "to": "20 um" }, "result": "lagTime", "target": "10 h", "points": 4 }
             """));
 
-        var outcome = DesignSolver.Solve(document, "design.json", design, jobs: 2);
+        var outcome = DesignSolver.Solve(document, "study.json", design, jobs: 2);
 
-        Assert.Equal(DesignStatus.NotReached, outcome.Status);
+        Assert.Equal(StudyStatus.NotReached, outcome.Status);
         Assert.Null(outcome.Answer);
         Assert.Equal(4, outcome.Points.Count);
         Assert.StartsWith("no value of layers[0].thickness from 5 um to 20 um gives lagTime = 10 h: over that range it lies between", outcome.Message);

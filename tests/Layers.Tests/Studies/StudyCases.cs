@@ -1,3 +1,4 @@
+using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
 using Layers.Core.Studies;
@@ -35,27 +36,21 @@ internal static class StudyCases
         """;
 
     /// <summary>The document, the valid base case and the design read from it.</summary>
-    public static (System.Text.Json.Nodes.JsonObject Document, SimulationCase Case, DesignSettings Design) Design(string json)
-    {
-        var read = CaseReader.ReadText(json, "design.json");
-        Assert.True(read.IsValid, read.FormatErrors());
-        var document = CaseVariation.Parse(json)!;
-        var errors = new List<CaseError>();
-        var design = DesignReader.Read(document, "design.json", read.Case!, errors);
-        Assert.Empty(errors);
-        return (document, read.Case!, design!);
-    }
+    public static (JsonObject Document, SimulationCase Case, DesignSettings Design) Design(string json) => Study(json, DesignReader.Read);
 
     /// <summary>The document, the valid base case and the uncertainty study read from it.</summary>
-    public static (System.Text.Json.Nodes.JsonObject Document, SimulationCase Case, UncertaintySettings Study) Uncertainty(string json)
+    public static (JsonObject Document, SimulationCase Case, UncertaintySettings Study) Uncertainty(string json) => Study(json, UncertaintyReader.Read);
+
+    private static (JsonObject, SimulationCase, T) Study<T>(string json, Func<JsonObject, string, SimulationCase, List<CaseError>, T?> read)
+        where T : class
     {
-        var read = CaseReader.ReadText(json, "spread.json");
-        Assert.True(read.IsValid, read.FormatErrors());
+        var file = CaseReader.ReadText(json, "study.json");
+        Assert.True(file.IsValid, file.FormatErrors());
         var document = CaseVariation.Parse(json)!;
         var errors = new List<CaseError>();
-        var study = UncertaintyReader.Read(document, "spread.json", read.Case!, errors);
+        var study = read(document, "study.json", file.Case!, errors);
         Assert.Empty(errors);
-        return (document, read.Case!, study!);
+        return (document, file.Case!, study!);
     }
 
     /// <summary>The messages of reading a document as "path: message".</summary>

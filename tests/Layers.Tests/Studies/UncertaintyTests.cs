@@ -24,9 +24,9 @@ public sealed class UncertaintyTests
             """, diffusion: "1e-9 cm2/s", cells: "\"numerics\": { \"cells\": 60 },"));
         static double Released(double diffusionCm2PerSecond) => 2 * 1.0 * Math.Sqrt(diffusionCm2PerSecond * 1e-4 * 900 / Math.PI);
 
-        var outcome = UncertaintyRunner.Run(document, "spread.json", baseCase, study, jobs: 2);
+        var outcome = UncertaintyRunner.Run(document, "study.json", baseCase, study, jobs: 2);
 
-        Assert.Equal(UncertaintyStatus.Completed, outcome.Status);
+        Assert.Equal(StudyStatus.Done, outcome.Status);
         var spread = Assert.Single(outcome.Results);
         var inputPercentiles = Percentile.Of(outcome.InputValues.Select(row => row[0]), study.Percentiles);
         for (var i = 0; i < study.Percentiles.Count; i++)
@@ -57,9 +57,9 @@ public sealed class UncertaintyTests
             "uncertainty": { "inputs": [ { "path": "$.layers[0].diffusionCoefficient", "distribution": "logUniform", "min": "1e-10 cm2/s", "max": "1e-8 cm2/s" } ], "samples": 6, "seed": 3, "sampling": "latinHypercube" }
             """, cells: "\"numerics\": { \"cells\": 30 },"));
 
-        var one = UncertaintyRunner.Run(document, "spread.json", baseCase, study, jobs: 1);
-        var two = UncertaintyRunner.Run(document, "spread.json", baseCase, study, jobs: 2);
-        var other = UncertaintyRunner.Run(document, "spread.json", baseCase, study with { Seed = 4 }, jobs: 2);
+        var one = UncertaintyRunner.Run(document, "study.json", baseCase, study, jobs: 1);
+        var two = UncertaintyRunner.Run(document, "study.json", baseCase, study, jobs: 2);
+        var other = UncertaintyRunner.Run(document, "study.json", baseCase, study with { Seed = 4 }, jobs: 2);
 
         Assert.Equal(Core.Reports.UncertaintyReport.SamplesCsv(one), Core.Reports.UncertaintyReport.SamplesCsv(two));
         Assert.Equal(Core.Reports.UncertaintyReport.PercentilesCsv(one), Core.Reports.UncertaintyReport.PercentilesCsv(two));
