@@ -44,11 +44,19 @@ public static class UncertaintyRunner
         var cases = new SimulationCase?[settings.Samples];
         var reads = new CaseReadResult[settings.Samples];
         var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, jobs), CancellationToken = cancellation };
-        Parallel.For(0, settings.Samples, options, i =>
+        try
         {
-            reads[i] = CaseVariation.Read(document, fileName, settings.Inputs.Select((input, k) => (input.Input, values[i][k])), extra);
-            cases[i] = reads[i].Case;
-        });
+            Parallel.For(0, settings.Samples, options, i =>
+            {
+                reads[i] = CaseVariation.Read(document, fileName, settings.Inputs.Select((input, k) => (input.Input, values[i][k])), extra);
+                cases[i] = reads[i].Case;
+            });
+        }
+        catch (OperationCanceledException)
+        {
+            return outcome with { Status = StudyStatus.Cancelled, Message = "cancelled" };
+        }
+
         if (Array.FindIndex(cases, simulation => simulation is null) is var invalid and >= 0)
         {
             return outcome with
