@@ -17,6 +17,8 @@ public static class CliApp
         root.Subcommands.Add(CheckCommand.Create(output, error));
         root.Subcommands.Add(VerifyCommand.Create(output, error));
         root.Subcommands.Add(MergeCommand.Create(output, error));
+        root.Subcommands.Add(DesignCommand.Create(output, error));
+        root.Subcommands.Add(UncertaintyCommand.Create(output, error));
         return root;
     }
 

@@ -18,6 +18,7 @@ public static class CaseReader
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
         "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "sweep", "foodContact", "permeationTest",
+        "design", "uncertainty",
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
@@ -76,6 +77,13 @@ public static class CaseReader
                 // A sweep document read as one case is its base case; once that is valid its sweep must still
                 // expand, so that `layers check` reports the sweep's own mistakes too.
                 errors.AddRange(SweepExpander.Expand(json, fileName).Errors);
+            }
+
+            if (errors.Count == 0)
+            {
+                // Likewise the study sections: read as one case the file is its base case, and `layers check`
+                // reports the mistakes of its design or uncertainty study.
+                errors.AddRange(Studies.StudySections.Check(json, fileName, simulation!));
             }
 
             if (errors.Count == 0)

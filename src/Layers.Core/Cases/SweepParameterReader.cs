@@ -32,7 +32,7 @@ internal static partial class SweepParameterReader
             }
         }
 
-        var (path, steps) = ReadPath(root, parameter, at, errors);
+        var (path, steps) = VariedPath.Read(root, parameter, at, "swept", errors);
         var hasList = parameter.ContainsKey("values");
         var hasRange = parameter.ContainsKey("from") || parameter.ContainsKey("to") || parameter.ContainsKey("count") || parameter.ContainsKey("spacing");
         List<SweepParameter.Choice>? values = null;
@@ -56,39 +56,6 @@ internal static partial class SweepParameterReader
         return errors.Count == before && steps is not null && values is not null
             ? new SweepParameter(path, steps, values)
             : null;
-    }
-
-    private static (string Path, IReadOnlyList<object>? Steps) ReadPath(JsonObject root, JsonObject parameter, string at, List<CaseError> errors)
-    {
-        if (parameter["path"] is not JsonValue value || !value.TryGetValue<string>(out var path))
-        {
-            errors.Add(new CaseError($"{at}.path", "is required: the JSON path of a value in this case, e.g. \"$.layers[0].thickness\""));
-            return (string.Empty, null);
-        }
-
-        var steps = JsonPathSteps.Parse(path);
-        if (steps is null)
-        {
-            errors.Add(new CaseError($"{at}.path", $"'{path}' is not a path of the form $.layers[0].thickness"));
-            return (path, null);
-        }
-
-        if (steps[0] is "sweep" or "title")
-        {
-            errors.Add(new CaseError($"{at}.path", $"'{path}' cannot be swept"));
-            return (path, null);
-        }
-
-        var target = JsonPathSteps.Find(root, steps);
-        if (target is not JsonValue found || found.GetValueKind() is not (JsonValueKind.String or JsonValueKind.Number))
-        {
-            errors.Add(new CaseError($"{at}.path", target is null
-                ? $"'{path}' is not in this case; a swept value must be written in the case"
-                : $"'{path}' is not a quantity or number"));
-            return (path, null);
-        }
-
-        return (path, steps);
     }
 
     private static List<SweepParameter.Choice>? ReadList(JsonNode? node, string path, string at, List<CaseError> errors)
@@ -167,7 +134,8 @@ internal static partial class SweepParameterReader
         return choices;
     }
 
-    private static (double Number, string Unit, bool IsNumber, string Written)? Endpoint(JsonNode? node, string at, List<CaseError> errors)
+    /// <summary>A number, or a number with a unit such as "1e-10 cm2/s", split; null (with an error) otherwise.</summary>
+    internal static (double Number, string Unit, bool IsNumber, string Written)? Endpoint(JsonNode? node, string at, List<CaseError> errors)
     {
         if (node is JsonValue value && value.GetValueKind() == JsonValueKind.Number)
         {

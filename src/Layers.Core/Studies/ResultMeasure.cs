@@ -1,0 +1,115 @@
+using System.Globalization;
+using System.Text.Json;
+using Layers.Core.Domain;
+using Layers.Core.Results;
+using Layers.Core.Units;
+
+namespace Layers.Core.Studies;
+
+/// <summary>
+/// A named result read from a solved case, in SI units: what a design aims at and what an uncertainty study
+/// reports. Results "at" a time are read at an output time of the run (studies add that time to the outputs, see
+/// <see cref="CaseVariation.Read"/>); without a time they are read at the end of the duration.
+/// </summary>
+/// <param name="Kind">Which result.</param>
+/// <param name="AtSeconds">The time at which a time-dependent result is read, s; null for the end of the duration.</param>
+/// <param name="AtText">That time as written; empty when not given.</param>
+public sealed record ResultMeasure(MeasureKind Kind, double? AtSeconds = null, string AtText = "")
+{
+    /// <summary>The case-file names of the results.</summary>
+    public static IReadOnlyDictionary<string, MeasureKind> Names { get; } =
+        Enum.GetValues<MeasureKind>().ToDictionary(kind => JsonNamingPolicy.CamelCase.ConvertName(kind.ToString()), kind => kind, StringComparer.Ordinal);
+
+    /// <summary>The case-file name, e.g. <c>rightReceived</c>.</summary>
+    public string Name => JsonNamingPolicy.CamelCase.ConvertName(Kind.ToString());
+
+    /// <summary>True for the results that are read at a time (and accept <c>at</c>).</summary>
+    public bool IsAtTime => Kind is MeasureKind.LeftReceived or MeasureKind.RightReceived or MeasureKind.LeftConcentration
+        or MeasureKind.RightConcentration or MeasureKind.FoodConcentration;
+
+    /// <summary>The dimension of the result, for parsing targets and limits.</summary>
+    public Dimension Dimension => Kind switch
+    {
+        MeasureKind.LeftReceived or MeasureKind.RightReceived => Dimension.MassPerArea,
+        MeasureKind.LeftConcentration or MeasureKind.RightConcentration => Dimension.MassConcentration,
+        MeasureKind.FoodConcentration => Dimension.MassFraction,
+        MeasureKind.SteadyFlux => Dimension.MassFlux,
+        _ => Dimension.Time,
+    };
+
+    /// <summary>The SI unit of the result, as in summary files.</summary>
+    public string SiUnit => Dimension switch
+    {
+        Dimension.MassPerArea => "kg/m2",
+        Dimension.MassConcentration => "kg/m3",
+        Dimension.MassFraction => "kg/kg",
+        Dimension.MassFlux => "kg/m2/s",
+        _ => "s",
+    };
+
+    /// <summary>The name with its time, e.g. "rightReceived at 10 d".</summary>
+    public string Describe() => AtText.Length > 0 ? $"{Name} at {AtText}" : Name;
+
+    /// <summary>
+    /// The result of a solved case, SI; null when the case does not define it (no bath pair for a lag time, the
+    /// limit never reached, a time after the duration).
+    /// </summary>
+    public double? Read(SimulationResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        var at = AtSeconds ?? result.Case.DurationSeconds;
+        return Kind switch
+        {
+            MeasureKind.LeftReceived => Face(result, Side.Left, at)?.TransferredIntoMediumPerArea,
+            MeasureKind.RightReceived => Face(result, Side.Right, at)?.TransferredIntoMediumPerArea,
+            MeasureKind.LeftConcentration => Face(result, Side.Left, at)?.ConcentrationKgPerCubicMeter,
+            MeasureKind.RightConcentration => Face(result, Side.Right, at)?.ConcentrationKgPerCubicMeter,
+            MeasureKind.FoodConcentration => Food(result, at),
+            MeasureKind.SteadyFlux => result.Permeation?.SteadyFluxKgPerSquareMeterSecond,
+            MeasureKind.LagTime => result.Permeation?.LagTimeSeconds,
+            MeasureKind.TimeTo90Percent => result.FinalState.System.NinetyPercent,
+            _ => result.FoodContact?.LimitReachedSeconds,
+        };
+    }
+
+    /// <summary>
+    /// Why this result cannot be read from a case of this shape (a closed face, no food contact), or null when it
+    /// can. Checked against the base case when a study is read.
+    /// </summary>
+    public string? Problem(SimulationCase simulation)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        if (AtSeconds is { } at && at > simulation.DurationSeconds * (1 + 1e-12))
+        {
+            return string.Create(CultureInfo.InvariantCulture, $"'{AtText}' is after the end of the duration ({simulation.DurationSeconds:G6} s)");
+        }
+
+        return Kind switch
+        {
+            MeasureKind.LeftReceived or MeasureKind.LeftConcentration when simulation.Left is ClosedFace =>
+                $"{Name} needs a medium on the left; the left face is closed",
+            MeasureKind.RightReceived or MeasureKind.RightConcentration when simulation.Right is ClosedFace =>
+                $"{Name} needs a medium on the right; the right face is closed",
+            MeasureKind.FoodConcentration when simulation.FoodContact is null => $"{Name} needs $.foodContact",
+            MeasureKind.TimeToLimit when simulation.FoodContact?.SpecificMigrationLimit is null =>
+                $"{Name} needs $.foodContact.specificMigrationLimit",
+            MeasureKind.SteadyFlux or MeasureKind.LagTime when simulation.Left is not BathFace || simulation.Right is not BathFace =>
+                $"{Name} needs a bath on each face",
+            _ => null,
+        };
+    }
+
+    private static FaceSample? Face(SimulationResult result, Side side, double at) =>
+        TimeSeriesValues.At(result.TimeSeries, at) is { } sample ? (side == Side.Left ? sample.Left : sample.Right) : null;
+
+    private static double? Food(SimulationResult result, double at)
+    {
+        if (result.FoodContact is not { } food)
+        {
+            return null;
+        }
+
+        var face = Face(result, food.FoodSide, at);
+        return face is null ? null : face.ConcentrationKgPerCubicMeter / food.FoodDensityKgPerCubicMeter;
+    }
+}

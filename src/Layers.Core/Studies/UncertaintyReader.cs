@@ -1,0 +1,247 @@
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using Layers.Core.Cases;
+using Layers.Core.Domain;
+using Layers.Core.Units;
+
+namespace Layers.Core.Studies;
+
+/// <summary>Reads <c>$.uncertainty</c> of a case document, every mistake with its JSON path.</summary>
+public static class UncertaintyReader
+{
+    private const string At = "$.uncertainty";
+    private static readonly string[] Keys = ["inputs", "samples", "seed", "sampling", "percentiles", "results", "limit"];
+    private static readonly string[] LimitKeys = ["result", "value"];
+
+    private static readonly Dictionary<string, string[]> Parameters = new(StringComparer.Ordinal)
+    {
+        ["logNormal"] = ["median", "factor"],
+        ["uniform"] = ["min", "max"],
+        ["logUniform"] = ["min", "max"],
+        ["normal"] = ["mean", "standardDeviation"],
+    };
+
+    /// <summary>The study, or null with the errors added.</summary>
+    /// <param name="root">The whole case document, which has an <c>uncertainty</c> member.</param>
+    /// <param name="fileName">The case file.</param>
+    /// <param name="baseCase">The case as written (valid).</param>
+    /// <param name="errors">Receives the problems.</param>
+    public static UncertaintySettings? Read(JsonObject root, string fileName, SimulationCase baseCase, List<CaseError> errors)
+    {
+        ArgumentNullException.ThrowIfNull(baseCase);
+        ArgumentNullException.ThrowIfNull(errors);
+        var before = errors.Count;
+        if (StudyValues.Section(root, "uncertainty", "{ \"inputs\": [...], \"samples\": 200 }", Keys, errors) is not { } study)
+        {
+            return null;
+        }
+
+        var inputs = ReadInputs(root, fileName, study, errors);
+        var samples = StudyValues.Number(study, "samples", At, 2, UncertaintySettings.MaximumSamples, UncertaintySettings.DefaultSamples, errors);
+        var seed = StudyValues.Number(study, "seed", At, 0, int.MaxValue, UncertaintySettings.DefaultSeed, errors);
+        foreach (var (key, value) in new[] { ("samples", samples), ("seed", seed) })
+        {
+            if (value is { } number && number != Math.Floor(number))
+            {
+                errors.Add(new CaseError($"{At}.{key}", "must be a whole number"));
+            }
+        }
+
+        var sampling = StudyValues.Word(study, "sampling", At, ["random", "latinHypercube"], errors);
+        var percentiles = ReadPercentiles(study, errors);
+        var results = ReadResults(study, baseCase, errors);
+        var limit = ReadLimit(study, baseCase, errors);
+        if (errors.Count > before)
+        {
+            return null;
+        }
+
+        return new UncertaintySettings
+        {
+            Inputs = inputs,
+            Samples = (int)samples!.Value,
+            Seed = (int)seed!.Value,
+            Sampling = sampling == "latinHypercube" ? SamplingMethod.LatinHypercube : SamplingMethod.Random,
+            Percentiles = percentiles,
+            Results = results,
+            Limit = limit,
+        };
+    }
+
+    private static List<UncertainInput> ReadInputs(JsonObject root, string fileName, JsonObject study, List<CaseError> errors)
+    {
+        var inputs = new List<UncertainInput>();
+        if (study["inputs"] is not JsonArray list || list.Count == 0)
+        {
+            errors.Add(new CaseError($"{At}.inputs", "expected a non-empty array of inputs { \"path\": ..., \"distribution\": ..., ... }"));
+            return inputs;
+        }
+
+        for (var i = 0; i < list.Count; i++)
+        {
+            var at = FormattableString.Invariant($"{At}.inputs[{i}]");
+            if (ReadInput(root, fileName, list[i], at, errors) is { } input)
+            {
+                if (inputs.Any(earlier => earlier.Input.Path == input.Input.Path))
+                {
+                    errors.Add(new CaseError($"{at}.path", $"'{input.Input.Path}' is already an uncertain input"));
+                }
+
+                inputs.Add(input);
+            }
+        }
+
+        return inputs;
+    }
+
+    private static UncertainInput? ReadInput(JsonObject root, string fileName, JsonNode? node, string at, List<CaseError> errors)
+    {
+        if (StudyValues.Object(node, at, "{ \"path\": ..., \"distribution\": \"logNormal\", \"median\": ..., \"factor\": ... }", errors) is not { } entry)
+        {
+            return null;
+        }
+
+        var before = errors.Count;
+        var name = StudyValues.Word(entry, "distribution", at, [.. Parameters.Keys], errors);
+        if (entry["distribution"] is null)
+        {
+            errors.Add(new CaseError($"{at}.distribution", $"is required: one of {string.Join(", ", Parameters.Keys)}"));
+            return null;
+        }
+
+        if (name is null)
+        {
+            return null;
+        }
+
+        var keys = Parameters[name];
+        StudyValues.Unknown(entry, at, ["path", "distribution", .. keys], errors);
+        var first = SweepParameterReader.Endpoint(entry[keys[0]], $"{at}.{keys[0]}", errors);
+        var input = first is { } unitSource ? CaseVariation.ReadInput(root, entry, at, unitSource.Unit, errors) : null;
+        var second = name == "logNormal" ? Factor(entry, at, errors) : SweepParameterReader.Endpoint(entry[keys[1]], $"{at}.{keys[1]}", errors);
+        if (errors.Count > before || input is null || first is not { } a || second is not { } b)
+        {
+            return null;
+        }
+
+        if (name != "logNormal" && (!string.Equals(a.Unit, b.Unit, StringComparison.Ordinal) || a.IsNumber != b.IsNumber))
+        {
+            errors.Add(new CaseError($"{at}.{keys[1]}", $"must be written like {keys[0]} ('{a.Written}'), in the same unit; got '{b.Written}'"));
+            return null;
+        }
+
+        var distribution = Build(name, a.Number, b.Number, at, keys, errors);
+        if (distribution is null)
+        {
+            return null;
+        }
+
+        foreach (var probability in new[] { 0.5, 0.001, 0.999 })
+        {
+            CaseVariation.CheckValue(root, fileName, input, distribution.Quantile(probability), $"{at}.{keys[0]}", errors);
+            if (errors.Count > before)
+            {
+                return null;
+            }
+        }
+
+        return new UncertainInput(input, distribution);
+    }
+
+    private static (double Number, string Unit, bool IsNumber, string Written)? Factor(JsonObject entry, string at, List<CaseError> errors)
+    {
+        if (entry["factor"] is JsonValue value && value.GetValueKind() == JsonValueKind.Number && value.GetValue<double>() is var factor && factor > 1)
+        {
+            return (factor, string.Empty, true, value.ToJsonString());
+        }
+
+        errors.Add(new CaseError($"{at}.factor", $"is required: a plain number > 1, the geometric standard deviation (2 puts about 68 % of values within median/2 to median*2); got {entry["factor"]?.ToJsonString() ?? "nothing"}"));
+        return null;
+    }
+
+    private static Distribution? Build(string name, double a, double b, string at, string[] keys, List<CaseError> errors)
+    {
+        string? problem = name switch
+        {
+            "logNormal" when !(a > 0) => $"{keys[0]} must be > 0",
+            "uniform" when !(b > a) => $"{keys[1]} must be above {keys[0]}",
+            "logUniform" when !(a > 0 && b > a) => $"{keys[0]} must be > 0 and {keys[1]} above it",
+            "normal" when !(b > 0) => $"{keys[1]} must be > 0",
+            _ => null,
+        };
+        if (problem is not null)
+        {
+            errors.Add(new CaseError(at, problem));
+            return null;
+        }
+
+        return name switch
+        {
+            "logNormal" => new LogNormalDistribution(a, b),
+            "uniform" => new UniformDistribution(a, b),
+            "logUniform" => new LogUniformDistribution(a, b),
+            _ => new NormalDistribution(a, b),
+        };
+    }
+
+    private static List<double> ReadPercentiles(JsonObject study, List<CaseError> errors)
+    {
+        if (study["percentiles"] is null)
+        {
+            return [5, 50, 95];
+        }
+
+        var values = (study["percentiles"] as JsonArray)?
+            .Select(node => node is JsonValue value && value.GetValueKind() == JsonValueKind.Number ? value.GetValue<double>() : double.NaN)
+            .ToList();
+        if (values is null || values.Count == 0 || values.Any(value => !(value > 0 && value < 100))
+            || values.Zip(values.Skip(1)).Any(pair => pair.Second <= pair.First))
+        {
+            errors.Add(new CaseError($"{At}.percentiles", $"expected ascending numbers between 0 and 100, e.g. [5, 50, 95]; got {study["percentiles"]!.ToJsonString()}"));
+            return [];
+        }
+
+        return values;
+    }
+
+    private static List<ResultMeasure> ReadResults(JsonObject study, SimulationCase baseCase, List<CaseError> errors)
+    {
+        if (study["results"] is null)
+        {
+            return [];
+        }
+
+        if (study["results"] is not JsonArray list)
+        {
+            errors.Add(new CaseError($"{At}.results", "expected an array of results, e.g. [\"lagTime\", { \"name\": \"rightReceived\", \"at\": \"1 d\" }]"));
+            return [];
+        }
+
+        return list
+            .Select((node, i) => StudyValues.Measure(node, FormattableString.Invariant($"{At}.results[{i}]"), baseCase, errors))
+            .OfType<ResultMeasure>()
+            .ToList();
+    }
+
+    /// <summary>The limit given, or by default the specific migration limit of a food-contact case.</summary>
+    private static StudyLimit? ReadLimit(JsonObject study, SimulationCase baseCase, List<CaseError> errors)
+    {
+        var at = $"{At}.limit";
+        if (study["limit"] is null)
+        {
+            return baseCase.FoodContact?.SpecificMigrationLimit is { } limit
+                ? new StudyLimit(new ResultMeasure(MeasureKind.FoodConcentration), limit, UnitTable.Get("mg/kg"), "$.foodContact.specificMigrationLimit")
+                : null;
+        }
+
+        if (StudyValues.Object(study["limit"], at, "{ \"result\": ..., \"value\": ... }", errors) is not { } entry)
+        {
+            return null;
+        }
+
+        StudyValues.Unknown(entry, at, LimitKeys, errors);
+        var result = StudyValues.Measure(entry["result"], $"{at}.result", baseCase, errors);
+        var value = result is null ? null : StudyValues.Quantity(entry["value"], $"{at}.value", result.Dimension, errors);
+        return result is not null && value is { } given ? new StudyLimit(result, given.SiValue, given.Unit, at) : null;
+    }
+}
