@@ -30,6 +30,12 @@ public static class ExitCodes
     /// <summary><c>layers verify</c>: at least one benchmark is outside its tolerance.</summary>
     public const int VerificationFailed = 5;
 
+    /// <summary>
+    /// <c>layers fit</c>: the results are written, but some estimate is not identifiable from the data or the search
+    /// stopped at its iteration limit.
+    /// </summary>
+    public const int FitNotTrustworthy = 6;
+
     /// <summary>The command line itself was wrong (unknown option, missing argument): EX_USAGE of sysexits.h.</summary>
     public const int Usage = 64;
 

@@ -17,6 +17,7 @@ public static class CliApp
         root.Subcommands.Add(CheckCommand.Create(output, error));
         root.Subcommands.Add(VerifyCommand.Create(output, error));
         root.Subcommands.Add(MergeCommand.Create(output, error));
+        root.Subcommands.Add(FitCommand.Create(output, error));
         return root;
     }
 
