@@ -37,11 +37,19 @@ public static class FitPlot
         var valueAxis = PlotFrame.Linear(AxisPosition.Left, $"{Capitalised(data.ValueName)} ({DisplayText.Unit(value)})");
         valueAxis.StartPosition = 0.32;
         valueAxis.EndPosition = 1;
+        valueAxis.MinimumPadding = 0.04;
+        valueAxis.MaximumPadding = 0.06;
         model.Axes.Add(valueAxis);
         var residualAxis = PlotFrame.Linear(AxisPosition.Left, $"Residual ({DisplayText.Unit(value)})");
         residualAxis.Key = ResidualAxisKey;
         residualAxis.StartPosition = 0;
         residualAxis.EndPosition = 0.24;
+
+        // Symmetric about zero and wide enough for every point with its bar, so that none is clipped.
+        var reach = fit.Points.Select(point => Math.Abs(point.Residual) + (point.Deviation ?? 0)).DefaultIfEmpty(0).Max();
+        var half = value.FromSi(reach > 0 ? reach * 1.15 : 1);
+        residualAxis.Minimum = -half;
+        residualAxis.Maximum = half;
         model.Axes.Add(residualAxis);
 
         var curve = new LineSeries { Title = "fitted model", Color = PlotStyle.SeriesColor(0), StrokeThickness = PlotStyle.SeriesThickness };

@@ -14,9 +14,6 @@ namespace Layers.Cli.Commands;
 /// </summary>
 internal static class FitCommand
 {
-    /// <summary>The files a fit writes, by name.</summary>
-    public static readonly string[] FileNames = ["fit.json", "fit-points.csv", "fit-curve.csv", "fitted-case.json", FitPlot.FileName];
-
     public static Command Create(TextWriter output, TextWriter error)
     {
         var caseFile = CaseArgument.Create();
