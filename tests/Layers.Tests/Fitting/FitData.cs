@@ -57,6 +57,45 @@ internal static class FitData
         return text.ToString();
     }
 
+    /// <summary>The film's true inputs: 200 um, D = 5e-9 cm2/s, K = 2, 1 g/L at the start, into 10 mL over 100 cm2.</summary>
+    public const double FilmThicknessMeters = 200e-6;
+    public const double FilmDiffusivity = 5e-13;
+    public const double FilmPartition = 2;
+    public const double FilmInitialKgPerCubicMeter = 1;
+    public const double VolumePerAreaMeters = 1e-3;
+
+    /// <summary>A film with a closed back releasing into a compartment, with D and K at the given starting values.</summary>
+    public static string FilmCase(string diffusivity, double partition) => $$"""
+        {
+          "title": "Film releasing into a limited volume",
+          "layers": [ { "name": "film", "thickness": "200 um", "diffusionCoefficient": "{{diffusivity}}", "partitionCoefficient": {{partition.ToString(CultureInfo.InvariantCulture)}}, "initialConcentration": "1 g/L" } ],
+          "left": { "kind": "closed" },
+          "right": { "kind": "compartment", "name": "simulant", "volume": "10 mL", "area": "100 cm2" },
+          "duration": "3 d"
+        }
+        """;
+
+    /// <summary>
+    /// Concentrations in the solution of limited volume (Crank, The Mathematics of Diffusion, 2nd ed., ch. 4,
+    /// eq. 4.37, from memory, through <see cref="PlaneSheetIntoLimitedVolume"/>) at the given hours, in mg/L, with
+    /// seeded normal noise of standard deviation absolute + relative * value, written with the sd column.
+    /// </summary>
+    public static string FilmCsv(IEnumerable<double> hours, double absoluteMgPerL, double relative, int seed)
+    {
+        var random = new Random(seed);
+        var text = new StringBuilder("time [h],concentration [mg/L],sd [mg/L]\n");
+        foreach (var hour in hours)
+        {
+            // kg/m3 to mg/L: 1 kg/m3 = 1e3 mg/L.
+            var exact = 1e3 / VolumePerAreaMeters * PlaneSheetIntoLimitedVolume.TransferredMassPerArea(
+                FilmDiffusivity, FilmThicknessMeters, FilmInitialKgPerCubicMeter, VolumePerAreaMeters, FilmPartition, hour * 3600);
+            var deviation = absoluteMgPerL + (relative * exact);
+            text.Append(CultureInfo.InvariantCulture, $"{hour:R},{exact + Normal.Sample(random, 0, deviation):R},{deviation:R}\n");
+        }
+
+        return text.ToString();
+    }
+
     /// <summary>Writes the case and the data and fits the given paths.</summary>
     public static FitResult Fit(TempFolder folder, string caseJson, string csv, params string[] paths)
     {
