@@ -105,24 +105,35 @@ public static class LevenbergMarquardt
     internal static Matrix<double> Jacobian(Func<double[], double[]?> evaluate, double[] parameters, double[] atParameters, double step)
     {
         var columns = new double[parameters.Length][];
-        Parallel.For(0, parameters.Length, j =>
+        try
         {
-            var h = step * Math.Max(Math.Abs(parameters[j]), 1);
-            var plus = (double[])parameters.Clone();
-            var minus = (double[])parameters.Clone();
-            plus[j] += h;
-            minus[j] -= h;
-            var up = evaluate(plus);
-            var down = evaluate(minus);
-            columns[j] = (up, down) switch
-            {
-                ({ } u, { } d) => u.Zip(d, (a, b) => (a - b) / (2 * h)).ToArray(),
-                ({ } u, null) => u.Zip(atParameters, (a, b) => (a - b) / h).ToArray(),
-                (null, { } d) => atParameters.Zip(d, (a, b) => (a - b) / h).ToArray(),
-                _ => new double[atParameters.Length],
-            };
-        });
+            Parallel.For(0, parameters.Length, j => columns[j] = Column(evaluate, parameters, atParameters, step, j));
+        }
+        catch (AggregateException exception) when (exception.InnerExceptions.Any(inner => inner is OperationCanceledException))
+        {
+            // Cancellation reaches the caller as itself, not wrapped by the parallel loop.
+            throw new OperationCanceledException("the fit was cancelled", exception);
+        }
+
         return Matrix<double>.Build.DenseOfColumnArrays(columns);
+    }
+
+    private static double[] Column(Func<double[], double[]?> evaluate, double[] parameters, double[] atParameters, double step, int j)
+    {
+        var h = step * Math.Max(Math.Abs(parameters[j]), 1);
+        var plus = (double[])parameters.Clone();
+        var minus = (double[])parameters.Clone();
+        plus[j] += h;
+        minus[j] -= h;
+        var up = evaluate(plus);
+        var down = evaluate(minus);
+        return (up, down) switch
+        {
+            ({ } u, { } d) => u.Zip(d, (a, b) => (a - b) / (2 * h)).ToArray(),
+            ({ } u, null) => u.Zip(atParameters, (a, b) => (a - b) / h).ToArray(),
+            (null, { } d) => atParameters.Zip(d, (a, b) => (a - b) / h).ToArray(),
+            _ => new double[atParameters.Length],
+        };
     }
 
     private static double SumOfSquares(double[] residuals) => residuals.Sum(r => r * r);

@@ -38,7 +38,7 @@ public static class FitJson
             json.WriteNumber("sumOfSquares", fit.SumOfSquares);
             json.WriteNumber("residualScale", fit.ResidualScale);
             json.WriteNumber("tQuantile", fit.TQuantile);
-            Number(json, "conditionNumber", fit.ConditionNumber);
+            SummaryJson.WriteNullable(json, "conditionNumber", fit.ConditionNumber);
             json.WriteNumber("iterations", fit.Iterations);
             json.WriteNumber("modelRuns", fit.ModelRuns);
             json.WriteString("stop", fit.Stop switch
@@ -64,10 +64,10 @@ public static class FitJson
             json.WriteString("unit", estimate.Parameter.Unit);
             json.WriteNumber("start", estimate.Parameter.StartValue);
             json.WriteNumber("value", estimate.Value);
-            Number(json, "log10StandardError", estimate.Log10StandardError);
-            Number(json, "relativeStandardError", estimate.RelativeStandardError);
-            Number(json, "lower", estimate.Lower);
-            Number(json, "upper", estimate.Upper);
+            SummaryJson.WriteNullable(json, "log10StandardError", estimate.Log10StandardError);
+            SummaryJson.WriteNullable(json, "relativeStandardError", estimate.RelativeStandardError);
+            SummaryJson.WriteNullable(json, "lower", estimate.Lower);
+            SummaryJson.WriteNullable(json, "upper", estimate.Upper);
             json.WriteBoolean("identifiable", estimate.Identifiable);
             json.WriteEndObject();
         }
@@ -83,14 +83,7 @@ public static class FitJson
             json.WriteStartArray();
             for (var j = 0; j < fit.Estimates.Count; j++)
             {
-                if (double.IsFinite(fit.Correlation[i, j]))
-                {
-                    json.WriteNumberValue(fit.Correlation[i, j]);
-                }
-                else
-                {
-                    json.WriteNullValue();
-                }
+                SummaryJson.WriteNullable(json, fit.Correlation[i, j]);
             }
 
             json.WriteEndArray();
@@ -125,18 +118,5 @@ public static class FitJson
         }
 
         json.WriteEndArray();
-    }
-
-    /// <summary>A number, or null where it is missing or not finite (JSON has no infinity).</summary>
-    private static void Number(Utf8JsonWriter json, string name, double? value)
-    {
-        if (value is { } number && double.IsFinite(number))
-        {
-            json.WriteNumber(name, number);
-        }
-        else
-        {
-            json.WriteNull(name);
-        }
     }
 }
