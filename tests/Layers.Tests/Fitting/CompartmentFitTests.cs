@@ -22,4 +22,24 @@ public sealed class CompartmentFitTests
         Tolerance.Relative(FitData.FilmDiffusivity * 1e4, d.Value, 0.1, "D");
         Tolerance.Relative(FitData.FilmPartition, k.Value, 0.05, "K");
     }
+
+    [Fact]
+    public void Says_that_an_input_without_effect_on_the_measurements_cannot_be_estimated()
+    {
+        using var folder = new TempFolder();
+        var csv = FitData.FilmCsv([2, 8, 24, 72], absoluteMgPerL: 0.5, relative: 0.02, seed: 8);
+
+        // The solubility in the receiving medium only feeds the sink-condition check; the concentrations do not
+        // depend on it, so its column of the Jacobian is zero (the definition of a rank-deficient Jacobian).
+        var caseJson = CaseJson.With(FitData.FilmCase("5e-9 cm2/s", 2), ("$.right.solubility", "\"1 g/L\""));
+        var fit = FitData.Fit(folder, caseJson, csv, FitData.DiffusivityPath, "$.right.solubility");
+
+        var finding = Assert.Single(fit.Findings, finding => finding.NotIdentifiable);
+        Assert.Equal(["$.right.solubility"], finding.Paths);
+        Assert.Contains("has no effect on the measured values", finding.Message);
+        Assert.False(fit.Estimates[1].Identifiable);
+        Assert.Null(fit.Estimates[1].Upper);
+        Assert.True(fit.Estimates[0].Identifiable);
+        Assert.False(fit.IsTrustworthy);
+    }
 }
