@@ -30,7 +30,10 @@ internal static class MeasuredCsv
 
     private static readonly Layout Permeation = new([Dimension.MassPerArea], "time [h],cumulative amount [ug/cm2]", "a mass per area", AllowsDeviation: false);
 
-    /// <summary>Reads the measured cumulative amounts of a permeation test (two columns, at least three times &gt; 0).</summary>
+    /// <summary>
+    /// Reads the measured cumulative amounts of a permeation test (two columns, at least three times &gt; 0), taken as
+    /// already corrected for sampling.
+    /// </summary>
     public static MeasuredPermeation? Read(string path, string written, string jsonPath, List<CaseError> errors)
     {
         var table = Read(path, written, Permeation, out var problem);

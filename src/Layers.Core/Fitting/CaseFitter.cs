@@ -106,22 +106,13 @@ public static class CaseFitter
             points.Add(new FitPoint(data.TimesSeconds[i], data.Values[i], data.Deviations?[i], values[i]));
         }
 
-        var correlation = new double[estimates.Count, estimates.Count];
-        for (var i = 0; i < estimates.Count; i++)
-        {
-            for (var j = 0; j < estimates.Count; j++)
-            {
-                correlation[i, j] = statistics.Correlation[i, j];
-            }
-        }
-
         return new FitResult
         {
             FittedCase = model.Read(solution.Parameters).Case!,
             FittedCaseJson = model.Json(solution.Parameters),
             Request = request,
             Estimates = estimates,
-            Correlation = correlation,
+            Correlation = statistics.Correlation.ToArray(),
             Findings = findings,
             Points = points,
             Curve = samples.Select(sample => (sample.TimeSeconds, model.Of(sample))).ToArray(),
