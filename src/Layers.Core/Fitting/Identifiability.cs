@@ -19,7 +19,10 @@ internal static class Identifiability
     /// <summary>Estimates correlated beyond this are not separately identifiable (common practice, no source).</summary>
     public const double CorrelationLimit = 0.99;
 
-    /// <summary>An interval wider than this factor (upper / lower) says the data hardly determine the input.</summary>
+    /// <summary>
+    /// An interval wider than this factor (upper / lower) says the data hardly determine the input (a choice of this
+    /// tool, no source: beyond a decade an estimate of D or K no longer tells a practitioner anything usable).
+    /// </summary>
     public const double WidestFactor = 10;
 
     private const double Involved = 0.1;
