@@ -30,8 +30,12 @@ public static class ExitCodes
     /// <summary><c>layers verify</c>: at least one benchmark is outside its tolerance.</summary>
     public const int VerificationFailed = 5;
 
-    /// <summary><c>layers design</c>: no value of the input in the allowed range gives the target (the message names the results found).</summary>
-    public const int TargetNotReached = 6;
+    /// <summary>
+    /// A study finished without a trustworthy answer: <c>layers design</c> found no value of the input in the allowed
+    /// range that gives the target (the message names the results found); <c>layers fit</c> wrote its results, but some
+    /// estimate is not identifiable from the data or the search stopped at its iteration limit.
+    /// </summary>
+    public const int NoTrustworthyAnswer = 6;
 
     /// <summary>The command line itself was wrong (unknown option, missing argument): EX_USAGE of sysexits.h.</summary>
     public const int Usage = 64;

@@ -19,6 +19,7 @@ public static class CliApp
         root.Subcommands.Add(MergeCommand.Create(output, error));
         root.Subcommands.Add(DesignCommand.Create(output, error));
         root.Subcommands.Add(UncertaintyCommand.Create(output, error));
+        root.Subcommands.Add(FitCommand.Create(output, error));
         return root;
     }
 

@@ -77,6 +77,6 @@ internal static class DesignCommand
             output.WriteLine(outcome.RunAtAnswer is { } run ? CautionText.For(run) : CautionText.Paragraph);
         }
 
-        return outcome.Status == StudyStatus.Done ? ExitCodes.Success : ExitCodes.TargetNotReached;
+        return outcome.Status == StudyStatus.Done ? ExitCodes.Success : ExitCodes.NoTrustworthyAnswer;
     }
 }

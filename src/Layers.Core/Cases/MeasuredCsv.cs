@@ -5,14 +5,56 @@ using Layers.Core.Units;
 namespace Layers.Core.Cases;
 
 /// <summary>
-/// Reads measured cumulative amounts per area from a CSV file: a header line naming the two columns with their
-/// units in square brackets, e.g. <c>time [h],cumulative amount [ug/cm2]</c>, then one line per measurement, numbers
-/// with a decimal point, times ascending. The amounts are taken as already corrected for sampling.
+/// Reads measurements against time from a CSV file: a header line naming the columns with their units in square
+/// brackets, e.g. <c>time [h],cumulative amount [ug/cm2]</c>, then one line per measurement, numbers with a decimal
+/// point, times ascending. A third column, when the reader allows it, holds the standard deviation of each value in
+/// a unit of the same kind, e.g. <c>time [h],concentration [mg/L],sd [mg/L]</c>.
 /// </summary>
 internal static class MeasuredCsv
 {
+    /// <summary>What a measured file must look like.</summary>
+    /// <param name="ValueDimensions">The kinds of value accepted in the second column.</param>
+    /// <param name="ValueExample">An example header for messages, e.g. "time [h],cumulative amount [ug/cm2]".</param>
+    /// <param name="ValueWhat">What the value column holds, for messages, e.g. "a mass per area".</param>
+    /// <param name="AllowsDeviation">True when a third column of standard deviations may follow.</param>
+    public sealed record Layout(IReadOnlyList<Dimension> ValueDimensions, string ValueExample, string ValueWhat, bool AllowsDeviation);
+
+    /// <summary>The measurements, in SI, with the units and column names read from the header.</summary>
+    public sealed record Table(
+        UnitDefinition TimeUnit,
+        UnitDefinition ValueUnit,
+        string ValueName,
+        IReadOnlyList<double> TimesSeconds,
+        IReadOnlyList<double> Values,
+        IReadOnlyList<double>? Deviations);
+
+    private static readonly Layout Permeation = new([Dimension.MassPerArea], "time [h],cumulative amount [ug/cm2]", "a mass per area", AllowsDeviation: false);
+
+    /// <summary>
+    /// Reads the measured cumulative amounts of a permeation test (two columns, at least three times &gt; 0), taken as
+    /// already corrected for sampling.
+    /// </summary>
     public static MeasuredPermeation? Read(string path, string written, string jsonPath, List<CaseError> errors)
     {
+        var table = Read(path, written, Permeation, out var problem);
+        if (table is not null && table.TimesSeconds.Count(t => t > 0) < 3)
+        {
+            problem = $"'{written}' holds {table.TimesSeconds.Count} data lines; at least three at times > 0 are needed to find a steady flux";
+        }
+
+        if (problem is not null)
+        {
+            errors.Add(new CaseError(jsonPath, problem));
+            return null;
+        }
+
+        return new MeasuredPermeation(written, table!.TimesSeconds, table.Values);
+    }
+
+    /// <summary>Reads a measured file; on failure returns null and says why, naming the file and the line.</summary>
+    public static Table? Read(string path, string written, Layout layout, out string? problem)
+    {
+        problem = null;
         string[] lines;
         try
         {
@@ -20,62 +62,71 @@ internal static class MeasuredCsv
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {
-            errors.Add(new CaseError(jsonPath, $"cannot read the measured data '{written}': {exception.Message}"));
+            problem = $"cannot read the measured data '{written}': {exception.Message}";
             return null;
         }
 
         var rows = lines.Select((text, index) => (text: text.Trim(), number: index + 1)).Where(line => line.text.Length > 0).ToArray();
         if (rows.Length == 0)
         {
-            errors.Add(new CaseError(jsonPath, $"'{written}' is empty; expected a header such as 'time [h],cumulative amount [ug/cm2]' and data lines"));
+            problem = $"'{written}' is empty; expected a header such as '{layout.ValueExample}' and data lines";
             return null;
         }
 
         var header = rows[0].text.Split(',');
-        var time = header.Length == 2 ? ColumnUnit(header[0], Dimension.Time) : null;
-        var amount = header.Length == 2 ? ColumnUnit(header[1], Dimension.MassPerArea) : null;
-        if (time is null || amount is null)
+        var columns = header.Length;
+        var time = ColumnUnit(header[0], [Dimension.Time]);
+        var value = columns >= 2 ? ColumnUnit(header[1], layout.ValueDimensions) : null;
+        var deviation = columns == 3 && value is not null ? ColumnUnit(header[2], [value.Dimension]) : null;
+        var shapeOk = columns == 2 || (columns == 3 && layout.AllowsDeviation && deviation is not null);
+        if (time is null || value is null || !shapeOk)
         {
-            errors.Add(new CaseError(
-                jsonPath,
-                $"'{written}' line {rows[0].number}: expected two columns with units in brackets, a time and a mass per area, e.g. 'time [h],cumulative amount [ug/cm2]'; got '{rows[0].text}'"));
+            var count = layout.AllowsDeviation ? "two or three columns" : "two columns";
+            var third = layout.AllowsDeviation ? ", and optionally a standard deviation in a unit of the same kind" : string.Empty;
+            problem = $"'{written}' line {rows[0].number}: expected {count} with units in brackets, a time and {layout.ValueWhat}{third}, e.g. '{layout.ValueExample}'; got '{rows[0].text}'";
             return null;
         }
 
         var times = new List<double>();
-        var amounts = new List<double>();
+        var values = new List<double>();
+        var deviations = deviation is null ? null : new List<double>();
         foreach (var (text, number) in rows.Skip(1))
         {
             var cells = text.Split(',');
-            if (cells.Length != 2
-                || !double.TryParse(cells[0].Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var t)
-                || !double.TryParse(cells[1].Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var q)
-                || !double.IsFinite(t) || !double.IsFinite(q))
+            var numbers = cells.Length == columns ? cells.Select(Number).ToArray() : [];
+            if (numbers.Length != columns || numbers.Any(n => n is null))
             {
-                errors.Add(new CaseError(jsonPath, $"'{written}' line {number}: expected two numbers separated by a comma, e.g. '4,12.5'; got '{text}'"));
+                var expected = columns == 2 ? "two numbers separated by a comma, e.g. '4,12.5'" : "three numbers separated by commas, e.g. '4,12.5,0.8'";
+                problem = $"'{written}' line {number}: expected {expected}; got '{text}'";
                 return null;
             }
 
+            var t = numbers[0]!.Value;
             if (t < 0 || (times.Count > 0 && time.ToSi(t) <= times[^1]))
             {
-                errors.Add(new CaseError(jsonPath, $"'{written}' line {number}: times must be >= 0 and ascending; got '{cells[0].Trim()}'"));
+                problem = $"'{written}' line {number}: times must be >= 0 and ascending; got '{cells[0].Trim()}'";
+                return null;
+            }
+
+            if (deviations is not null && !(numbers[2] > 0))
+            {
+                problem = $"'{written}' line {number}: the standard deviation must be > 0; got '{cells[2].Trim()}'";
                 return null;
             }
 
             times.Add(time.ToSi(t));
-            amounts.Add(amount.ToSi(q));
+            values.Add(value.ToSi(numbers[1]!.Value));
+            deviations?.Add(deviation!.ToSi(numbers[2]!.Value) - deviation.OffsetToSi);
         }
 
-        if (times.Count(t => t > 0) < 3)
-        {
-            errors.Add(new CaseError(jsonPath, $"'{written}' holds {times.Count} data lines; at least three at times > 0 are needed to find a steady flux"));
-            return null;
-        }
-
-        return new MeasuredPermeation(written, times, amounts);
+        var name = header[1][..header[1].IndexOf('[', StringComparison.Ordinal)].Trim();
+        return new Table(time, value, name, times, values, deviations);
     }
 
-    private static UnitDefinition? ColumnUnit(string column, Dimension dimension)
+    private static double? Number(string cell)
+        => double.TryParse(cell.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var number) && double.IsFinite(number) ? number : null;
+
+    private static UnitDefinition? ColumnUnit(string column, IReadOnlyList<Dimension> dimensions)
     {
         var open = column.IndexOf('[', StringComparison.Ordinal);
         var close = column.IndexOf(']', StringComparison.Ordinal);
@@ -84,6 +135,6 @@ internal static class MeasuredCsv
             return null;
         }
 
-        return UnitTable.TryFind(column[(open + 1)..close].Trim(), out var unit) && unit.Dimension == dimension ? unit : null;
+        return UnitTable.TryFind(column[(open + 1)..close].Trim(), out var unit) && dimensions.Contains(unit.Dimension) ? unit : null;
     }
 }

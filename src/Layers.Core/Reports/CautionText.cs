@@ -14,6 +14,11 @@ public static class CautionText
         "Permeation, delivery and skin figures here are research estimates, not dosing advice; clinical or " +
         "regulatory use needs validated studies and review by qualified people.";
 
+    /// <summary>Added to the results of a fit.</summary>
+    public const string FittedInputs =
+        "Estimated inputs hold for this model and these measurements only: check the residuals and the findings on " +
+        "identifiability before using them elsewhere.";
+
     /// <summary>The caution for one result: the general paragraph, plus the drug-delivery one where it applies.</summary>
     public static string For(Results.SimulationResult result)
         => result.DiffusionCell is not null || result.Case.Stack.Layers.Any(layer => layer.Estimate is not null)

@@ -18,12 +18,7 @@ public static class Simulator
     /// <summary>Solves a validated case.</summary>
     public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
     {
-        var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
-        var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
-        var stages = StageSystem.For(simulation, grid);
-        var final = FinalStateTarget.ForStages(simulation, system, stages);
-        var sampling = new SamplingEvents(simulation, system);
-        var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
+        var (grid, system, initial, final, sampling, recorder, stages) = Assemble(simulation);
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
         var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(simulation, system, stages, initial);
@@ -55,6 +50,33 @@ public static class Simulator
                 ? null
                 : FoodContactAssessment.Assess(simulation, grid, stages, initial, watcher, cancellation),
         };
+    }
+
+    /// <summary>
+    /// Solves a case up to its duration and no further, and returns only the integral quantities at its output
+    /// times: the lean form of <see cref="Run"/> for callers that solve one case many times (fitting), with no
+    /// search for the times to equilibrium and no food-contact assessment.
+    /// </summary>
+    public static (IReadOnlyList<StateSample> Samples, SolverStatistics Statistics) RunTimeSeries(
+        SimulationCase simulation,
+        CancellationToken cancellation = default)
+    {
+        var (grid, _, initial, _, sampling, recorder, stages) = Assemble(simulation);
+        var statistics = StagedIntegration.Run(
+            stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
+            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Solver, recorder, sampling, cancellation).Statistics;
+        return (recorder.Samples, statistics);
+    }
+
+    private static (Grid Grid, DiffusionSystem System, double[] Initial, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(SimulationCase simulation)
+    {
+        var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
+        var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
+        var stages = StageSystem.For(simulation, grid);
+        var final = FinalStateTarget.ForStages(simulation, system, stages);
+        var sampling = new SamplingEvents(simulation, system);
+        var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
+        return (grid, system, initial, final, sampling, recorder, stages);
     }
 
     /// <summary>

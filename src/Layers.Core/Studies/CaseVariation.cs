@@ -39,6 +39,19 @@ public static class CaseVariation
     public static CaseReadResult Read(
         JsonObject document, string fileName, IEnumerable<(StudyInput Input, double Number)> values, IEnumerable<double>? extraOutputSeconds = null)
     {
+        var read = CaseReader.ReadText(Apply(document, values).ToJsonString(), fileName);
+        return read.Case is { } simulation && extraOutputSeconds is not null
+            ? read with { Case = WithOutputs(simulation, extraOutputSeconds) }
+            : read;
+    }
+
+    /// <summary>A copy of the case document without its study sections and with the given values written in.</summary>
+    /// <param name="document">The whole case document (not changed).</param>
+    /// <param name="values">Each input with the number to write, in the input's unit.</param>
+    public static JsonObject Apply(JsonObject document, IEnumerable<(StudyInput Input, double Number)> values)
+    {
+        ArgumentNullException.ThrowIfNull(document);
+        ArgumentNullException.ThrowIfNull(values);
         var copy = document.DeepClone().AsObject();
         foreach (var key in StudyKeys)
         {
@@ -50,10 +63,7 @@ public static class CaseVariation
             JsonPathSteps.Replace(copy, input.Steps, input.Node(number));
         }
 
-        var read = CaseReader.ReadText(copy.ToJsonString(), fileName);
-        return read.Case is { } simulation && extraOutputSeconds is not null
-            ? read with { Case = WithOutputs(simulation, extraOutputSeconds) }
-            : read;
+        return copy;
     }
 
     /// <summary>The case with more output times (those within its duration).</summary>

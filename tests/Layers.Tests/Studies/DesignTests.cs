@@ -93,7 +93,7 @@ public sealed class DesignTests
 
         var outcome = CliRun.Invoke("design", file, "--out", temp.Combine("out"), "--plot-width", "400", "--plot-height", "300");
 
-        Assert.Equal(ExitCodes.TargetNotReached, outcome.ExitCode);
+        Assert.Equal(ExitCodes.NoTrustworthyAnswer, outcome.ExitCode);
         Assert.Contains("no value of layers[0].thickness from 5 um to 20 um gives lagTime = 10 h", outcome.Error, StringComparison.Ordinal);
         var json = File.ReadAllText(temp.Combine("out", "reach.design", "design.json"));
         Assert.Contains("\"status\": \"notReached\"", json, StringComparison.Ordinal);

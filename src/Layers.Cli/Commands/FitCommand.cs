@@ -1,0 +1,168 @@
+using System.CommandLine;
+using System.Text;
+using Layers.Core.Domain;
+using Layers.Core.Fitting;
+using Layers.Core.Reports;
+using Layers.Plotting;
+
+namespace Layers.Cli.Commands;
+
+/// <summary>
+/// <c>layers fit CASE --data FILE --estimate PATH... [--face left|right] [--out DIR] [--quiet | --json] [--no-plots]</c>:
+/// estimates inputs of a case from measurements and writes DIR/&lt;case name&gt;-fit/ (fit.json, fit-points.csv,
+/// fit-curve.csv, fitted-case.json, fit.png), replacing an earlier folder only once everything is written.
+/// </summary>
+internal static class FitCommand
+{
+    public static Command Create(TextWriter output, TextWriter error)
+    {
+        var caseFile = CaseArgument.Create();
+        var data = new Option<string>("--data", "-d")
+        {
+            Description = "CSV of measurements: 'time [h],concentration [mg/L]' or 'time [h],cumulative amount [ug/cm2]', optionally ',sd [unit]'.",
+            Required = true,
+        };
+        var estimate = new Option<string[]>("--estimate", "-e")
+        {
+            Description = "JSON path of an input to estimate, e.g. '$.layers[0].diffusionCoefficient'; repeat for more. The case's value is the start.",
+            Required = true,
+            Arity = ArgumentArity.OneOrMore,
+        };
+        var face = new Option<string>("--face")
+        {
+            Description = "The face whose medium was measured: left or right.",
+            DefaultValueFactory = _ => "right",
+        };
+        face.AcceptOnlyFromAmong("left", "right");
+        var outputRoot = new Option<string>("--out", "-o")
+        {
+            Description = "Folder that receives the sub-folder <case name>-fit.",
+            DefaultValueFactory = _ => "results",
+        };
+        var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
+        var json = new Option<bool>("--json") { Description = "Print fit.json to stdout instead of the tables, for scripts." };
+        var noPlots = new Option<bool>("--no-plots") { Description = "Skip fit.png." };
+        var command = new Command("fit", "Estimate inputs of a case (D, K, ...) from measured concentrations or cumulative amounts by weighted least squares.");
+        command.Arguments.Add(caseFile);
+        foreach (var option in new Option[] { data, estimate, face, outputRoot, quiet, json, noPlots })
+        {
+            command.Options.Add(option);
+        }
+
+        command.SetAction((parseResult, cancellation) =>
+        {
+            var settings = new Settings(
+                parseResult.GetValue(caseFile)!,
+                parseResult.GetValue(data)!,
+                parseResult.GetValue(estimate)!,
+                parseResult.GetValue(face) == "left" ? Side.Left : Side.Right,
+                parseResult.GetValue(outputRoot)!,
+                parseResult.GetValue(quiet),
+                parseResult.GetValue(json),
+                !parseResult.GetValue(noPlots));
+            using var interrupt = new InterruptScope(cancellation);
+            return Task.FromResult(Execute(settings, output, error, interrupt.Token));
+        });
+        return command;
+    }
+
+    private static int Execute(Settings settings, TextWriter output, TextWriter error, CancellationToken cancellation)
+    {
+        if (MeasuredSeries.Read(settings.DataPath, out var problem) is not { } measured)
+        {
+            error.WriteLine(problem);
+            return ExitCodes.InvalidInput;
+        }
+
+        var errors = new List<string>();
+        var prepared = CaseFitter.Prepare(new FitRequest(settings.CasePath, measured, settings.Face, settings.Paths), errors);
+        if (prepared is null)
+        {
+            errors.ForEach(error.WriteLine);
+            return ExitCodes.InvalidInput;
+        }
+
+        FitResult? fit;
+        try
+        {
+            fit = CaseFitter.Fit(prepared, cancellation);
+        }
+        catch (OperationCanceledException)
+        {
+            error.WriteLine($"{settings.CasePath}: fit cancelled; no results were written.");
+            return ExitCodes.Cancelled;
+        }
+
+        if (fit is null)
+        {
+            error.WriteLine($"{settings.CasePath}: the solver cannot solve the case at its starting values; no results were written.");
+            return ExitCodes.SolverFailed;
+        }
+
+        var files = Files(fit, settings.Plots);
+        string folder;
+        try
+        {
+            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(settings.CasePath) + "-fit", files);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            error.WriteLine($"{settings.CasePath}: cannot write results under '{settings.OutputRoot}': {exception.Message}");
+            return ExitCodes.OutputFailed;
+        }
+
+        if (settings.Json)
+        {
+            output.Write(Encoding.UTF8.GetString(files["fit.json"]));
+        }
+        else if (!settings.Quiet)
+        {
+            Print(fit, folder, output);
+        }
+
+        return fit.IsTrustworthy ? ExitCodes.Success : ExitCodes.NoTrustworthyAnswer;
+    }
+
+    private static Dictionary<string, byte[]> Files(FitResult fit, bool plots)
+    {
+        var files = new Dictionary<string, byte[]>
+        {
+            ["fit.json"] = Encoding.UTF8.GetBytes(FitJson.Write(fit)),
+            ["fit-points.csv"] = Encoding.UTF8.GetBytes(FitTables.PointsCsv(fit)),
+            ["fit-curve.csv"] = Encoding.UTF8.GetBytes(FitTables.CurveCsv(fit)),
+            ["fitted-case.json"] = Encoding.UTF8.GetBytes(fit.FittedCaseJson + "\n"),
+        };
+        if (plots)
+        {
+            files[FitPlot.FileName] = FitPlot.Render(fit, new PlotOptions());
+        }
+
+        return files;
+    }
+
+    private static void Print(FitResult fit, string folder, TextWriter output)
+    {
+        output.WriteLine($"{fit.FittedCase.Title} ({fit.Request.CasePath}) fitted to {fit.Request.Data.FileName}");
+        ConsoleTables.Write(output, FitTables.Estimates(fit), FitTables.Correlation(fit), FitTables.Quality(fit));
+        foreach (var finding in fit.Findings)
+        {
+            output.WriteLine((finding.NotIdentifiable ? "not identifiable: " : "note: ") + finding.Message + (finding.Combination is { } combination
+                ? FormattableString.Invariant($"; {combination.Text} = {combination.Value:G4} {combination.Unit} ({fit.Request.Confidence * 100:0.#} % interval {combination.Lower:G4} to {combination.Upper:G4})")
+                : string.Empty));
+        }
+
+        output.WriteLine($"results: {folder}");
+        output.WriteLine();
+        output.WriteLine(CautionText.Paragraph + " " + CautionText.FittedInputs);
+    }
+
+    private sealed record Settings(
+        string CasePath,
+        string DataPath,
+        IReadOnlyList<string> Paths,
+        Side Face,
+        string OutputRoot,
+        bool Quiet,
+        bool Json,
+        bool Plots);
+}

@@ -1,0 +1,56 @@
+using Layers.Core.Cases;
+using Layers.Core.Units;
+
+namespace Layers.Core.Fitting;
+
+/// <summary>What a measured file holds, from the kind of unit of its value column.</summary>
+public enum MeasuredQuantity
+{
+    /// <summary>The concentration in the compartment on the chosen face (a mass per volume, e.g. mg/L).</summary>
+    Concentration,
+
+    /// <summary>The cumulative amount per area received by the medium on the chosen face (e.g. ug/cm2).</summary>
+    AmountPerArea,
+}
+
+/// <summary>Measured values against time, in SI, as read from the user's CSV file.</summary>
+/// <param name="FileName">The file as the user named it.</param>
+/// <param name="Quantity">What the values are.</param>
+/// <param name="TimeUnit">The unit of the time column, for display.</param>
+/// <param name="ValueUnit">The unit of the value column, for display.</param>
+/// <param name="ValueName">The name of the value column, e.g. "cumulative amount".</param>
+/// <param name="TimesSeconds">Measurement times, s, ascending.</param>
+/// <param name="Values">Measured values, SI (kg/m3 or kg/m2).</param>
+/// <param name="Deviations">Standard deviations of the values, SI, or null when the file gives none.</param>
+public sealed record MeasuredSeries(
+    string FileName,
+    MeasuredQuantity Quantity,
+    UnitDefinition TimeUnit,
+    UnitDefinition ValueUnit,
+    string ValueName,
+    IReadOnlyList<double> TimesSeconds,
+    IReadOnlyList<double> Values,
+    IReadOnlyList<double>? Deviations)
+{
+    private static readonly MeasuredCsv.Layout Layout = new(
+        [Dimension.MassConcentration, Dimension.MassPerArea],
+        "time [h],concentration [mg/L],sd [mg/L]",
+        "a concentration or a cumulative amount per area",
+        AllowsDeviation: true);
+
+    /// <summary>
+    /// Reads a measured file: <c>time [unit],value [unit]</c> and optionally <c>,sd [unit]</c>; a value unit of
+    /// concentration means compartment concentrations, one of mass per area cumulative amounts per area.
+    /// </summary>
+    /// <returns>The series, or null with the problem (file, line, what was expected) in <paramref name="problem"/>.</returns>
+    public static MeasuredSeries? Read(string path, out string? problem)
+    {
+        if (MeasuredCsv.Read(path, path, Layout, out problem) is not { } table)
+        {
+            return null;
+        }
+
+        var quantity = table.ValueUnit.Dimension == Dimension.MassPerArea ? MeasuredQuantity.AmountPerArea : MeasuredQuantity.Concentration;
+        return new MeasuredSeries(path, quantity, table.TimeUnit, table.ValueUnit, table.ValueName, table.TimesSeconds, table.Values, table.Deviations);
+    }
+}
