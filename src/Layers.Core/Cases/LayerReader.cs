@@ -100,17 +100,6 @@ internal static class LayerReader
             return null;
         }
 
-        if (context.Concentration(fields, "solubility", density) is not { } solubility)
-        {
-            return double.NaN;
-        }
-
-        if (!(solubility > 0))
-        {
-            fields.Error("solubility", $"must be > 0 (a solubility of zero would hold nothing dissolved); got '{fields.Written("solubility")}'");
-            return double.NaN;
-        }
-
-        return solubility;
+        return context.Concentration(fields, "solubility", density, strictlyPositive: true) ?? double.NaN;
     }
 }
