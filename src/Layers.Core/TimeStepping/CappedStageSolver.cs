@@ -101,16 +101,10 @@ internal sealed class CappedStageSolver : IStageSolver
     private void FactorAndSolve(ReadOnlySpan<double> rightHandSide, Span<double> content)
     {
         var capacity = _system.Capacity;
-        var conductance = _system.Conductance;
-        var c = _coefficient;
         var last = capacity.Length - 1;
         for (var n = 0; n <= last; n++)
         {
-            var toLeft = n > 0 ? conductance[n - 1] : _system.LeftBath.Conductance;
-            var toRight = n < last ? conductance[n] : _system.RightBath.Conductance;
-            var lower = n > 0 ? -c * conductance[n - 1] : 0;
-            var upper = n < last ? -c * conductance[n] : 0;
-            var diagonal = c * (toLeft + toRight);
+            var (lower, diagonal, upper) = ImplicitMatrix.Row(_system, n, _coefficient);
             var fixedPart = 0.0;
             if (_saturated[n])
             {

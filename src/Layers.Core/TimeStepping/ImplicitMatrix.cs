@@ -22,16 +22,23 @@ internal sealed class ImplicitMatrix
     public void Factor(double coefficientSeconds)
     {
         var capacity = _system.Capacity;
-        var conductance = _system.Conductance;
-        var last = capacity.Length - 1;
-        for (var n = 0; n <= last; n++)
+        for (var n = 0; n < capacity.Length; n++)
         {
-            var toLeft = n > 0 ? conductance[n - 1] : _system.LeftBath.Conductance;
-            var toRight = n < last ? conductance[n] : _system.RightBath.Conductance;
-            var lower = n > 0 ? -coefficientSeconds * conductance[n - 1] : 0;
-            var upper = n < last ? -coefficientSeconds * conductance[n] : 0;
-            _factors.SetRow(n, lower, capacity[n] + (coefficientSeconds * (toLeft + toRight)), upper);
+            var (lower, coupling, upper) = Row(_system, n, coefficientSeconds);
+            _factors.SetRow(n, lower, capacity[n] + coupling, upper);
         }
+    }
+
+    /// <summary>Row n of c A: the entries left of and right of the diagonal, and the diagonal (without storage).</summary>
+    public static (double Lower, double Diagonal, double Upper) Row(DiffusionSystem system, int n, double coefficientSeconds)
+    {
+        var conductance = system.Conductance;
+        var last = system.NodeCount - 1;
+        var toLeft = n > 0 ? conductance[n - 1] : system.LeftBath.Conductance;
+        var toRight = n < last ? conductance[n] : system.RightBath.Conductance;
+        var lower = n > 0 ? -coefficientSeconds * conductance[n - 1] : 0;
+        var upper = n < last ? -coefficientSeconds * conductance[n] : 0;
+        return (lower, coefficientSeconds * (toLeft + toRight), upper);
     }
 
     /// <summary>Solves (Cap + c A) x = b with the last factorisation; b and x may be the same span.</summary>
