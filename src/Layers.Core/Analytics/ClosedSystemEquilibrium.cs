@@ -8,6 +8,9 @@ namespace Layers.Core.Analytics;
 /// compartment; then c_eq = K u_eq in every medium. This is the N-medium form of the partition equilibrium
 /// c_A = K c_B with conservation of mass (Crank, The Mathematics of Diffusion, 2nd ed., ch. 4, eq. 4.37 (from memory), the limit
 /// t -> infinity of the limited-volume problem, generalised to many media).
+/// A layer with a solubility caps u at C_s / K: when the mass exceeds what the system holds dissolved at the lowest
+/// cap, u settles at that cap and the excess stays undissolved in the layer (or layers) with the lowest cap, whose
+/// solid fixes the chemical potential everywhere.
 /// </summary>
 public sealed record ClosedSystemEquilibrium(double ContinuousVariable)
 {
@@ -31,8 +34,15 @@ public sealed record ClosedSystemEquilibrium(double ContinuousVariable)
             }
         }
 
-        return new ClosedSystemEquilibrium(mass / capacity);
+        var lowestCap = simulation.Stack.Layers.Min(layer => layer.SaturationContinuousVariable);
+        return new ClosedSystemEquilibrium(Math.Min(mass / capacity, lowestCap))
+        {
+            UndissolvedPerArea = Math.Max(0, mass - (capacity * lowestCap)),
+        };
     }
+
+    /// <summary>Mass per area left undissolved at equilibrium, kg/m2 (zero unless the lowest solubility cap is reached).</summary>
+    public double UndissolvedPerArea { get; init; }
 
     /// <summary>Equilibrium concentration in a medium with partition coefficient K, kg/m3.</summary>
     public double ConcentrationIn(double partitionCoefficient) => partitionCoefficient * ContinuousVariable;

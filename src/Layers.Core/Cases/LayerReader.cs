@@ -8,7 +8,7 @@ namespace Layers.Core.Cases;
 internal static class LayerReader
 {
     private static readonly string[] Keys =
-        ["name", "thickness", "diffusionCoefficient", "partitionCoefficient", "initialConcentration", "density", "pottsGuy"];
+        ["name", "thickness", "diffusionCoefficient", "partitionCoefficient", "initialConcentration", "solubility", "density", "pottsGuy"];
 
     public static List<Layer> Read(JsonFields root, ReadContext context)
     {
@@ -45,9 +45,20 @@ internal static class LayerReader
                 fields.Error("name", $"'{name}' is already used by {root.Path}.layers[{names[name.Trim()]}]");
             }
 
-            if (ReadLayer(fields, context, name) is { } layer)
+            if (ReadLayer(fields, context, name) is not { } layer)
             {
-                layers.Add(layer);
+                continue;
+            }
+
+            var solubility = Solubility(fields, context, layer.DensityKgPerCubicMeter);
+            if (solubility is not null && root.Has("foodContact"))
+            {
+                // The food-contact assessment scales results with the initial concentration, which a cap would break.
+                fields.Error("solubility", "cannot be combined with $.foodContact (its figures assume diffusion that is linear in the concentration)");
+            }
+            else if (solubility is not double.NaN)
+            {
+                layers.Add(layer with { SolubilityKgPerCubicMeter = solubility });
             }
         }
 
@@ -79,5 +90,16 @@ internal static class LayerReader
         }
 
         return new Layer(name, thickness.Value, diffusivity.Value, k.Value, concentration.Value, density);
+    }
+
+    /// <summary>The optional solubility: null when absent, NaN when given but unusable (the error is recorded).</summary>
+    private static double? Solubility(JsonFields fields, ReadContext context, double? density)
+    {
+        if (!fields.Has("solubility"))
+        {
+            return null;
+        }
+
+        return context.Concentration(fields, "solubility", density, strictlyPositive: true) ?? double.NaN;
     }
 }

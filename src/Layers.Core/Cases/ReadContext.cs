@@ -73,18 +73,18 @@ internal sealed class ReadContext
 
     /// <summary>
     /// Reads a concentration (default 0) as mass per volume; a mass fraction is multiplied by the density of its
-    /// medium. Negative values are rejected.
+    /// medium. Negative values are rejected, and zero too when <paramref name="strictlyPositive"/> is set.
     /// </summary>
-    public double? Concentration(JsonFields fields, string key, double? densityKgPerCubicMeter)
+    public double? Concentration(JsonFields fields, string key, double? densityKgPerCubicMeter, bool strictlyPositive = false)
     {
         if (fields.Quantity(key, ConcentrationDimensions) is not { } quantity)
         {
             return fields.Has(key) ? null : 0;
         }
 
-        if (!(quantity.SiValue >= 0))
+        if (strictlyPositive ? !(quantity.SiValue > 0) : !(quantity.SiValue >= 0))
         {
-            fields.Error(key, $"must be >= 0; got '{fields.Written(key)}'");
+            fields.Error(key, $"must be {(strictlyPositive ? ">" : ">=")} 0; got '{fields.Written(key)}'");
             return null;
         }
 

@@ -11,6 +11,12 @@ namespace Layers.Core.Discretization;
 /// A is symmetric tridiagonal with zero row sums apart from bath couplings, which conserves mass exactly.
 /// A bath adds G_bath to the diagonal of its end node and G_bath u_bath to s. Storage of a cell is h K, of a
 /// compartment (V/A) K.
+/// <para>
+/// The state is the content of each node divided by its storage, w = (total mass per volume) / K, so Cap w is the
+/// mass whatever the node holds. Where the layer has no solubility, or holds less than it, w is the dissolved
+/// u = c / K. A layer with a solubility C_s caps the dissolved part, u = min(w, C_s / K), and the rest is undissolved
+/// (<see cref="Saturation"/>); fluxes are driven by u, storage by w.
+/// </para>
 /// </remarks>
 public sealed class DiffusionSystem
 {
@@ -20,8 +26,10 @@ public sealed class DiffusionSystem
         double[] conductance,
         BathCoupling left,
         BathCoupling right,
-        int firstCellNode)
+        int firstCellNode,
+        double[]? saturation = null)
     {
+        Saturation = saturation;
         Grid = grid;
         Capacity = capacity;
         Conductance = conductance;
@@ -47,6 +55,12 @@ public sealed class DiffusionSystem
 
     /// <summary>Index of the node of the first cell (1 when a compartment sits on the left, else 0).</summary>
     public int FirstCellNode { get; }
+
+    /// <summary>
+    /// u = C_s / K at which each node saturates (+infinity where there is no solubility), or null when no layer has a
+    /// solubility: then state and dissolved u are the same everywhere and the linear stepper applies.
+    /// </summary>
+    public double[]? Saturation { get; }
 
     /// <summary>Number of unknowns.</summary>
     public int NodeCount => Capacity.Length;
@@ -83,6 +97,9 @@ public sealed class DiffusionSystem
         rate[0] += LeftBath.InflowRate(u[0]);
         rate[last] += RightBath.InflowRate(u[last]);
     }
+
+    /// <summary>The dissolved u = min(w, saturation) of a node whose state is w.</summary>
+    public double Dissolved(int node, double state) => Saturation is { } cap ? Math.Min(state, cap[node]) : state;
 
     /// <summary>Mass per unit area held by all nodes for a state u, kg/m2.</summary>
     public double TotalMass(ReadOnlySpan<double> u)

@@ -16,6 +16,9 @@ public static class DiffusionSystemBuilder
         var capacity = new double[nodeCount];
         var initial = new double[nodeCount];
         var halfResistance = new double[grid.CellCount];
+        var dispersed = stack.Layers.Any(layer => layer.SolubilityKgPerCubicMeter is not null);
+        var saturation = dispersed ? new double[nodeCount] : null;
+        saturation?.AsSpan().Fill(double.PositiveInfinity);
 
         for (var cell = 0; cell < grid.CellCount; cell++)
         {
@@ -23,6 +26,11 @@ public static class DiffusionSystemBuilder
             var width = grid.WidthsMeters[cell];
             capacity[first + cell] = width * layer.PartitionCoefficient;
             initial[first + cell] = layer.InitialContinuousVariable;
+            if (saturation is not null)
+            {
+                saturation[first + cell] = layer.SaturationContinuousVariable;
+            }
+
             halfResistance[cell] = SeriesResistance.HalfCell(
                 width, layer.DiffusivitySquareMetersPerSecond, layer.PartitionCoefficient);
         }
@@ -50,7 +58,7 @@ public static class DiffusionSystemBuilder
 
         var leftBath = Coupling(simulation.Left, halfResistance[0], capacity[0]);
         var rightBath = Coupling(simulation.Right, halfResistance[^1], capacity[^1]);
-        return (new DiffusionSystem(grid, capacity, conductance, leftBath, rightBath, first), initial);
+        return (new DiffusionSystem(grid, capacity, conductance, leftBath, rightBath, first, saturation), initial);
     }
 
     private static double FilmResistance(CompartmentFace compartment)

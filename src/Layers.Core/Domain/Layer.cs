@@ -29,6 +29,23 @@ public sealed record Layer(
     /// <summary>Initial mass of substance per unit area of the stack, kg/m2.</summary>
     public double InitialMassPerArea => InitialConcentrationKgPerCubicMeter * ThicknessMeters;
 
+    /// <summary>
+    /// Solubility of the substance in this layer, kg/m3, or null for none. The dissolved concentration is capped at it;
+    /// <see cref="InitialConcentrationKgPerCubicMeter"/> is then the total loading (dissolved plus undissolved) and may
+    /// exceed it, the excess dissolving instantly as the dissolved concentration falls (a dispersed-drug matrix).
+    /// </summary>
+    public double? SolubilityKgPerCubicMeter { get; init; }
+
+    /// <summary>u = c / K at which the layer saturates, kg/m3; +infinity without a solubility.</summary>
+    public double SaturationContinuousVariable => SolubilityKgPerCubicMeter is { } solubility
+        ? solubility / PartitionCoefficient
+        : double.PositiveInfinity;
+
+    /// <summary>Initial undissolved mass per unit area, kg/m2 (zero without a solubility or below it).</summary>
+    public double InitialUndissolvedPerArea => SolubilityKgPerCubicMeter is { } solubility
+        ? Math.Max(0, InitialConcentrationKgPerCubicMeter - solubility) * ThicknessMeters
+        : 0;
+
     /// <summary>How D and K were estimated (Potts-Guy), or null when the case gave them.</summary>
     public Permeation.SkinEstimate? Estimate { get; init; }
 

@@ -6,7 +6,7 @@ namespace Layers.Core.Permeation;
 /// <summary>
 /// Delivered amount per whole day of the duration (from the cumulative amount received at the day boundaries, which
 /// are output times when the case asks for permeation metrics) and the span over which the mean delivery rate
-/// between consecutive output times stays at or above a target.
+/// between consecutive output times stays at or above a target, with the moment it falls below interpolated.
 /// </summary>
 public static class Delivery
 {
@@ -36,7 +36,7 @@ public static class Delivery
         {
             for (var i = 1; i < timesSeconds.Count; i++)
             {
-                var rate = (cumulativePerArea[i] - cumulativePerArea[i - 1]) / (timesSeconds[i] - timesSeconds[i - 1]);
+                var rate = MeanRate(timesSeconds, cumulativePerArea, i);
                 if (rate >= target)
                 {
                     reached ??= timesSeconds[i];
@@ -44,12 +44,31 @@ public static class Delivery
                 }
                 else if (reached is not null)
                 {
+                    heldUntil = FallsBelow(timesSeconds, cumulativePerArea, i, target);
                     break;
                 }
             }
         }
 
         return new DeliverySummary(perDay, test.DeliveryAreaSquareMeters, test.TargetFluxKgPerSquareMeterSecond, reached, heldUntil);
+    }
+
+    /// <summary>Mean rate over the interval that ends at output i, kg/(m2 s).</summary>
+    private static double MeanRate(IReadOnlyList<double> times, IReadOnlyList<double> cumulative, int i)
+        => (cumulative[i] - cumulative[i - 1]) / (times[i] - times[i - 1]);
+
+    /// <summary>
+    /// When the rate fell to the target, between interval i - 1 (at or above it; i &gt;= 2) and interval i (below): the interval
+    /// means stand for the rate at the interval mid-times and are joined by a straight line. A depleting matrix loses
+    /// rate steadily, so this is much finer than the output spacing, which in a long run is a tenth of the time.
+    /// </summary>
+    private static double FallsBelow(IReadOnlyList<double> times, IReadOnlyList<double> cumulative, int i, double target)
+    {
+        var above = MeanRate(times, cumulative, i - 1);
+        var below = MeanRate(times, cumulative, i);
+        var middleAbove = (times[i - 2] + times[i - 1]) / 2;
+        var middleBelow = (times[i - 1] + times[i]) / 2;
+        return middleAbove + ((above - target) / (above - below) * (middleBelow - middleAbove));
     }
 
     private static int IndexOf(IReadOnlyList<double> times, double time)

@@ -77,6 +77,15 @@ public static class ResultTables
             }
         }
 
+        foreach (var layer in result.DispersedLayers)
+        {
+            Add($"{layer.Layer}: undissolved at the start / at the end",
+                $"{format.MassPerArea(layer.InitialUndissolvedPerArea)} / {format.MassPerArea(layer.UndissolvedAtEndPerArea)}");
+            Add($"{layer.Layer}: undissolved drug used up", layer.ExhaustedSeconds is { } gone
+                ? format.Time(gone)
+                : layer.InitialUndissolvedPerArea > 0 ? "not within the duration" : "none above the solubility");
+        }
+
         Add("mass balance (worst relative error)", result.WorstMassBalanceError.ToString("G2", System.Globalization.CultureInfo.InvariantCulture));
         return new TextTable("Key figures", ["quantity", "value"], rows);
     }

@@ -31,6 +31,7 @@ public static class SummaryJson
             WriteFace(json, "right", result, Side.Right);
             json.WriteEndObject();
             WriteMassBalance(json, result);
+            WriteDispersedLayers(json, result);
             SummaryJsonFinalState.Write(json, result);
             SummaryJsonFoodContact.Write(json, result);
             SummaryJsonDiffusionCell.Write(json, result);
@@ -74,6 +75,7 @@ public static class SummaryJson
             json.WriteNumber("diffusionCoefficientSquareMetersPerSecond", layer.DiffusivitySquareMetersPerSecond);
             json.WriteNumber("partitionCoefficientVolumeBasis", layer.PartitionCoefficient);
             json.WriteNumber("initialConcentrationKgPerCubicMeter", layer.InitialConcentrationKgPerCubicMeter);
+            WriteNullable(json, "solubilityKgPerCubicMeter", layer.SolubilityKgPerCubicMeter);
             if (layer.Estimate is { } estimate)
             {
                 json.WriteString("estimate", EstimateNotes.Describe(estimate));
@@ -123,6 +125,23 @@ public static class SummaryJson
         json.WriteNumber("worstRelativeError", result.WorstMassBalanceError);
         WriteSeries(json, "relativeErrorAtReportTimes", result, sample => sample.MassBalanceError);
         json.WriteEndObject();
+    }
+
+    private static void WriteDispersedLayers(Utf8JsonWriter json, SimulationResult result)
+    {
+        json.WriteStartArray("dispersedLayers");
+        foreach (var layer in result.DispersedLayers)
+        {
+            json.WriteStartObject();
+            json.WriteString("name", layer.Layer);
+            json.WriteNumber("solubilityKgPerCubicMeter", layer.SolubilityKgPerCubicMeter);
+            json.WriteNumber("initialUndissolvedMassPerAreaKgPerSquareMeter", layer.InitialUndissolvedPerArea);
+            json.WriteNumber("undissolvedMassPerAreaAtEndKgPerSquareMeter", layer.UndissolvedAtEndPerArea);
+            WriteNullable(json, "undissolvedExhaustedSeconds", layer.ExhaustedSeconds);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
     }
 
     private static void WriteSolver(Utf8JsonWriter json, SimulationResult result)

@@ -29,6 +29,9 @@ public sealed record SimulationResult
     /// <summary>Diffusion-cell and patch figures (sampling, sink check, removal, permeation metrics), or null.</summary>
     public DiffusionCellSummary? DiffusionCell { get; init; }
 
+    /// <summary>The undissolved drug of every layer with a solubility, left to right; empty when none has one.</summary>
+    public IReadOnlyList<DispersedLayerSummary> DispersedLayers { get; init; } = [];
+
     /// <summary>Largest |mass balance error| over all output times (relative).</summary>
     public required double WorstMassBalanceError { get; init; }
 

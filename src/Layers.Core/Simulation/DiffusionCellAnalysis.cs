@@ -72,7 +72,10 @@ internal static class DiffusionCellAnalysis
             };
             var times = series.Select(sample => sample.TimeSeconds).ToArray();
             var received = series.Select(sample => sample.Right!.TransferredIntoMediumPerArea).ToArray();
-            simulated = SteadyLine.Fit("simulated", times, received, donor);
+            // A matrix loaded above its solubility depletes: its Q(t) has no steady part to fit.
+            simulated = simulation.Stack.Layers.Any(layer => layer.InitialUndissolvedPerArea > 0)
+                ? null
+                : SteadyLine.Fit("simulated", times, received, donor);
             if (test.Measured is { } data)
             {
                 measured = SteadyLine.Fit("measured", data.TimesSeconds, data.CumulativePerArea, donor);

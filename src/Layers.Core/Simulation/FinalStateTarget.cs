@@ -60,8 +60,10 @@ internal sealed class FinalStateTarget
         simulation = RemovalAsSink(simulation);
         if (simulation.IsClosed)
         {
-            var equilibrium = ClosedSystemEquilibrium.Of(simulation).ContinuousVariable;
+            var closed = ClosedSystemEquilibrium.Of(simulation);
+            var equilibrium = closed.ContinuousVariable;
             Array.Fill(values, equilibrium);
+            AddUndissolved(simulation, system, closed, values);
             return new FinalStateTarget(FinalStateKind.ClosedEquilibrium, values, null, equilibrium);
         }
 
@@ -78,6 +80,26 @@ internal sealed class FinalStateTarget
         SetRemovingCompartment(original, system, steady, values);
         var kind = steady.FluxKgPerSquareMeterSecond == 0 ? FinalStateKind.BathEquilibrium : FinalStateKind.SteadyPermeation;
         return new FinalStateTarget(kind, values, steady, null);
+    }
+
+    /// <summary>The content w of the cells that keep the undissolved excess at a capped equilibrium, spread by storage.</summary>
+    private static void AddUndissolved(SimulationCase simulation, DiffusionSystem system, ClosedSystemEquilibrium closed, double[] values)
+    {
+        if (closed.UndissolvedPerArea <= 0)
+        {
+            return;
+        }
+
+        var grid = system.Grid;
+        var holding = Enumerable.Range(0, grid.CellCount)
+            .Where(cell => simulation.Stack.Layers[grid.LayerOfCell[cell]].SaturationContinuousVariable <= closed.ContinuousVariable)
+            .Select(cell => system.FirstCellNode + cell)
+            .ToArray();
+        var storage = holding.Sum(node => system.Capacity[node]);
+        foreach (var node in holding)
+        {
+            values[node] += closed.UndissolvedPerArea / storage;
+        }
     }
 
     /// <summary>

@@ -30,8 +30,10 @@ internal sealed class ProfileBuilder
         }
     }
 
-    public IReadOnlyList<LayerProfile> Build(ReadOnlySpan<double> state)
+    /// <summary>Profiles of the dissolved concentration (undissolved drug of a dispersed layer is not part of them).</summary>
+    public IReadOnlyList<LayerProfile> Build(ReadOnlySpan<double> content)
     {
+        var state = Dissolved(content);
         var grid = _system.Grid;
         var cells = state.Slice(_system.FirstCellNode, grid.CellCount);
         var profiles = new List<LayerProfile>(_case.Stack.Count);
@@ -56,6 +58,22 @@ internal sealed class ProfileBuilder
         }
 
         return profiles;
+    }
+
+    private ReadOnlySpan<double> Dissolved(ReadOnlySpan<double> content)
+    {
+        if (_system.Saturation is null)
+        {
+            return content;
+        }
+
+        var dissolved = new double[content.Length];
+        for (var n = 0; n < content.Length; n++)
+        {
+            dissolved[n] = _system.Dissolved(n, content[n]);
+        }
+
+        return dissolved;
     }
 
     /// <summary>u on the face between cell a and cell b; an index of -1 or CellCount means the outer face.</summary>

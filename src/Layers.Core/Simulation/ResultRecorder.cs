@@ -125,7 +125,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         }
 
         return steady.FluxKgPerSquareMeterSecond > 0
-            ? -_system.RightBath.InflowRate(state[^1])
-            : -_system.LeftBath.InflowRate(state[0]);
+            ? -_system.RightBath.InflowRate(_system.Dissolved(state.Length - 1, state[^1]))
+            : -_system.LeftBath.InflowRate(_system.Dissolved(0, state[0]));
     }
 }

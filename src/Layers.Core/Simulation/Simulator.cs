@@ -23,6 +23,8 @@ public static class Simulator
         var horizon = simulation.DurationSeconds * HorizonFactor;
         var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(simulation, system, stages, initial);
         ITimeLoopObserver observer = watcher is null ? recorder : new ObserverPair(recorder, watcher);
+        var undissolved = system.Saturation is null ? null : new UndissolvedTracker(simulation, system, initial);
+        observer = undissolved is null ? observer : new ObserverPair(observer, undissolved);
         var statistics = StagedIntegration.Run(
             stages, initial, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
             simulation.Solver, observer, sampling, cancellation).Statistics;
@@ -44,6 +46,7 @@ public static class Simulator
                     SingleMembrane.LagTimeSeconds(simulation))
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
+            DispersedLayers = undissolved?.Summaries ?? [],
             DiffusionCell = DiffusionCellAnalysis.Of(simulation, recorder.Samples, sampling),
             Statistics = statistics,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed

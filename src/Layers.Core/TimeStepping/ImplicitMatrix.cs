@@ -10,55 +10,37 @@ namespace Layers.Core.TimeStepping;
 internal sealed class ImplicitMatrix
 {
     private readonly DiffusionSystem _system;
-    private readonly double[] _lower;
-    private readonly double[] _upperOverPivot;
-    private readonly double[] _inversePivot;
+    private readonly TridiagonalFactors _factors;
 
     public ImplicitMatrix(DiffusionSystem system)
     {
         _system = system;
-        var n = system.NodeCount;
-        _lower = new double[n];
-        _upperOverPivot = new double[n];
-        _inversePivot = new double[n];
+        _factors = new TridiagonalFactors(system.NodeCount);
     }
 
     /// <summary>Factors Cap + c A for the stage coefficient c (s).</summary>
     public void Factor(double coefficientSeconds)
     {
         var capacity = _system.Capacity;
-        var conductance = _system.Conductance;
-        var last = capacity.Length - 1;
-        var previousUpperOverPivot = 0.0;
-        for (var n = 0; n <= last; n++)
+        for (var n = 0; n < capacity.Length; n++)
         {
-            var toLeft = n > 0 ? conductance[n - 1] : _system.LeftBath.Conductance;
-            var toRight = n < last ? conductance[n] : _system.RightBath.Conductance;
-            var lower = n > 0 ? -coefficientSeconds * conductance[n - 1] : 0;
-            var upper = n < last ? -coefficientSeconds * conductance[n] : 0;
-            var diagonal = capacity[n] + (coefficientSeconds * (toLeft + toRight));
-            var pivot = diagonal - (lower * previousUpperOverPivot);
-            _lower[n] = lower;
-            _inversePivot[n] = 1 / pivot;
-            _upperOverPivot[n] = upper / pivot;
-            previousUpperOverPivot = _upperOverPivot[n];
+            var (lower, coupling, upper) = Row(_system, n, coefficientSeconds);
+            _factors.SetRow(n, lower, capacity[n] + coupling, upper);
         }
+    }
+
+    /// <summary>Row n of c A: the entries left of and right of the diagonal, and the diagonal (without storage).</summary>
+    public static (double Lower, double Diagonal, double Upper) Row(DiffusionSystem system, int n, double coefficientSeconds)
+    {
+        var conductance = system.Conductance;
+        var last = system.NodeCount - 1;
+        var toLeft = n > 0 ? conductance[n - 1] : system.LeftBath.Conductance;
+        var toRight = n < last ? conductance[n] : system.RightBath.Conductance;
+        var lower = n > 0 ? -coefficientSeconds * conductance[n - 1] : 0;
+        var upper = n < last ? -coefficientSeconds * conductance[n] : 0;
+        return (lower, coefficientSeconds * (toLeft + toRight), upper);
     }
 
     /// <summary>Solves (Cap + c A) x = b with the last factorisation; b and x may be the same span.</summary>
-    public void Solve(ReadOnlySpan<double> rightHandSide, Span<double> solution)
-    {
-        var last = _inversePivot.Length - 1;
-        var previous = 0.0;
-        for (var n = 0; n <= last; n++)
-        {
-            previous = (rightHandSide[n] - (_lower[n] * previous)) * _inversePivot[n];
-            solution[n] = previous;
-        }
-
-        for (var n = last - 1; n >= 0; n--)
-        {
-            solution[n] -= _upperOverPivot[n] * solution[n + 1];
-        }
-    }
+    public void Solve(ReadOnlySpan<double> rightHandSide, Span<double> solution) => _factors.Solve(rightHandSide, solution);
 }

@@ -6,7 +6,9 @@ namespace Layers.Core.TimeStepping;
 /// One step of TR-BDF2 for Cap du/dt = s - A u: a trapezoidal stage to t + gamma h, then a BDF2 stage to t + h,
 /// with gamma = 2 - sqrt(2) so that both stages share the matrix Cap + (gamma/2) h A (one factorisation per step).
 /// The method is second order, L-stable (no ringing after a step change in the initial concentration) and, with a
-/// direct solve, conserves mass to round-off.
+/// direct solve, conserves mass to round-off. With dispersed layers the stage equations are nonlinear (the
+/// dissolved value is capped) and are solved by <see cref="CappedStageSolver"/> inside each stage, so the step is
+/// still fully implicit and in conserved form.
 /// </summary>
 /// <remarks>
 /// Bank, Coughran, Fichtner, Grosse, Rose and Smith, IEEE Trans. Electron Devices 32 (1985) 1992-2007 (the method
@@ -25,63 +27,85 @@ internal sealed class TrBdf2Stepper
     private static readonly double ErrorConstant = ((-3 * Gamma * Gamma) + (4 * Gamma) - 2) / (12 * (2 - Gamma));
 
     private readonly DiffusionSystem _system;
-    private readonly ImplicitMatrix _matrix;
+    private readonly IStageSolver _solver;
     private readonly double[] _stage;
     private readonly double[] _work;
+    private readonly double[] _dissolvedAtStart;
+    private readonly double[] _dissolvedAtStage;
+    private readonly double[] _dissolvedAtEnd;
     private readonly double[] _rateAtStart;
     private readonly double[] _rateAtStage;
     private readonly double[] _rateAtEnd;
 
+    /// <summary>
+    /// A stepper for the system: with the linear stage solve when no layer has a solubility, else with the capped one,
+    /// whose state is each node's content w and whose fluxes are driven by the dissolved u = min(w, u_sat).
+    /// </summary>
     public TrBdf2Stepper(DiffusionSystem system)
     {
         _system = system;
-        _matrix = new ImplicitMatrix(system);
+        _solver = system.Saturation is null ? new LinearStageSolver(system) : new CappedStageSolver(system);
         var n = system.NodeCount;
         _stage = new double[n];
         _work = new double[n];
+        _dissolvedAtStart = new double[n];
+        _dissolvedAtStage = new double[n];
+        _dissolvedAtEnd = new double[n];
         _rateAtStart = new double[n];
         _rateAtStage = new double[n];
         _rateAtEnd = new double[n];
     }
 
-    /// <summary>Tries a step of size h from u; writes the candidate into <paramref name="next"/>.</summary>
+    /// <summary>Tries a step of size h from w; writes the candidate into <paramref name="next"/>.</summary>
     /// <param name="start">State at the start of the step.</param>
     /// <param name="stepSeconds">Step size h.</param>
     /// <param name="next">Candidate state at t + h.</param>
     /// <param name="weights">Per-node tolerance scale used to normalise the error.</param>
+    /// <returns>The error and bath exchange of the step; an infinite error when a stage solve did not converge.</returns>
     public StepTrial Try(ReadOnlySpan<double> start, double stepSeconds, Span<double> next, ErrorWeights weights)
     {
         var capacity = _system.Capacity;
         var n = capacity.Length;
         var c = StageWeight * stepSeconds;
-        _matrix.Factor(c);
-        _system.Residual(start, _rateAtStart);
+        _solver.Prepare(c);
+        _solver.Dissolve(start, _dissolvedAtStart);
+        _system.Residual(_dissolvedAtStart, _rateAtStart);
 
-        // Trapezoidal stage: (Cap + cA) u_g = Cap u_n + c (s - A u_n) + c s.
+        // Trapezoidal stage: Cap w_g + c A u_g = Cap w_n + c (s - A u_n) + c s.
         for (var i = 0; i < n; i++)
         {
             _work[i] = (capacity[i] * start[i]) + (c * _rateAtStart[i]);
         }
 
         AddSource(_work, c);
-        _matrix.Solve(_work, _stage);
-        _system.Residual(_stage, _rateAtStage);
+        start.CopyTo(_stage);
+        if (!_solver.Solve(_work, _stage, _dissolvedAtStage))
+        {
+            return StepTrial.NotConverged;
+        }
 
-        // BDF2 stage: (Cap + cA) u_n+1 = Cap (w1 u_g - w0 u_n) + c s.
+        _system.Residual(_dissolvedAtStage, _rateAtStage);
+
+        // BDF2 stage: Cap w_n+1 + c A u_n+1 = Cap (w1 w_g - w0 w_n) + c s.
         for (var i = 0; i < n; i++)
         {
             _work[i] = capacity[i] * ((BdfWeightOfStage * _stage[i]) - (BdfWeightOfStart * start[i]));
         }
 
         AddSource(_work, c);
-        _matrix.Solve(_work, next);
-        _system.Residual(next, _rateAtEnd);
+        _stage.CopyTo(next);
+        if (!_solver.Solve(_work, next, _dissolvedAtEnd))
+        {
+            return StepTrial.NotConverged;
+        }
+
+        _system.Residual(_dissolvedAtEnd, _rateAtEnd);
 
         var error = FilteredError(start, next, stepSeconds, weights);
         return new StepTrial(
             error,
-            BathInflow(_system.LeftBath, start[0], _stage[0], next[0], c),
-            BathInflow(_system.RightBath, start[n - 1], _stage[n - 1], next[n - 1], c));
+            BathInflow(_system.LeftBath, _dissolvedAtStart[0], _dissolvedAtStage[0], _dissolvedAtEnd[0], c),
+            BathInflow(_system.RightBath, _dissolvedAtStart[n - 1], _dissolvedAtStage[n - 1], _dissolvedAtEnd[n - 1], c));
     }
 
     private double FilteredError(ReadOnlySpan<double> start, ReadOnlySpan<double> next, double h, ErrorWeights weights)
@@ -95,7 +119,7 @@ internal sealed class TrBdf2Stepper
                 + (_rateAtEnd[i] / (1 - Gamma)));
         }
 
-        _matrix.Solve(_work, _work);
+        _solver.Filter(_work);
         var worst = 0.0;
         for (var i = 0; i < n; i++)
         {
@@ -137,7 +161,11 @@ internal sealed class TrBdf2Stepper
 internal readonly record struct StepTrial(
     double NormalisedError,
     double LeftBathInflowPerArea,
-    double RightBathInflowPerArea);
+    double RightBathInflowPerArea)
+{
+    /// <summary>A stage solve did not converge: reject the step and retry it smaller.</summary>
+    public static StepTrial NotConverged => new(double.PositiveInfinity, 0, 0);
+}
 
 /// <summary>Per-node tolerance: |error| must stay below Absolute + Relative |u|.</summary>
 internal readonly record struct ErrorWeights(double Absolute, double Relative);

@@ -40,6 +40,12 @@ public sealed class CaseReaderRuleTests
         { "layer concentration negative", "$.layers[0].initialConcentration", "\"-1 mg/L\"", "$.layers[0].initialConcentration", "must be >= 0; got '-1 mg/L'" },
         { "compartment concentration negative", "$.right.initialConcentration", "\"-0.5 ug/mL\"", "$.right.initialConcentration", "must be >= 0; got '-0.5 ug/mL'" },
 
+        // Solubility of a dispersed layer: a concentration > 0.
+        { "solubility zero", "$.layers[0].solubility", "\"0 mg/mL\"", "$.layers[0].solubility", "must be > 0; got '0 mg/mL'" },
+        { "solubility negative", "$.layers[0].solubility", "\"-2 mg/mL\"", "$.layers[0].solubility", "must be > 0; got '-2 mg/mL'" },
+        { "solubility without unit", "$.layers[0].solubility", "5", "$.layers[0].solubility", "'5' has no unit" },
+        { "solubility as a length", "$.layers[0].solubility", "\"5 um\"", "$.layers[0].solubility", "'5 um' is a length" },
+
         // Units: required, known, of the right dimension.
         { "thickness as a bare JSON number", "$.layers[0].thickness", "50", "$.layers[0].thickness", "'50' has no unit; a unit is required" },
         { "thickness as a string without unit", "$.layers[0].thickness", "\"50\"", "$.layers[0].thickness", "'50' has no unit; a unit is required" },

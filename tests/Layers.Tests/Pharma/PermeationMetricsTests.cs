@@ -101,7 +101,25 @@ public sealed class PermeationMetricsTests
         Tolerance.Relative(8.64e-4, delivery.PerDayPerArea[0], 1e-12, "day 1");
         Tolerance.Relative(4.32e-4, delivery.PerDayPerArea[1], 1e-12, "day 2");
         Assert.Equal(0.25 * Delivery.DaySeconds, delivery.TargetReachedSeconds);
-        Assert.Equal(1.5 * Delivery.DaySeconds, delivery.TargetHeldUntilSeconds);
+        // The rate drops from 1e-8 to 0 at 1.5 d: halfway between the mid-times 1.375 d and 1.625 d (by hand).
+        Tolerance.Relative(1.5 * Delivery.DaySeconds, delivery.TargetHeldUntilSeconds!.Value, 1e-12, "held until");
+    }
+
+    [Fact]
+    public void The_time_a_falling_rate_drops_below_the_target_is_found_between_output_times()
+    {
+        // Invented: a rate falling linearly, J(t) = J0 (1 - t/tau), so Q(t) = J0 (t - t^2 / (2 tau)) (by hand). It falls
+        // to J0/4 at t = 0.75 tau, between outputs every 0.2 tau; the mean rate over an interval of a linear J is J at
+        // the interval's mid-time, so the interpolation between mid-times is exact here.
+        const double j0 = 1e-8, tau = 10 * Delivery.DaySeconds;
+        var times = Enumerable.Range(0, 6).Select(i => i * 0.2 * tau).ToArray();
+        var amounts = times.Select(t => j0 * (t - (t * t / (2 * tau)))).ToArray();
+        var test = new PermeationTest { TargetFluxKgPerSquareMeterSecond = j0 / 4 };
+
+        var delivery = Delivery.Of(test, times, amounts);
+
+        Assert.Equal(0.2 * tau, delivery.TargetReachedSeconds);
+        Tolerance.Relative(0.75 * tau, delivery.TargetHeldUntilSeconds!.Value, 1e-12, "rate falls to J0/4");
     }
 
     private static double Q(double t) => MembraneTimeLag.CumulativeMassPerArea(Diffusivity, Thickness, Partition, Donor, t);

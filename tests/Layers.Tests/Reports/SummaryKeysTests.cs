@@ -16,7 +16,7 @@ public sealed partial class SummaryKeysTests
     private static readonly string[] Demos =
         [
             "laminate-fatty-food", "patch-on-skin", "diffusion-cell-membrane", "two-liquid-layers", "membrane-time-lag",
-            "hot-fill-barrier-shelf-life", "skin-diffusion-cell-sampling",
+            "hot-fill-barrier-shelf-life", "skin-diffusion-cell-sampling", "dispersed-matrix-patch",
         ];
 
     [Fact]
