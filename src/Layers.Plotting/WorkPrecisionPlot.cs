@@ -31,7 +31,10 @@ public static class WorkPrecisionPlot
     {
         ArgumentNullException.ThrowIfNull(series);
         var model = PlotFrame.Create(title, subtitleLines, options);
-        model.Axes.Add(PlotFrame.Logarithmic(AxisPosition.Bottom, "solve time (s), median of repeated runs"));
+        var time = PlotFrame.Logarithmic(AxisPosition.Bottom, "solve time (s), median of repeated runs");
+        // Wide labels such as 3x10^-4 overlap at OxyPlot's default spacing when the axis spans few decades.
+        time.IntervalLength = 110;
+        model.Axes.Add(time);
         model.Axes.Add(PlotFrame.Logarithmic(AxisPosition.Left, "error (largest difference / reference amount)"));
         var colour = 0;
         foreach (var line in series)
