@@ -60,7 +60,7 @@ public sealed record AccuracyProblem(
         var loaded = BenchmarkCases.Load("laminate");
         var simulation = loaded with { ReportTimesSeconds = [.. ReportFractions.Select(fraction => fraction * loaded.DurationSeconds)] };
         var converged = ToolReceived(simulation, 2000, 1e-9);
-        return new AccuracyProblem("laminate", simulation, converged, converged[^1], "converged run of the tool (2000 cells, rtol 1e-9)");
+        return new AccuracyProblem("laminate", simulation, converged, converged[^1], "a converged run of the tool (2000 cells, rtol 1e-9)");
     }
 
     /// <summary>The problems of the work-precision diagram.</summary>

@@ -59,7 +59,7 @@ public static class WorkPrecision
                 log.WriteLine(Invariant($"{problem.Name}: plain, {cells} cells, {steps} steps: error {error:0.00e0}, {seconds * 1e3:0.000} ms"));
             }
 
-            series.Add(new WorkPrecisionSeries("plain reference: uniform cells, fixed backward-Euler steps", plain, IsReference: true));
+            series.Add(new WorkPrecisionSeries("plain reference: uniform cells, fixed backward-Euler steps (20 to 640 cells, 40 to 40960 steps)", plain, IsReference: true));
             var png = WorkPrecisionPlot.Render(
                 $"Work and precision: {problem.Case.Title}",
                 [$"Error: largest difference in the amount received over six times, against {problem.ReferenceText}, divided by the final amount.",
