@@ -15,9 +15,13 @@ namespace Layers.Benchmarks.Reference;
 /// </remarks>
 public static class PlainReference
 {
-    /// <summary>Mesh settings for cells of equal width within each layer.</summary>
+    /// <summary>
+    /// Mesh settings for cells of equal width within each layer. Faces must fall on the interfaces, so one width
+    /// for the whole stack is not possible in general; every layer gets at least totalCells / layerCount cells
+    /// (and at least four), which spares a thin layer the starvation a plain mesh would give it.
+    /// </summary>
     /// <param name="totalCells">Target number of cells over the stack.</param>
-    /// <param name="layerCount">Number of layers, so that every layer gets at least four cells.</param>
+    /// <param name="layerCount">Number of layers.</param>
     public static GridOptions UniformGrid(int totalCells, int layerCount) => new()
     {
         TotalCells = totalCells,
