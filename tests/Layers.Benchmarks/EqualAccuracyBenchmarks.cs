@@ -21,7 +21,7 @@ public class EqualAccuracyBenchmarks
     [Params("sheet", "laminate")]
     public string Problem { get; set; } = "sheet";
 
-    /// <summary>Finds the plain setting that matches the tool's error.</summary>
+    /// <summary>Finds, for each solver, the first setting of its ladder (coarse to fine) that meets the error requirement.</summary>
     [GlobalSetup]
     public void Setup()
     {
