@@ -102,6 +102,21 @@ public sealed class PlotTests(PlotCases cases) : IClassFixture<PlotCases>
 
     private SimulationResult Result(string which) => which == "demo" ? cases.Demo : cases.Permeation;
 
+    [Fact]
+    public void Work_precision_diagram_is_a_png_of_the_requested_size_even_with_points_it_cannot_draw()
+    {
+        var options = new PlotOptions(900, 600);
+        WorkPrecisionSeries[] series =
+        [
+            new("tool", [new(1e-3, 1e-4), new(2e-3, 1e-5), new(0, 1e-6)]),
+            new("plain reference", [new(1e-4, 1e-2), new(1e-2, 1e-4), new(1e-1, 0)], IsReference: true),
+        ];
+
+        var png = WorkPrecisionPlot.Render("work and precision", ["invented points"], series, options);
+
+        AssertPicture("work-precision.png", png, options.WidthPixels, options.HeightPixels);
+    }
+
     private static void AssertPicture(string name, byte[] png, int width, int height)
     {
         Assert.True(PngImage.HasSignature(png), $"{name}: no PNG signature");

@@ -215,6 +215,22 @@ public class SchemaTests
     }
 
     [Fact]
+    public void Every_benchmark_case_is_valid_against_the_schema_and_the_reader()
+    {
+        var folder = Path.Combine(_repoRoot.Value, "tests", "Layers.Benchmarks", "cases");
+        var files = Directory.EnumerateFiles(folder, "*.json").Order(StringComparer.Ordinal).ToList();
+
+        Assert.NotEmpty(files);
+        Assert.All(files, path =>
+        {
+            var json = File.ReadAllText(path);
+            Assert.True(Evaluate(json).IsValid, Describe(Path.GetRelativePath(_repoRoot.Value, path), JsonNode.Parse(json), _schema.Value));
+            var read = Layers.Core.Cases.CaseReader.ReadText(json, path);
+            Assert.True(read.IsValid, read.FormatErrors());
+        });
+    }
+
+    [Fact]
     public void First_example_in_the_format_reference_is_a_complete_valid_case()
     {
         var blocks = JsonBlocksOfFormatReference();
