@@ -91,6 +91,8 @@ public static class StagedIntegration
     /// <summary>State events (receptor sampling) at times of the whole run, applied inside one stage.</summary>
     private sealed class ShiftedEvents(IStateEvents inner, double offsetSeconds) : IStateEvents
     {
+        public IReadOnlyList<double> TimesSeconds { get; } = inner.TimesSeconds.Select(time => time - offsetSeconds).ToArray();
+
         public void Apply(double timeSeconds, Span<double> state) => inner.Apply(timeSeconds + offsetSeconds, state);
     }
 

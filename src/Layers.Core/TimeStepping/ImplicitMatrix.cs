@@ -26,39 +26,51 @@ internal sealed class ImplicitMatrix
     /// <summary>Factors Cap + c A for the stage coefficient c (s).</summary>
     public void Factor(double coefficientSeconds)
     {
-        var capacity = _system.Capacity;
-        var conductance = _system.Conductance;
+        // Local spans let the JIT drop bounds checks; the recurrence through the pivot is the critical path.
+        ReadOnlySpan<double> capacity = _system.Capacity;
+        ReadOnlySpan<double> conductance = _system.Conductance;
+        var lowerOut = _lower.AsSpan(0, capacity.Length);
+        var inversePivot = _inversePivot.AsSpan(0, capacity.Length);
+        var upperOverPivot = _upperOverPivot.AsSpan(0, capacity.Length);
         var last = capacity.Length - 1;
+        var toLeft = _system.LeftBath.Conductance;
         var previousUpperOverPivot = 0.0;
+        var lower = 0.0;
         for (var n = 0; n <= last; n++)
         {
-            var toLeft = n > 0 ? conductance[n - 1] : _system.LeftBath.Conductance;
             var toRight = n < last ? conductance[n] : _system.RightBath.Conductance;
-            var lower = n > 0 ? -coefficientSeconds * conductance[n - 1] : 0;
-            var upper = n < last ? -coefficientSeconds * conductance[n] : 0;
-            var diagonal = capacity[n] + (coefficientSeconds * (toLeft + toRight));
-            var pivot = diagonal - (lower * previousUpperOverPivot);
-            _lower[n] = lower;
-            _inversePivot[n] = 1 / pivot;
-            _upperOverPivot[n] = upper / pivot;
-            previousUpperOverPivot = _upperOverPivot[n];
+            var upper = n < last ? -coefficientSeconds * toRight : 0;
+            var pivot = capacity[n] + (coefficientSeconds * (toLeft + toRight)) - (lower * previousUpperOverPivot);
+            var inverse = 1 / pivot;
+            lowerOut[n] = lower;
+            inversePivot[n] = inverse;
+            previousUpperOverPivot = upper * inverse;
+            upperOverPivot[n] = previousUpperOverPivot;
+            toLeft = toRight;
+            lower = upper;
         }
     }
 
     /// <summary>Solves (Cap + c A) x = b with the last factorisation; b and x may be the same span.</summary>
     public void Solve(ReadOnlySpan<double> rightHandSide, Span<double> solution)
     {
-        var last = _inversePivot.Length - 1;
+        var count = _inversePivot.Length;
+        ReadOnlySpan<double> lower = _lower.AsSpan(0, count);
+        ReadOnlySpan<double> inversePivot = _inversePivot.AsSpan(0, count);
+        ReadOnlySpan<double> upperOverPivot = _upperOverPivot.AsSpan(0, count);
+        var right = rightHandSide[..count];
+        var x = solution[..count];
         var previous = 0.0;
-        for (var n = 0; n <= last; n++)
+        for (var n = 0; n < count; n++)
         {
-            previous = (rightHandSide[n] - (_lower[n] * previous)) * _inversePivot[n];
-            solution[n] = previous;
+            previous = (right[n] - (lower[n] * previous)) * inversePivot[n];
+            x[n] = previous;
         }
 
-        for (var n = last - 1; n >= 0; n--)
+        for (var n = count - 2; n >= 0; n--)
         {
-            solution[n] -= _upperOverPivot[n] * solution[n + 1];
+            previous = x[n] - (upperOverPivot[n] * previous);
+            x[n] = previous;
         }
     }
 }

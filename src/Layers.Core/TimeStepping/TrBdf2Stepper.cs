@@ -18,7 +18,8 @@ namespace Layers.Core.TimeStepping;
 /// </remarks>
 internal sealed class TrBdf2Stepper
 {
-    private static readonly double Gamma = 2 - Math.Sqrt(2);
+    /// <summary>Where the trapezoidal stage ends, as a fraction of the step: gamma = 2 - sqrt(2).</summary>
+    public static readonly double Gamma = 2 - Math.Sqrt(2);
     private static readonly double StageWeight = Gamma / 2;
     private static readonly double BdfWeightOfStage = 1 / (Gamma * (2 - Gamma));
     private static readonly double BdfWeightOfStart = (1 - Gamma) * (1 - Gamma) / (Gamma * (2 - Gamma));
@@ -28,9 +29,14 @@ internal sealed class TrBdf2Stepper
     private readonly ImplicitMatrix _matrix;
     private readonly double[] _stage;
     private readonly double[] _work;
-    private readonly double[] _rateAtStart;
     private readonly double[] _rateAtStage;
-    private readonly double[] _rateAtEnd;
+    private double[] _rateAtStart;
+    private double[] _rateAtEnd;
+
+    // The arrays whose rates s - A u are held: a step that starts from the previous candidate (it was accepted) or from
+    // the previous start (the step was rejected) reuses the rate instead of recomputing it.
+    private double[]? _rateAtStartOf;
+    private double[]? _rateAtEndOf;
 
     public TrBdf2Stepper(DiffusionSystem system)
     {
@@ -44,18 +50,40 @@ internal sealed class TrBdf2Stepper
         _rateAtEnd = new double[n];
     }
 
+    /// <summary>
+    /// Tells the stepper that the caller changed a state array between steps (an event), so the rates it remembers
+    /// for its arrays must be recomputed.
+    /// </summary>
+    public void StateChanged()
+    {
+        _rateAtStartOf = null;
+        _rateAtEndOf = null;
+    }
+
+    /// <summary>u at t + gamma h of the last step tried (the end of its trapezoidal stage).</summary>
+    public ReadOnlySpan<double> Stage => _stage;
+
     /// <summary>Tries a step of size h from u; writes the candidate into <paramref name="next"/>.</summary>
     /// <param name="start">State at the start of the step.</param>
     /// <param name="stepSeconds">Step size h.</param>
     /// <param name="next">Candidate state at t + h.</param>
     /// <param name="weights">Per-node tolerance scale used to normalise the error.</param>
-    public StepTrial Try(ReadOnlySpan<double> start, double stepSeconds, Span<double> next, ErrorWeights weights)
+    public StepTrial Try(double[] start, double stepSeconds, double[] next, ErrorWeights weights)
     {
         var capacity = _system.Capacity;
         var n = capacity.Length;
         var c = StageWeight * stepSeconds;
         _matrix.Factor(c);
-        _system.Residual(start, _rateAtStart);
+        if (ReferenceEquals(start, _rateAtEndOf))
+        {
+            (_rateAtStart, _rateAtEnd) = (_rateAtEnd, _rateAtStart);
+            _rateAtStartOf = start;
+        }
+        else if (!ReferenceEquals(start, _rateAtStartOf))
+        {
+            _system.Residual(start, _rateAtStart);
+            _rateAtStartOf = start;
+        }
 
         // Trapezoidal stage: (Cap + cA) u_g = Cap u_n + c (s - A u_n) + c s.
         for (var i = 0; i < n; i++)
@@ -76,12 +104,12 @@ internal sealed class TrBdf2Stepper
         AddSource(_work, c);
         _matrix.Solve(_work, next);
         _system.Residual(next, _rateAtEnd);
+        _rateAtEndOf = next;
 
         var error = FilteredError(start, next, stepSeconds, weights);
-        return new StepTrial(
-            error,
-            BathInflow(_system.LeftBath, start[0], _stage[0], next[0], c),
-            BathInflow(_system.RightBath, start[n - 1], _stage[n - 1], next[n - 1], c));
+        var (leftToStage, left) = BathInflow(_system.LeftBath, start[0], _stage[0], next[0], c);
+        var (rightToStage, right) = BathInflow(_system.RightBath, start[n - 1], _stage[n - 1], next[n - 1], c);
+        return new StepTrial(error, left, right, new BathTotals(leftToStage, rightToStage));
     }
 
     private double FilteredError(ReadOnlySpan<double> start, ReadOnlySpan<double> next, double h, ErrorWeights weights)
@@ -96,14 +124,22 @@ internal sealed class TrBdf2Stepper
         }
 
         _matrix.Solve(_work, _work);
+
+        // The largest |error| / tolerance, found without a division per node: a division only where a new largest
+        // ratio appears.
         var worst = 0.0;
-        for (var i = 0; i < n; i++)
+        var absolute = weights.Absolute;
+        var relative = weights.Relative;
+        ReadOnlySpan<double> error = _work;
+        var before = start[..error.Length];
+        var after = next[..error.Length];
+        for (var i = 0; i < error.Length; i++)
         {
-            var tolerance = weights.Absolute + (weights.Relative * Math.Max(Math.Abs(start[i]), Math.Abs(next[i])));
-            var ratio = Math.Abs(_work[i]) / tolerance;
-            if (!(ratio <= worst))
+            var size = Math.Abs(error[i]);
+            var tolerance = absolute + (relative * Math.Max(Math.Abs(before[i]), Math.Abs(after[i])));
+            if (!(size <= worst * tolerance))
             {
-                worst = ratio;
+                worst = size / tolerance;
             }
         }
 
@@ -118,15 +154,19 @@ internal sealed class TrBdf2Stepper
         rightHandSide[^1] += c * right.Conductance * right.BathValue;
     }
 
-    private static double BathInflow(BathCoupling bath, double start, double stage, double end, double c)
+    /// <summary>
+    /// Mass per area from a bath up to the stage (the trapezoidal quadrature, which is what the trapezoidal stage
+    /// adds to the stored mass) and over the whole step (the BDF2 quadrature).
+    /// </summary>
+    private static (double ToStage, double Step) BathInflow(BathCoupling bath, double start, double stage, double end, double c)
     {
         if (!bath.Exists)
         {
-            return 0;
+            return (0, 0);
         }
 
         var trapezoidal = c * (bath.InflowRate(start) + bath.InflowRate(stage));
-        return (BdfWeightOfStage * trapezoidal) + (c * bath.InflowRate(end));
+        return (trapezoidal, (BdfWeightOfStage * trapezoidal) + (c * bath.InflowRate(end)));
     }
 }
 
@@ -134,10 +174,12 @@ internal sealed class TrBdf2Stepper
 /// <param name="NormalisedError">Largest local error divided by its tolerance; NaN if the step produced NaN.</param>
 /// <param name="LeftBathInflowPerArea">Mass per area that entered the stack from a left bath over the step, kg/m2.</param>
 /// <param name="RightBathInflowPerArea">Mass per area that entered the stack from a right bath over the step, kg/m2.</param>
+/// <param name="InflowToStage">Mass per area from each bath between the start of the step and its stage, kg/m2.</param>
 internal readonly record struct StepTrial(
     double NormalisedError,
     double LeftBathInflowPerArea,
-    double RightBathInflowPerArea);
+    double RightBathInflowPerArea,
+    BathTotals InflowToStage);
 
 /// <summary>Per-node tolerance: |error| must stay below Absolute + Relative |u|.</summary>
 internal readonly record struct ErrorWeights(double Absolute, double Relative);
