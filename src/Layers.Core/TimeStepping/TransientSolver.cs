@@ -49,9 +49,11 @@ public sealed class TransientSolver
         var stepper = new TrBdf2Stepper(_system);
         var interpolant = new StepInterpolant(_system.NodeCount);
         var landings = LandingTimes(plan, events);
-        var weights = new ErrorWeights(
-            _options.RelativeTolerance * _options.AbsoluteToleranceScale * loop.Scale,
-            _options.RelativeTolerance);
+        var weights = Weights(_options.RelativeTolerance, loop.Scale);
+
+        // Past the end only the times to approach the final state are sought; they are read to a few digits, so the
+        // steps there may be looser (and grow faster) than those that make the reported profiles and amounts.
+        var weightsAfterEnd = Weights(Math.Max(_options.RelativeTolerance, _options.RelativeToleranceAfterEnd), loop.Scale);
         observer.OnOutput(0, loop.Current, default);
 
         var outputIndex = 0;
@@ -88,7 +90,7 @@ public sealed class TransientSolver
 
             var landsOnTarget = loop.Time + step >= target * (1 - 1e-12);
             var tried = landsOnTarget ? target - loop.Time : step;
-            var trial = stepper.Try(loop.Current, tried, loop.Candidate, weights);
+            var trial = stepper.Try(loop.Current, tried, loop.Candidate, loop.Time >= plan.EndSeconds ? weightsAfterEnd : weights);
             var error = NegativeBeyondRoundOff(loop.Candidate, loop.Scale) ? double.PositiveInfinity : trial.NormalisedError;
             var (accept, proposal) = _controller.Decide(tried, error);
             if (!accept)
@@ -128,6 +130,9 @@ public sealed class TransientSolver
 
         return loop.Statistics(reason, clock.Elapsed.TotalSeconds);
     }
+
+    private ErrorWeights Weights(double relativeTolerance, double scale)
+        => new(relativeTolerance * _options.AbsoluteToleranceScale * scale, relativeTolerance);
 
     /// <summary>The times the loop must hit exactly: those of the state events before the end, then the end.</summary>
     private static double[] LandingTimes(TimeLoopPlan plan, IStateEvents? events)
