@@ -12,7 +12,7 @@ namespace Layers.Core.Simulation;
 /// The spatial error of the cell-centred scheme falls with the square of the cell width, so the number of cells
 /// grows with 1/sqrt(accuracy): 320 cells at 1e-4, 100 at 1e-3. The cells at the edges of each layer are made
 /// narrower than a quarter of the layer's diffusion length at 1 % of the duration, so that a slow layer, or one that
-/// takes up much from its neighbour, resolves its steep early profile. The step tolerance is half the target, since
+/// takes up much from its neighbour, resolves its steep early profile. The step tolerance is a quarter of the target:
 /// an output interpolated inside a step carries an error of the order of that step's local error.
 /// </remarks>
 public static class AccuracyTarget
@@ -31,7 +31,7 @@ public static class AccuracyTarget
     {
         var cells = (int)Math.Ceiling(CellsAtOneInTenThousand * Math.Sqrt(1e-4 / accuracy));
         var grid = new GridOptions { TotalCells = Math.Clamp(cells, 24, 200_000), ResolvedFromSeconds = 0.01 * durationSeconds };
-        var solver = new SolverOptions { RelativeTolerance = 0.5 * accuracy };
+        var solver = new SolverOptions { RelativeTolerance = 0.25 * accuracy };
         return (grid, solver);
     }
 }

@@ -244,16 +244,16 @@ public sealed class CaseReaderTests
     [Fact]
     public void An_accuracy_target_picks_the_mesh_and_tolerance_and_keys_beside_it_override_them()
     {
-        // docs/case-format.md, $.numerics.accuracy: 320 cells at 1e-4, tolerance half the target, edges resolved at
+        // docs/case-format.md, $.numerics.accuracy: 320 cells at 1e-4, tolerance a quarter of the target, edges resolved at
         // 1 % of the duration; an explicit key wins.
         var chosen = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4 }""")));
         var overridden = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4, "cells": 50 }""")));
 
         Assert.Equal(320, chosen.Grid.TotalCells);
-        Assert.Equal(5e-5, chosen.Solver.RelativeTolerance, 15);
+        Assert.Equal(2.5e-5, chosen.Solver.RelativeTolerance, 15);
         Tolerance.Relative(0.01 * chosen.DurationSeconds, chosen.Grid.ResolvedFromSeconds!.Value, 1e-12, "resolved from");
         Assert.Equal(50, overridden.Grid.TotalCells);
-        Assert.Equal(5e-5, overridden.Solver.RelativeTolerance, 15);
+        Assert.Equal(2.5e-5, overridden.Solver.RelativeTolerance, 15);
     }
 
     [Theory]
