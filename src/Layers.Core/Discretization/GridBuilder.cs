@@ -45,7 +45,10 @@ public static class GridBuilder
     /// <summary>Widest edge cell, as a fraction of the diffusion length at <see cref="GridOptions.ResolvedFromSeconds"/>.</summary>
     public const double EdgeWidthPerDiffusionLength = 0.25;
 
-    /// <summary>Steepest grading used to reach that edge width; beyond about 1.3 the scheme loses accuracy.</summary>
+    /// <summary>
+    /// Steepest grading used to reach that edge width (a bound that keeps the grading smooth; common practice, no
+    /// source).
+    /// </summary>
     public const double SteepestGradingRatio = 1.3;
 
     /// <summary>
@@ -69,7 +72,7 @@ public static class GridBuilder
         {
             // The edge width falls as the ratio grows; bisect for the ratio that meets it, or take the steepest.
             var low = ratio;
-            var high = SteepestGradingRatio;
+            var high = Math.Max(ratio, SteepestGradingRatio);
             if (EdgeWidth(thicknessMeters, cellCount, high) > edgeWidthMeters)
             {
                 low = high;
