@@ -108,6 +108,7 @@ public static class StagedIntegration
     {
         private readonly double[] _end = new double[nodeCount];
         private bool _reachedEnd;
+        private int _nextRequested;
 
         public double[]? StateAtEnd => _reachedEnd ? _end : null;
 
@@ -123,7 +124,7 @@ public static class StagedIntegration
             }
 
             var time = timeSeconds + offsetSeconds;
-            if (timeSeconds == 0 || requested.Any(wanted => Math.Abs(wanted - time) <= 1e-12 * Math.Max(wanted, 1)))
+            if (timeSeconds == 0 || IsRequested(time))
             {
                 inner.OnOutput(time, state, Shift(bathInflow));
             }
@@ -141,6 +142,20 @@ public static class StagedIntegration
                 BathsAtEnd = Shift(bathInflow);
                 _reachedEnd = true;
             }
+        }
+
+        /// <summary>
+        /// Whether the run asked for this time. Outputs arrive in ascending order, so one index walks the ascending
+        /// requested times once over the stage: O(1) per output and no allocation.
+        /// </summary>
+        private bool IsRequested(double time)
+        {
+            while (_nextRequested < requested.Count && requested[_nextRequested] < time - (1e-12 * Math.Max(requested[_nextRequested], 1)))
+            {
+                _nextRequested++;
+            }
+
+            return _nextRequested < requested.Count && Math.Abs(requested[_nextRequested] - time) <= 1e-12 * Math.Max(requested[_nextRequested], 1);
         }
 
         private BathTotals Shift(BathTotals stage)
