@@ -3,6 +3,7 @@ using System.Text;
 using System.Text.Json;
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
+using Layers.Core.Simulation;
 using Layers.Core.TimeStepping;
 using Layers.Core.Units;
 
@@ -22,7 +23,7 @@ public static class CaseReader
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
-    private static readonly string[] NumericsKeys = ["cells", "minimumCellsPerLayer", "relativeTolerance"];
+    private static readonly string[] NumericsKeys = ["accuracy", "cells", "minimumCellsPerLayer", "relativeTolerance"];
 
     // Standard JSON only, as docs/case-format.md promises: a case file must also open in editors, schema
     // validators and scripts, which reject comments and trailing commas.
@@ -209,6 +210,20 @@ public static class CaseReader
             || JsonFields.Open(element, root.PathOf("numerics"), context.Errors, NumericsKeys) is not { } numerics)
         {
             return (grid, solver);
+        }
+
+        // A target accuracy picks the mesh and the tolerance; keys given beside it still override its choice.
+        if (numerics.Number("accuracy") is { } accuracy)
+        {
+            if (accuracy is >= AccuracyTarget.Finest and <= AccuracyTarget.Coarsest)
+            {
+                (grid, solver) = AccuracyTarget.Settings(accuracy, context.DurationSeconds ?? 0);
+            }
+            else
+            {
+                numerics.Error("accuracy", FormattableString.Invariant(
+                    $"must be from {AccuracyTarget.Finest:0e0} to {AccuracyTarget.Coarsest:0e0} (a relative accuracy such as 1e-4); got {accuracy}"));
+            }
         }
 
         grid = grid with

@@ -81,21 +81,19 @@ public sealed class DiffusionSystem
     /// </summary>
     public void Residual(ReadOnlySpan<double> u, Span<double> rate)
     {
-        var last = NodeCount - 1;
-        for (var n = 0; n <= last; n++)
+        ReadOnlySpan<double> conductance = Conductance;
+        var count = conductance.Length + 1;
+        var values = u[..count];
+        var rates = rate[..count];
+        var inflow = LeftBath.InflowRate(values[0]);
+        for (var n = 0; n < count - 1; n++)
         {
-            rate[n] = 0;
+            var flux = conductance[n] * (values[n] - values[n + 1]);
+            rates[n] = inflow - flux;
+            inflow = flux;
         }
 
-        for (var n = 0; n < last; n++)
-        {
-            var flux = Conductance[n] * (u[n] - u[n + 1]);
-            rate[n] -= flux;
-            rate[n + 1] += flux;
-        }
-
-        rate[0] += LeftBath.InflowRate(u[0]);
-        rate[last] += RightBath.InflowRate(u[last]);
+        rates[count - 1] = inflow + RightBath.InflowRate(values[count - 1]);
     }
 
     /// <summary>The dissolved u = min(w, saturation) of a node whose state is w.</summary>

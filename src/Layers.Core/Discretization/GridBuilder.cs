@@ -17,7 +17,10 @@ public static class GridBuilder
         var owners = new List<int>();
         for (var layer = 0; layer < stack.Count; layer++)
         {
-            var layerWidths = GradedWidths(stack.Layers[layer].ThicknessMeters, counts[layer], options);
+            var edge = options.ResolvedFromSeconds is { } early
+                ? EdgeWidthPerDiffusionLength * Math.Sqrt(stack.Layers[layer].DiffusivitySquareMetersPerSecond * early)
+                : double.PositiveInfinity;
+            var layerWidths = GradedWidths(stack.Layers[layer].ThicknessMeters, counts[layer], options, edge);
             widths.AddRange(layerWidths);
             owners.AddRange(Enumerable.Repeat(layer, layerWidths.Length));
         }
@@ -39,13 +42,25 @@ public static class GridBuilder
         return counts;
     }
 
+    /// <summary>Widest edge cell, as a fraction of the diffusion length at <see cref="GridOptions.ResolvedFromSeconds"/>.</summary>
+    public const double EdgeWidthPerDiffusionLength = 0.25;
+
+    /// <summary>
+    /// Steepest grading used to reach that edge width (a bound that keeps the grading smooth; common practice, no
+    /// source).
+    /// </summary>
+    public const double SteepestGradingRatio = 1.3;
+
     /// <summary>
     /// Widths of <paramref name="cellCount"/> cells over a thickness, symmetric, smallest at both edges, neighbours
     /// in the grading ratio (reduced if needed so the widest cell is at most the maximum width ratio times the
-    /// narrowest). A smooth geometric grading keeps the cell-centred scheme second-order accurate.
+    /// narrowest; raised, up to <see cref="SteepestGradingRatio"/>, when the edge cells would be wider than
+    /// <paramref name="edgeWidthMeters"/>). A smooth geometric grading keeps the cell-centred scheme second-order
+    /// accurate.
     /// </summary>
-    public static double[] GradedWidths(double thicknessMeters, int cellCount, GridOptions options)
+    public static double[] GradedWidths(double thicknessMeters, int cellCount, GridOptions options, double edgeWidthMeters = double.PositiveInfinity)
     {
+        ArgumentNullException.ThrowIfNull(options);
         var half = (cellCount + 1) / 2;
         var ratio = options.GradingRatio;
         if (half > 1)
@@ -53,6 +68,35 @@ public static class GridBuilder
             ratio = Math.Min(ratio, Math.Pow(options.MaximumWidthRatio, 1.0 / (half - 1)));
         }
 
+        if (half > 1 && EdgeWidth(thicknessMeters, cellCount, ratio) > edgeWidthMeters)
+        {
+            // The edge width falls as the ratio grows; bisect for the ratio that meets it, or take the steepest.
+            var low = ratio;
+            var high = Math.Max(ratio, SteepestGradingRatio);
+            if (EdgeWidth(thicknessMeters, cellCount, high) > edgeWidthMeters)
+            {
+                low = high;
+            }
+
+            for (var i = 0; i < 50 && high - low > 1e-6; i++)
+            {
+                var middle = 0.5 * (low + high);
+                (low, high) = EdgeWidth(thicknessMeters, cellCount, middle) > edgeWidthMeters ? (middle, high) : (low, middle);
+            }
+
+            ratio = high;
+        }
+
+        var relative = RelativeWidths(cellCount, ratio);
+        var scale = thicknessMeters / relative.Sum();
+        return relative.Select(width => width * scale).ToArray();
+    }
+
+    private static double EdgeWidth(double thicknessMeters, int cellCount, double ratio)
+        => thicknessMeters / RelativeWidths(cellCount, ratio).Sum();
+
+    private static double[] RelativeWidths(int cellCount, double ratio)
+    {
         var relative = new double[cellCount];
         for (var i = 0; i < cellCount; i++)
         {
@@ -60,7 +104,6 @@ public static class GridBuilder
             relative[i] = Math.Pow(ratio, fromNearestEdge);
         }
 
-        var scale = thicknessMeters / relative.Sum();
-        return relative.Select(width => width * scale).ToArray();
+        return relative;
     }
 }

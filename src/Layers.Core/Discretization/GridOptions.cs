@@ -18,6 +18,16 @@ public sealed record GridOptions
     /// <summary>Largest allowed ratio between the widest and the narrowest cell of one layer. Default 20.</summary>
     public double MaximumWidthRatio { get; init; } = 20;
 
+    /// <summary>
+    /// The earliest time whose profiles the mesh must resolve at the edges of every layer, s, or null (default) for
+    /// the plain grading. When set, the cells at both edges of a layer are made no wider than
+    /// <see cref="GridBuilder.EdgeWidthPerDiffusionLength"/> times the diffusion length sqrt(D t) of that layer at this
+    /// time, by raising the grading ratio up to <see cref="GridBuilder.SteepestGradingRatio"/> (the width-ratio cap
+    /// then does not apply): a slow layer next to a fast one, or a layer with a large partition coefficient that takes
+    /// up much from its neighbour, gets its cells where its steep early profile lies.
+    /// </summary>
+    public double? ResolvedFromSeconds { get; init; }
+
     /// <summary>Lists every setting outside its admissible range, as (setting, message) pairs.</summary>
     public IEnumerable<(string Setting, string Message)> Problems()
     {

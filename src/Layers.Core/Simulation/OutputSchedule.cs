@@ -60,5 +60,19 @@ public static class OutputSchedule
 
     /// <summary>True when <paramref name="time"/> equals one of the report times to 1e-9 relative.</summary>
     public static bool IsReportTime(SimulationCase simulation, double time)
-        => simulation.ReportTimesSeconds.Any(report => Math.Abs(report - time) <= 1e-9 * report);
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+
+        // Asked at every output: a plain loop, no closure or enumerator to allocate.
+        var reports = simulation.ReportTimesSeconds;
+        for (var i = 0; i < reports.Count; i++)
+        {
+            if (Math.Abs(reports[i] - time) <= 1e-9 * reports[i])
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
 }

@@ -22,7 +22,12 @@ internal sealed class SamplingEvents : IStateEvents
                 _sides[(int)side] = new Sampled(compartment, sampling, system.CompartmentNode(side, simulation));
             }
         }
+
+        TimesSeconds = _sides.Where(sampled => sampled is not null).SelectMany(sampled => sampled!.Sampling.TimesSeconds).Order().ToArray();
     }
+
+    /// <inheritdoc />
+    public IReadOnlyList<double> TimesSeconds { get; }
 
     /// <summary>True when some compartment is sampled.</summary>
     public bool Any => _sides[0] is not null || _sides[1] is not null;

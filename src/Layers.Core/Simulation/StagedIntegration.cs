@@ -90,6 +90,8 @@ public static class StagedIntegration
     /// <summary>State events (receptor sampling) at times of the whole run, applied inside one stage.</summary>
     private sealed class ShiftedEvents(IStateEvents inner, double offsetSeconds) : IStateEvents
     {
+        public IReadOnlyList<double> TimesSeconds { get; } = inner.TimesSeconds.Select(time => time - offsetSeconds).ToArray();
+
         public void Apply(double timeSeconds, Span<double> state) => inner.Apply(timeSeconds + offsetSeconds, state);
     }
 
@@ -112,6 +114,7 @@ public static class StagedIntegration
         private readonly double[] _end = new double[nodeCount];
         private readonly double[]? _own = stage.ToStage is null ? null : new double[nodeCount];
         private bool _reachedEnd;
+        private int _nextRequested;
 
         public double[]? StateAtEnd => _reachedEnd ? _end : null;
 
@@ -127,7 +130,7 @@ public static class StagedIntegration
             }
 
             var time = timeSeconds + _offsetSeconds;
-            if (timeSeconds == 0 || requested.Any(wanted => Math.Abs(wanted - time) <= 1e-12 * Math.Max(wanted, 1)))
+            if (timeSeconds == 0 || IsRequested(time))
             {
                 inner.OnOutput(time, Own(state), Shift(bathInflow));
             }
@@ -146,6 +149,20 @@ public static class StagedIntegration
                 BathsAtEnd = Shift(bathInflow);
                 _reachedEnd = true;
             }
+        }
+
+        /// <summary>
+        /// Whether the run asked for this time. Outputs arrive in ascending order, so one index walks the ascending
+        /// requested times once over the stage: O(1) per output and no allocation.
+        /// </summary>
+        private bool IsRequested(double time)
+        {
+            while (_nextRequested < requested.Count && requested[_nextRequested] < time - (1e-12 * Math.Max(requested[_nextRequested], 1)))
+            {
+                _nextRequested++;
+            }
+
+            return _nextRequested < requested.Count && Math.Abs(requested[_nextRequested] - time) <= 1e-12 * Math.Max(requested[_nextRequested], 1);
         }
 
         private BathTotals Shift(BathTotals stageTotals)

@@ -3,9 +3,12 @@ namespace Layers.Core.TimeStepping;
 /// <summary>Receives the solution as the time loop advances. Implementations copy what they keep.</summary>
 public interface ITimeLoopObserver
 {
-    /// <summary>Called at t = 0 and at every output time, which the loop hits exactly.</summary>
+    /// <summary>
+    /// Called at t = 0 and at every output time, in order. The state is exact where the loop lands (the end, the times
+    /// of state events) and interpolated within the accepted step elsewhere (<see cref="TimeLoopPlan"/>).
+    /// </summary>
     /// <param name="timeSeconds">The output time.</param>
-    /// <param name="state">u at every node.</param>
+    /// <param name="state">u at every node; valid only during the call.</param>
     /// <param name="bathInflow">Mass per area that has entered the stack from each bath since t = 0, kg/m2.</param>
     void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow);
 

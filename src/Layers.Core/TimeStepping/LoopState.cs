@@ -17,7 +17,14 @@ internal sealed class LoopState
 
     public double[] Current => _current;
 
+    /// <summary>The candidate of the next step; after <see cref="Accept"/>, the state at the start of the step just taken.</summary>
     public double[] Candidate => _candidate;
+
+    /// <summary>Time at the start of the step just accepted.</summary>
+    public double PreviousTime { get; private set; }
+
+    /// <summary>Bath totals at the start of the step just accepted.</summary>
+    public BathTotals PreviousBaths { get; private set; }
 
     public double Scale { get; }
 
@@ -33,6 +40,8 @@ internal sealed class LoopState
     public void Accept(double newTime, double step, StepTrial trial)
     {
         (_current, _candidate) = (_candidate, _current);
+        PreviousTime = Time;
+        PreviousBaths = Baths;
         Time = newTime;
         Baths = new BathTotals(
             Baths.LeftPerArea + trial.LeftBathInflowPerArea,

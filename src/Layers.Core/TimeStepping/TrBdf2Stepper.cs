@@ -20,7 +20,8 @@ namespace Layers.Core.TimeStepping;
 /// </remarks>
 internal sealed class TrBdf2Stepper
 {
-    private static readonly double Gamma = 2 - Math.Sqrt(2);
+    /// <summary>Where the trapezoidal stage ends, as a fraction of the step: gamma = 2 - sqrt(2).</summary>
+    public static readonly double Gamma = 2 - Math.Sqrt(2);
     private static readonly double StageWeight = Gamma / 2;
     private static readonly double BdfWeightOfStage = 1 / (Gamma * (2 - Gamma));
     private static readonly double BdfWeightOfStart = (1 - Gamma) * (1 - Gamma) / (Gamma * (2 - Gamma));
@@ -30,12 +31,17 @@ internal sealed class TrBdf2Stepper
     private readonly IStageSolver _solver;
     private readonly double[] _stage;
     private readonly double[] _work;
-    private readonly double[] _dissolvedAtStart;
     private readonly double[] _dissolvedAtStage;
-    private readonly double[] _dissolvedAtEnd;
-    private readonly double[] _rateAtStart;
     private readonly double[] _rateAtStage;
-    private readonly double[] _rateAtEnd;
+    private double[] _dissolvedAtStart;
+    private double[] _dissolvedAtEnd;
+    private double[] _rateAtStart;
+    private double[] _rateAtEnd;
+
+    // The arrays whose dissolved values and rates s - A u are held: a step that starts from the previous candidate
+    // (it was accepted) or from the previous start (the step was rejected) reuses them instead of recomputing them.
+    private double[]? _rateAtStartOf;
+    private double[]? _rateAtEndOf;
 
     /// <summary>
     /// A stepper for the system: with the linear stage solve when no layer has a solubility, else with the capped one,
@@ -56,20 +62,46 @@ internal sealed class TrBdf2Stepper
         _rateAtEnd = new double[n];
     }
 
+    /// <summary>
+    /// Tells the stepper that the caller changed a state array between steps (an event), so the rates it remembers
+    /// for its arrays must be recomputed.
+    /// </summary>
+    public void StateChanged()
+    {
+        _rateAtStartOf = null;
+        _rateAtEndOf = null;
+    }
+
+    /// <summary>w at t + gamma h of the last step tried (the end of its trapezoidal stage).</summary>
+    public ReadOnlySpan<double> Stage => _stage;
+
     /// <summary>Tries a step of size h from w; writes the candidate into <paramref name="next"/>.</summary>
     /// <param name="start">State at the start of the step.</param>
     /// <param name="stepSeconds">Step size h.</param>
     /// <param name="next">Candidate state at t + h.</param>
     /// <param name="weights">Per-node tolerance scale used to normalise the error.</param>
     /// <returns>The error and bath exchange of the step; an infinite error when a stage solve did not converge.</returns>
-    public StepTrial Try(ReadOnlySpan<double> start, double stepSeconds, Span<double> next, ErrorWeights weights)
+    public StepTrial Try(double[] start, double stepSeconds, double[] next, ErrorWeights weights)
     {
         var capacity = _system.Capacity;
         var n = capacity.Length;
         var c = StageWeight * stepSeconds;
         _solver.Prepare(c);
-        _solver.Dissolve(start, _dissolvedAtStart);
-        _system.Residual(_dissolvedAtStart, _rateAtStart);
+        if (ReferenceEquals(start, _rateAtEndOf))
+        {
+            (_rateAtStart, _rateAtEnd) = (_rateAtEnd, _rateAtStart);
+            (_dissolvedAtStart, _dissolvedAtEnd) = (_dissolvedAtEnd, _dissolvedAtStart);
+            _rateAtStartOf = start;
+        }
+        else if (!ReferenceEquals(start, _rateAtStartOf))
+        {
+            _solver.Dissolve(start, _dissolvedAtStart);
+            _system.Residual(_dissolvedAtStart, _rateAtStart);
+            _rateAtStartOf = start;
+        }
+
+        // The end arrays are overwritten below; until they hold this step's end, they belong to no state.
+        _rateAtEndOf = null;
 
         // Trapezoidal stage: Cap w_g + c A u_g = Cap w_n + c (s - A u_n) + c s.
         for (var i = 0; i < n; i++)
@@ -100,12 +132,12 @@ internal sealed class TrBdf2Stepper
         }
 
         _system.Residual(_dissolvedAtEnd, _rateAtEnd);
+        _rateAtEndOf = next;
 
         var error = FilteredError(start, next, stepSeconds, weights);
-        return new StepTrial(
-            error,
-            BathInflow(_system.LeftBath, _dissolvedAtStart[0], _dissolvedAtStage[0], _dissolvedAtEnd[0], c),
-            BathInflow(_system.RightBath, _dissolvedAtStart[n - 1], _dissolvedAtStage[n - 1], _dissolvedAtEnd[n - 1], c));
+        var (leftToStage, left) = BathInflow(_system.LeftBath, _dissolvedAtStart[0], _dissolvedAtStage[0], _dissolvedAtEnd[0], c);
+        var (rightToStage, right) = BathInflow(_system.RightBath, _dissolvedAtStart[n - 1], _dissolvedAtStage[n - 1], _dissolvedAtEnd[n - 1], c);
+        return new StepTrial(error, left, right, new BathTotals(leftToStage, rightToStage));
     }
 
     private double FilteredError(ReadOnlySpan<double> start, ReadOnlySpan<double> next, double h, ErrorWeights weights)
@@ -120,14 +152,22 @@ internal sealed class TrBdf2Stepper
         }
 
         _solver.Filter(_work);
+
+        // The largest |error| / tolerance, found without a division per node: a division only where a new largest
+        // ratio appears.
         var worst = 0.0;
-        for (var i = 0; i < n; i++)
+        var absolute = weights.Absolute;
+        var relative = weights.Relative;
+        ReadOnlySpan<double> error = _work;
+        var before = start[..error.Length];
+        var after = next[..error.Length];
+        for (var i = 0; i < error.Length; i++)
         {
-            var tolerance = weights.Absolute + (weights.Relative * Math.Max(Math.Abs(start[i]), Math.Abs(next[i])));
-            var ratio = Math.Abs(_work[i]) / tolerance;
-            if (!(ratio <= worst))
+            var size = Math.Abs(error[i]);
+            var tolerance = absolute + (relative * Math.Max(Math.Abs(before[i]), Math.Abs(after[i])));
+            if (!(size <= worst * tolerance))
             {
-                worst = ratio;
+                worst = size / tolerance;
             }
         }
 
@@ -142,15 +182,19 @@ internal sealed class TrBdf2Stepper
         rightHandSide[^1] += c * right.Conductance * right.BathValue;
     }
 
-    private static double BathInflow(BathCoupling bath, double start, double stage, double end, double c)
+    /// <summary>
+    /// Mass per area from a bath up to the stage (the trapezoidal quadrature, which is what the trapezoidal stage
+    /// adds to the stored mass) and over the whole step (the BDF2 quadrature).
+    /// </summary>
+    private static (double ToStage, double Step) BathInflow(BathCoupling bath, double start, double stage, double end, double c)
     {
         if (!bath.Exists)
         {
-            return 0;
+            return (0, 0);
         }
 
         var trapezoidal = c * (bath.InflowRate(start) + bath.InflowRate(stage));
-        return (BdfWeightOfStage * trapezoidal) + (c * bath.InflowRate(end));
+        return (trapezoidal, (BdfWeightOfStage * trapezoidal) + (c * bath.InflowRate(end)));
     }
 }
 
@@ -158,13 +202,15 @@ internal sealed class TrBdf2Stepper
 /// <param name="NormalisedError">Largest local error divided by its tolerance; NaN if the step produced NaN.</param>
 /// <param name="LeftBathInflowPerArea">Mass per area that entered the stack from a left bath over the step, kg/m2.</param>
 /// <param name="RightBathInflowPerArea">Mass per area that entered the stack from a right bath over the step, kg/m2.</param>
+/// <param name="InflowToStage">Mass per area from each bath between the start of the step and its stage, kg/m2.</param>
 internal readonly record struct StepTrial(
     double NormalisedError,
     double LeftBathInflowPerArea,
-    double RightBathInflowPerArea)
+    double RightBathInflowPerArea,
+    BathTotals InflowToStage)
 {
     /// <summary>A stage solve did not converge: reject the step and retry it smaller.</summary>
-    public static StepTrial NotConverged => new(double.PositiveInfinity, 0, 0);
+    public static StepTrial NotConverged => new(double.PositiveInfinity, 0, 0, default);
 }
 
 /// <summary>Per-node tolerance: |error| must stay below Absolute + Relative |u|.</summary>

@@ -5,8 +5,9 @@ namespace Layers.Core.TimeStepping;
 
 /// <summary>
 /// The time loop: tries TR-BDF2 steps, lets <see cref="StepSizeController"/> accept or resize them, rejects steps
-/// that would make a value negative beyond round-off, shortens steps to land exactly on output times, and notifies
-/// the observer. Work per step is O(nodes); nothing is allocated inside the loop.
+/// that would make a value negative beyond round-off, shortens steps to land exactly on the end and on the times of
+/// state events, interpolates the outputs that fall inside a step, and notifies the observer. Work per step is
+/// O(nodes); nothing is allocated inside the loop.
 /// </summary>
 public sealed class TransientSolver
 {
@@ -30,11 +31,11 @@ public sealed class TransientSolver
         CancellationToken cancellation = default)
         => Run(initialState, plan, observer, null, cancellation);
 
-    /// <summary>Integrates from u(0) according to the plan, with instant changes of the state at output times.</summary>
+    /// <summary>Integrates from u(0) according to the plan, with instant changes of the state at given times.</summary>
     /// <param name="initialState">u(0) at every node.</param>
     /// <param name="plan">Output times, end and horizon.</param>
     /// <param name="observer">Receives the state at outputs and steps.</param>
-    /// <param name="events">Changes of the state applied right after the output at each output time, or null.</param>
+    /// <param name="events">Changes of the state, applied right after any output at their times, or null.</param>
     /// <param name="cancellation">Stops the loop early.</param>
     public SolverStatistics Run(
         ReadOnlySpan<double> initialState,
@@ -46,25 +47,33 @@ public sealed class TransientSolver
         var clock = Stopwatch.StartNew();
         var loop = new LoopState(_system.NodeCount, initialState, ToleranceScale(initialState));
         var stepper = new TrBdf2Stepper(_system);
-        var weights = new ErrorWeights(
-            _options.RelativeTolerance * _options.AbsoluteToleranceScale * loop.Scale,
-            _options.RelativeTolerance);
+        var interpolant = new StepInterpolant(_system.NodeCount);
+        var landings = LandingTimes(plan, events);
+        var weights = Weights(_options.RelativeTolerance, loop.Scale);
+
+        // Past the end only the times to approach the final state are sought; they are read to a few digits, so the
+        // steps there may be looser (and grow faster) than those that make the reported profiles and amounts.
+        var weightsAfterEnd = Weights(Math.Max(_options.RelativeTolerance, _options.RelativeToleranceAfterEnd), loop.Scale);
         observer.OnOutput(0, loop.Current, default);
 
         var outputIndex = 0;
+        var landingIndex = 0;
         var step = plan.InitialStepSeconds;
         var reason = StopReason.Completed;
         while (true)
         {
-            var target = outputIndex < plan.OutputTimesSeconds.Count ? plan.OutputTimesSeconds[outputIndex] : plan.EndSeconds;
-            if (loop.Time >= plan.EndSeconds && outputIndex >= plan.OutputTimesSeconds.Count)
+            double target;
+            if (landingIndex < landings.Length)
             {
-                if (!observer.WantsMoreTime || loop.Time >= plan.HorizonSeconds)
-                {
-                    break;
-                }
-
+                target = landings[landingIndex];
+            }
+            else if (observer.WantsMoreTime && loop.Time < plan.HorizonSeconds)
+            {
                 target = plan.HorizonSeconds;
+            }
+            else
+            {
+                break;
             }
 
             if (cancellation.IsCancellationRequested)
@@ -81,7 +90,7 @@ public sealed class TransientSolver
 
             var landsOnTarget = loop.Time + step >= target * (1 - 1e-12);
             var tried = landsOnTarget ? target - loop.Time : step;
-            var trial = stepper.Try(loop.Current, tried, loop.Candidate, weights);
+            var trial = stepper.Try(loop.Current, tried, loop.Candidate, loop.Time >= plan.EndSeconds ? weightsAfterEnd : weights);
             var error = NegativeBeyondRoundOff(loop.Candidate, loop.Scale) ? double.PositiveInfinity : trial.NormalisedError;
             var (accept, proposal) = _controller.Decide(tried, error);
             if (!accept)
@@ -99,16 +108,75 @@ public sealed class TransientSolver
 
             loop.Accept(landsOnTarget ? target : loop.Time + tried, tried, trial);
             step = landsOnTarget ? Math.Max(proposal, step) : proposal;
+            outputIndex = ReportInside(plan.OutputTimesSeconds, outputIndex, loop, stepper, trial, interpolant, observer);
             observer.OnStep(loop.Time, loop.Current, loop.Baths);
-            if (landsOnTarget && outputIndex < plan.OutputTimesSeconds.Count)
+            if (outputIndex < plan.OutputTimesSeconds.Count && IsAt(plan.OutputTimesSeconds[outputIndex], loop.Time))
             {
                 observer.OnOutput(loop.Time, loop.Current, loop.Baths);
-                events?.Apply(loop.Time, loop.Current);
                 outputIndex++;
+            }
+
+            if (landsOnTarget && landingIndex < landings.Length)
+            {
+                if (events is not null)
+                {
+                    events.Apply(loop.Time, loop.Current);
+                    stepper.StateChanged();
+                }
+
+                landingIndex++;
             }
         }
 
         return loop.Statistics(reason, clock.Elapsed.TotalSeconds);
+    }
+
+    private ErrorWeights Weights(double relativeTolerance, double scale)
+        => new(relativeTolerance * _options.AbsoluteToleranceScale * scale, relativeTolerance);
+
+    /// <summary>The times the loop must hit exactly: those of the state events before the end, then the end.</summary>
+    private static double[] LandingTimes(TimeLoopPlan plan, IStateEvents? events)
+    {
+        var times = new List<double>();
+        foreach (var time in events?.TimesSeconds ?? [])
+        {
+            if (time > 0 && time < plan.EndSeconds * (1 - 1e-12) && (times.Count == 0 || time > times[^1] * (1 + 1e-12)))
+            {
+                times.Add(time);
+            }
+        }
+
+        times.Add(plan.EndSeconds);
+        return [.. times];
+    }
+
+    private static bool IsAt(double wanted, double time) => Math.Abs(wanted - time) <= 1e-12 * Math.Max(wanted, time);
+
+    /// <summary>Reports the outputs that fall strictly inside the step just accepted, interpolated; returns the next index.</summary>
+    private static int ReportInside(
+        IReadOnlyList<double> outputs,
+        int index,
+        LoopState loop,
+        TrBdf2Stepper stepper,
+        StepTrial trial,
+        StepInterpolant interpolant,
+        ITimeLoopObserver observer)
+    {
+        var start = loop.PreviousTime;
+        var length = loop.Time - start;
+        while (index < outputs.Count && outputs[index] < loop.Time && !IsAt(outputs[index], loop.Time))
+        {
+            var time = outputs[index];
+            var stageBaths = new BathTotals(
+                loop.PreviousBaths.LeftPerArea + trial.InflowToStage.LeftPerArea,
+                loop.PreviousBaths.RightPerArea + trial.InflowToStage.RightPerArea);
+            var baths = interpolant.At(
+                (time - start) / length, loop.Candidate, stepper.Stage, loop.Current, loop.PreviousBaths, stageBaths, loop.Baths);
+            observer.OnOutput(time, interpolant.State, baths);
+            index++;
+        }
+
+        return index;
     }
 
     private double ToleranceScale(ReadOnlySpan<double> initialState)

@@ -29,17 +29,24 @@ internal sealed class TridiagonalFactors
     /// <summary>Solves with the rows set; b and x may be the same span.</summary>
     public void Solve(ReadOnlySpan<double> rightHandSide, Span<double> solution)
     {
-        var last = _inversePivot.Length - 1;
+        // Local spans of one length let the JIT drop the bounds checks; the recurrence is the critical path.
+        var count = _inversePivot.Length;
+        ReadOnlySpan<double> lower = _lower.AsSpan(0, count);
+        ReadOnlySpan<double> inversePivot = _inversePivot.AsSpan(0, count);
+        ReadOnlySpan<double> upperOverPivot = _upperOverPivot.AsSpan(0, count);
+        var right = rightHandSide[..count];
+        var x = solution[..count];
         var previous = 0.0;
-        for (var n = 0; n <= last; n++)
+        for (var n = 0; n < count; n++)
         {
-            previous = (rightHandSide[n] - (_lower[n] * previous)) * _inversePivot[n];
-            solution[n] = previous;
+            previous = (right[n] - (lower[n] * previous)) * inversePivot[n];
+            x[n] = previous;
         }
 
-        for (var n = last - 1; n >= 0; n--)
+        for (var n = count - 2; n >= 0; n--)
         {
-            solution[n] -= _upperOverPivot[n] * solution[n + 1];
+            previous = x[n] - (upperOverPivot[n] * previous);
+            x[n] = previous;
         }
     }
 }

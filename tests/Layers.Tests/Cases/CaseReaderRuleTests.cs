@@ -106,7 +106,7 @@ public sealed class CaseReaderRuleTests
         { "extra output time beyond the duration", "$.extraOutputTimes", """["6 h", "11 d"]""", "$.extraOutputTimes[1]", "must be <= duration (10 d); got '11 d'" },
         { "extra output time negative", "$.extraOutputTimes", """["-6 h"]""", "$.extraOutputTimes[0]", "must be > 0; got '-6 h'" },
 
-        // Numerics ranges: cells 8 to 200000, minimumCellsPerLayer 4 to 10000, relativeTolerance 1e-10 to 1e-2.
+        // Numerics ranges: cells 8 to 200000, minimumCellsPerLayer 4 to 10000, relativeTolerance 1e-10 to 1e-2, accuracy 1e-6 to 1e-2.
         { "cells below range", "$.numerics.cells", "7", "$.numerics.cells", "must be from 8 to 200000; got 7" },
         { "cells above range", "$.numerics.cells", "200001", "$.numerics.cells", "must be from 8 to 200000; got 200001" },
         { "cells not whole", "$.numerics.cells", "240.5", "$.numerics.cells", "expected a whole number; found the number 240.5" },
@@ -114,6 +114,8 @@ public sealed class CaseReaderRuleTests
         { "minimum cells above range", "$.numerics.minimumCellsPerLayer", "10001", "$.numerics.minimumCellsPerLayer", "must be from 4 to 10000; got 10001" },
         { "tolerance below range", "$.numerics.relativeTolerance", "1e-11", "$.numerics.relativeTolerance", "must be from 1e-10 to 1e-2; got " },
         { "tolerance above range", "$.numerics.relativeTolerance", "0.1", "$.numerics.relativeTolerance", "must be from 1e-10 to 1e-2; got 0.1" },
+        { "accuracy below range", "$.numerics.accuracy", "1e-7", "$.numerics.accuracy", "must be from 1e-6 to 1e-2 (a relative accuracy such as 1e-4); got 1E-07" },
+        { "accuracy above range", "$.numerics.accuracy", "0.05", "$.numerics.accuracy", "must be from 1e-6 to 1e-2 (a relative accuracy such as 1e-4); got 0.05" },
 
         // Partition basis.
         { "unknown partition basis", "$.partitionBasis", "\"weight\"", "$.partitionBasis", "expected \"volume\" or \"mass\"; got \"weight\"" },

@@ -241,6 +241,21 @@ public sealed class CaseReaderTests
         Assert.Equal(1e-7, simulation.Solver.RelativeTolerance);
     }
 
+    [Fact]
+    public void An_accuracy_target_picks_the_mesh_and_tolerance_and_keys_beside_it_override_them()
+    {
+        // docs/case-format.md, $.numerics.accuracy: 320 cells at 1e-4, tolerance a quarter of the target, edges resolved at
+        // 1 % of the duration; an explicit key wins.
+        var chosen = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4 }""")));
+        var overridden = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4, "cells": 50 }""")));
+
+        Assert.Equal(320, chosen.Grid.TotalCells);
+        Assert.Equal(2.5e-5, chosen.Solver.RelativeTolerance, 15);
+        Tolerance.Relative(0.01 * chosen.DurationSeconds, chosen.Grid.ResolvedFromSeconds!.Value, 1e-12, "resolved from");
+        Assert.Equal(50, overridden.Grid.TotalCells);
+        Assert.Equal(2.5e-5, overridden.Solver.RelativeTolerance, 15);
+    }
+
     [Theory]
     // docs/case-format.md: the documented ranges are inclusive at both ends.
     [InlineData("cells", "8")]
@@ -249,6 +264,8 @@ public sealed class CaseReaderTests
     [InlineData("minimumCellsPerLayer", "10000")]
     [InlineData("relativeTolerance", "1e-10")]
     [InlineData("relativeTolerance", "1e-2")]
+    [InlineData("accuracy", "1e-6")]
+    [InlineData("accuracy", "1e-2")]
     public void Numerics_at_the_ends_of_their_documented_ranges_are_accepted(string key, string value)
     {
         ReadValid(CaseJson.MinimalWith(($"$.numerics.{key}", value)));

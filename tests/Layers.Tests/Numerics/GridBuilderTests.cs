@@ -51,4 +51,25 @@ public sealed class GridBuilderTests
 
         Assert.True(widths.Max() / widths.Min() <= 20 + 1e-9);
     }
+
+    [Fact]
+    public void With_an_early_time_to_resolve_the_edge_cells_are_narrower_than_a_quarter_of_the_diffusion_length()
+    {
+        // docs/numerics.md, Mesh: edge cells at most a quarter of sqrt(D t) of their own layer, reached by a steeper
+        // but still smooth grading (neighbours differ by at most the steepest ratio).
+        var stack = new LayerStack([Cases.Layer("slow", 50e-6, 1e-16, k: 1000), Cases.Layer("fast", 30e-6, 1e-12)]);
+        var grid = GridBuilder.Build(stack, new GridOptions { TotalCells = 120, ResolvedFromSeconds = 7200 });
+
+        for (var layer = 0; layer < stack.Count; layer++)
+        {
+            var widths = grid.WidthsMeters.Slice(grid.FirstCell(layer), grid.CellsIn(layer)).ToArray();
+            var limit = 0.25 * Math.Sqrt(stack.Layers[layer].DiffusivitySquareMetersPerSecond * 7200);
+            Assert.True(widths[0] <= limit * (1 + 1e-9), $"layer {layer}: edge {widths[0]} > {limit}");
+            Assert.Equal(widths[0], widths[^1], 15);
+            for (var i = 1; i < widths.Length; i++)
+            {
+                Assert.True(Math.Max(widths[i] / widths[i - 1], widths[i - 1] / widths[i]) <= GridBuilder.SteepestGradingRatio + 1e-9);
+            }
+        }
+    }
 }

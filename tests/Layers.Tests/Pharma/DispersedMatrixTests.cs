@@ -98,7 +98,7 @@ public sealed class DispersedMatrixTests
 
         Assert.True(result.WorstMassBalanceError < 1e-10, $"mass balance: {result.WorstMassBalanceError:G3}");
         var last = result.TimeSeries[^1];
-        Tolerance.Relative(20 * 100e-6, last.LayerMassPerArea.Sum(), 1e-12, "total mass");
+        Tolerance.Relative(20 * 100e-6, last.LayerMassPerArea.Sum(), 1e-10, "total mass (round-off over the steps, as the mass balance above)");
         var saturated = 2.0 / 10;
         Tolerance.Relative(saturated * 200e-6, last.LayerMassPerArea[1], 1e-6, "adhesive at u = Cs/K");
         var undissolved = Assert.Single(result.DispersedLayers).UndissolvedAtEndPerArea;
