@@ -130,8 +130,8 @@ internal static class FoodContactReader
             layer => input.Layers.TryGetValue(layer.Name, out var entry) && entry.Source is { } estimated
                 ? estimated
                 : input.Layers.TryGetValue(layer.Name, out var arrhenius) && arrhenius.Arrhenius is { } given
-                    ? given with { ReferenceDiffusivity = layer.DiffusivitySquareMetersPerSecond }
-                    : (DiffusivitySource)new GivenDiffusivity(layer.DiffusivitySquareMetersPerSecond),
+                    ? given with { ReferenceDiffusivity = layer.DiffusivitySquareMetersPerSecond, Origin = layer.DiffusivityOrigin }
+                    : (DiffusivitySource)new GivenDiffusivity(layer.DiffusivitySquareMetersPerSecond) { Origin = layer.DiffusivityOrigin },
             StringComparer.Ordinal);
         var stages = input.Stages.Select((entry, index) => entry.Stage with { PartitionOverrides = partitions[index] }).ToArray();
         var placed = convention

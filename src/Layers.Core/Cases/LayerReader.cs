@@ -8,7 +8,7 @@ namespace Layers.Core.Cases;
 internal static class LayerReader
 {
     private static readonly string[] Keys =
-        ["name", "thickness", "diffusionCoefficient", "partitionCoefficient", "initialConcentration", "solubility", "density", "pottsGuy"];
+        ["name", "thickness", "diffusionCoefficient", "partitionCoefficient", "initialConcentration", "solubility", "density", "pottsGuy", "diffusionCoefficientOrigin"];
 
     public static List<Layer> Read(JsonFields root, ReadContext context)
     {
@@ -89,7 +89,20 @@ internal static class LayerReader
             return null;
         }
 
-        return new Layer(name, thickness.Value, diffusivity.Value, k.Value, concentration.Value, density);
+        var origin = fields.Text("diffusionCoefficientOrigin") ?? DiffusivityOrigins.Given;
+        if (!DiffusivityOrigins.All.Contains(origin))
+        {
+            fields.Error("diffusionCoefficientOrigin", $"expected one of {string.Join(", ", DiffusivityOrigins.All.Select(word => $"\"{word}\""))}; got \"{origin}\"");
+            return null;
+        }
+
+        if (estimated && fields.Has("diffusionCoefficientOrigin"))
+        {
+            fields.Error("diffusionCoefficientOrigin", $"must be left out: $.foodContact.layerDiffusion.{name} estimates D");
+            return null;
+        }
+
+        return new Layer(name, thickness.Value, diffusivity.Value, k.Value, concentration.Value, density) { DiffusivityOrigin = origin };
     }
 
     /// <summary>The optional solubility: null when absent, NaN when given but unusable (the error is recorded).</summary>

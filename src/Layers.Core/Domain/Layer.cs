@@ -46,6 +46,13 @@ public sealed record Layer(
         ? Math.Max(0, InitialConcentrationKgPerCubicMeter - solubility) * ThicknessMeters
         : 0;
 
+    /// <summary>
+    /// Where the case's D comes from, as the case says: <c>given</c> (the default: a value taken from elsewhere),
+    /// <c>measured</c>, or <c>fitted</c> (written by <c>layers fit</c>). Estimated values say so through
+    /// <see cref="Estimate"/> or the food-contact settings instead.
+    /// </summary>
+    public string DiffusivityOrigin { get; init; } = DiffusivityOrigins.Given;
+
     /// <summary>How D and K were estimated (Potts-Guy), or null when the case gave them.</summary>
     public Permeation.SkinEstimate? Estimate { get; init; }
 

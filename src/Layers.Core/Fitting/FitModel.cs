@@ -17,8 +17,25 @@ internal sealed class FitModel(JsonObject root, string casePath, IReadOnlyList<F
 {
     private static readonly JsonSerializerOptions Indented = new() { WriteIndented = true };
 
-    /// <summary>The case document with 10^<paramref name="logValues"/> substituted.</summary>
-    public string Json(IReadOnlyList<double> logValues) => CaseVariation.Apply(root, Substitutions(logValues)).ToJsonString(Indented);
+    /// <summary>
+    /// The case document with 10^<paramref name="logValues"/> substituted, and every layer whose D was estimated
+    /// marked <c>"diffusionCoefficientOrigin": "fitted"</c>, so that its reports say where D came from.
+    /// </summary>
+    public string Json(IReadOnlyList<double> logValues)
+    {
+        var copy = CaseVariation.Apply(root, Substitutions(logValues));
+        foreach (var parameter in parameters)
+        {
+            var steps = parameter.Input.Steps;
+            if (steps.Count == 3 && steps[0] is "layers" && steps[^1] is "diffusionCoefficient"
+                && JsonPathSteps.Find(copy, steps.Take(2).ToArray()) is JsonObject layer)
+            {
+                layer["diffusionCoefficientOrigin"] = DiffusivityOrigins.Fitted;
+            }
+        }
+
+        return copy.ToJsonString(Indented);
+    }
 
     /// <summary>The case at these values, with the measured times as extra output times; or its errors.</summary>
     public CaseReadResult Read(IReadOnlyList<double> logValues)

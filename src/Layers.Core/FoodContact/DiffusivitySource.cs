@@ -33,7 +33,10 @@ public sealed record GivenDiffusivity(double DiffusivitySquareMetersPerSecond) :
     public override double At(double temperatureKelvin) => DiffusivitySquareMetersPerSecond;
 
     /// <inheritdoc />
-    public override string Describe() => "given; the same at every temperature";
+    public override string Describe() => $"{Origin}; the same at every temperature";
+
+    /// <summary>What the case says of the value: <c>given</c>, <c>measured</c> or <c>fitted</c>.</summary>
+    public string Origin { get; init; } = Domain.DiffusivityOrigins.Given;
 }
 
 /// <summary>A diffusion coefficient given at a reference temperature with an activation energy.</summary>
@@ -53,7 +56,10 @@ public sealed record ArrheniusDiffusivity(
     /// <inheritdoc />
     public override string Describe() => string.Create(
         CultureInfo.InvariantCulture,
-        $"given at {ReferenceKelvin - 273.15:0.##} degC, Arrhenius with Ea = {ActivationEnergyJoulesPerMole / 1e3:0.##} kJ/mol");
+        $"{Origin} at {ReferenceKelvin - 273.15:0.##} degC, Arrhenius with Ea = {ActivationEnergyJoulesPerMole / 1e3:0.##} kJ/mol");
+
+    /// <summary>What the case says of the value at the reference temperature: <c>given</c>, <c>measured</c> or <c>fitted</c>.</summary>
+    public string Origin { get; init; } = Domain.DiffusivityOrigins.Given;
 }
 
 /// <summary>The upper-bound estimate of <see cref="UpperBoundDiffusivity"/> for a polymer and a migrant.</summary>

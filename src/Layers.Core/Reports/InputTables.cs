@@ -24,11 +24,26 @@ public static class InputTables
             DisplayFormat.Value(simulation.Display.Concentration.FromSi(layer.InitialConcentrationKgPerCubicMeter)),
             format.Time(layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond),
             DisplayFormat.Value(UnitTable.Get("cm/h").FromSi(1 / layer.ResistanceSecondsPerMeter)),
+            OriginOf(simulation, layer),
         ]).ToArray();
         return new TextTable(
             $"Layers, left to right (K relative to {simulation.ReferenceMedium}, volume basis)",
-            ["layer", $"thickness [{depth}]", "D [cm2/s]", "K [-]", $"initial c [{simulation.Display.Concentration.Symbol}]", "h^2/D", "D K/h [cm/h]"],
+            ["layer", $"thickness [{depth}]", "D [cm2/s]", "K [-]", $"initial c [{simulation.Display.Concentration.Symbol}]", "h^2/D", "D K/h [cm/h]", "D from"],
             rows);
+    }
+
+    /// <summary>
+    /// Where a layer's D comes from, in one word: <c>estimated</c> (Potts-Guy or the upper-bound polymer correlation;
+    /// the details are in the notes and the food-contact tables), else what the case says: <c>given</c>,
+    /// <c>measured</c> or <c>fitted</c>.
+    /// </summary>
+    public static string OriginOf(SimulationCase simulation, Layer layer)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        ArgumentNullException.ThrowIfNull(layer);
+        var estimated = layer.Estimate is not null
+            || simulation.FoodContact?.Diffusivities.GetValueOrDefault(layer.Name) is FoodContact.EstimatedDiffusivity;
+        return estimated ? "estimated" : layer.DiffusivityOrigin;
     }
 
     /// <summary>The two faces, the duration and the report times.</summary>

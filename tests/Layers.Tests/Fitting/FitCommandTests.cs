@@ -26,6 +26,7 @@ public sealed class FitCommandTests
         // The fitted case is a valid case that carries the estimates (the same rules as any case file).
         var fitted = Layers.Core.Cases.CaseReader.ReadFile(Path.Combine(folder, "fitted-case.json"));
         Assert.True(fitted.IsValid, fitted.FormatErrors());
+        Assert.Equal("fitted", fitted.Case!.Stack.Layers[0].DiffusivityOrigin);
 
         // Every key of fit.json is in the table of docs/outputs.md, section "Fit" (common practice of the project).
         var documented = File.ReadAllText(RepoRoot.File("docs", "outputs.md"));

@@ -82,12 +82,25 @@ public sealed class FoodContactReaderTests
     [InlineData("$.foodContact.stages[1].partitionCoefficients", "{ \"skin\": \"5 mg/kg\" }", "$.foodContact.stages[1].partitionCoefficients.skin: expected a number > 0 (a partition coefficient has no unit)")]
     [InlineData("$.foodContact.stages[1].partitionCoefficients", "{ \"skin\": 0 }", "$.foodContact.stages[1].partitionCoefficients.skin: expected a number > 0")]
     [InlineData("$.foodContact.stages[1].partitionCoefficients", "[1000]", "$.foodContact.stages[1].partitionCoefficients: expected an object of layer or face name to partition coefficient")]
+    [InlineData("$.layers[1].diffusionCoefficientOrigin", "\"guessed\"", "$.layers[1].diffusionCoefficientOrigin: expected one of \"given\", \"measured\", \"fitted\"; got \"guessed\"")]
+    [InlineData("$.layers[0].diffusionCoefficientOrigin", "\"measured\"", "$.layers[0].diffusionCoefficientOrigin: must be left out: $.foodContact.layerDiffusion.core estimates D")]
     public void Each_rule_is_reported_at_its_path(string path, string value, string expectedStart)
     {
         var result = CaseJson.Read(CaseJson.With(Film, (path, value)));
 
         Assert.False(result.IsValid);
         Assert.Contains(result.Errors, error => $"{error.JsonPath}: {error.Message}".StartsWith(expectedStart, StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Where_a_given_D_comes_from_is_carried_into_its_description()
+    {
+        var result = CaseJson.Read(CaseJson.With(Film, ("$.layers[1].diffusionCoefficientOrigin", "\"measured\"")));
+
+        Assert.True(result.IsValid, result.FormatErrors());
+        Assert.Equal("measured", result.Case!.Stack.Layers[1].DiffusivityOrigin);
+        Assert.StartsWith("measured;", result.Case.FoodContact!.Diffusivities["skin"].Describe(), StringComparison.Ordinal);
+        Assert.Equal("estimated", Layers.Core.Reports.InputTables.OriginOf(result.Case, result.Case.Stack.Layers[0]));
     }
 
     [Fact]

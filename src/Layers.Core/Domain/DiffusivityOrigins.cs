@@ -1,0 +1,17 @@
+namespace Layers.Core.Domain;
+
+/// <summary>The words a case may use for where a layer's diffusion coefficient comes from.</summary>
+public static class DiffusivityOrigins
+{
+    /// <summary>Taken from elsewhere (a handbook, a colleague, an assumption): the default.</summary>
+    public const string Given = "given";
+
+    /// <summary>Measured for this substance and material.</summary>
+    public const string Measured = "measured";
+
+    /// <summary>Estimated from measurements by <c>layers fit</c>.</summary>
+    public const string Fitted = "fitted";
+
+    /// <summary>All of them, in the order the messages list them.</summary>
+    public static IReadOnlyList<string> All { get; } = [Given, Measured, Fitted];
+}
