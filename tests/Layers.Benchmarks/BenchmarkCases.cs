@@ -1,3 +1,5 @@
+using System.Globalization;
+using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
 
@@ -14,6 +16,27 @@ public static class BenchmarkCases
     {
         var path = Path.Combine(AppContext.BaseDirectory, "cases", name + ".json");
         var read = CaseReader.ReadFile(path);
+        return read.Case ?? throw new InvalidOperationException(read.FormatErrors());
+    }
+
+    /// <summary>
+    /// Reads cases/NAME.json with <c>numerics.accuracy</c> set to <paramref name="accuracy"/> ("default" leaves the
+    /// case as it is), through the case reader, as a user would write it.
+    /// </summary>
+    public static SimulationCase Load(string name, string accuracy)
+    {
+        if (accuracy == "default")
+        {
+            return Load(name);
+        }
+
+        var path = Path.Combine(AppContext.BaseDirectory, "cases", name + ".json");
+        var document = JsonNode.Parse(File.ReadAllText(path))!.AsObject();
+        var numerics = document["numerics"] as JsonObject ?? new JsonObject();
+        document.Remove("numerics");
+        numerics["accuracy"] = double.Parse(accuracy, CultureInfo.InvariantCulture);
+        document["numerics"] = numerics;
+        var read = CaseReader.ReadText(document.ToJsonString(), path);
         return read.Case ?? throw new InvalidOperationException(read.FormatErrors());
     }
 }

@@ -5,7 +5,10 @@ using Layers.Core.Simulation;
 
 namespace Layers.Benchmarks;
 
-/// <summary>One warm solve of each fixed case in cases/, at the case's own settings (defaults), through Simulator.Run.</summary>
+/// <summary>
+/// One warm solve of each fixed case in cases/, through Simulator.Run: at the case's own settings (the defaults) and
+/// at the accuracy settings of <c>numerics.accuracy</c> that issue #8's targets are stated for.
+/// </summary>
 [Config(typeof(SolveConfig))]
 public class SolveBenchmarks
 {
@@ -15,6 +18,10 @@ public class SolveBenchmarks
     [ParamsSource(nameof(CaseNames))]
     public string Case { get; set; } = "laminate";
 
+    /// <summary><c>numerics.accuracy</c> of the run, or "default" for the case as written.</summary>
+    [Params("default", "1e-3", "1e-4")]
+    public string Accuracy { get; set; } = "default";
+
     /// <summary>The cases benchmarked.</summary>
     public static IEnumerable<string> CaseNames => BenchmarkCases.Names;
 
@@ -22,9 +29,9 @@ public class SolveBenchmarks
     [GlobalSetup]
     public void Setup()
     {
-        _case = BenchmarkCases.Load(Case);
+        _case = BenchmarkCases.Load(Case, Accuracy);
         var result = Simulator.Run(_case);
-        Console.WriteLine($"// {Case}: {result.Statistics}");
+        Console.WriteLine($"// {Case} at accuracy {Accuracy}: {result.Statistics}");
     }
 
     /// <summary>Mesh, assemble, integrate and collect results.</summary>
