@@ -56,6 +56,7 @@ public sealed class TransientSolver
         var weightsAfterEnd = Weights(Math.Max(_options.RelativeTolerance, _options.RelativeToleranceAfterEnd), loop.Scale);
         observer.OnOutput(0, loop.Current, default);
 
+        var fastestSeconds = FastestRelaxationSeconds();
         var outputIndex = 0;
         var landingIndex = 0;
         var step = plan.InitialStepSeconds;
@@ -97,7 +98,7 @@ public sealed class TransientSolver
             {
                 loop.Rejected++;
                 step = proposal;
-                if (step < 1e-14 * Math.Max(plan.EndSeconds, loop.Time) || double.IsNaN(trial.NormalisedError))
+                if (step < 1e-14 * Math.Max(loop.Time, fastestSeconds) || double.IsNaN(trial.NormalisedError))
                 {
                     reason = double.IsNaN(trial.NormalisedError) ? StopReason.NonFiniteValues : StopReason.StepSizeUnderflow;
                     break;
@@ -135,6 +136,30 @@ public sealed class TransientSolver
         => new(relativeTolerance * _options.AbsoluteToleranceScale * scale, relativeTolerance);
 
     /// <summary>The times the loop must hit exactly: those of the state events before the end, then the end.</summary>
+    /// <summary>
+    /// The shortest relaxation time of any node, Cap / (sum of its conductances), s. A rejected step is given up only
+    /// when it falls below 1e-14 of the larger of this and the current time: below the current time's round-off the
+    /// clock cannot advance, but at the start a fine mesh at a tight tolerance needs steps far below any fraction of
+    /// the duration to resolve a step change in the initial state.
+    /// </summary>
+    private double FastestRelaxationSeconds()
+    {
+        var fastest = double.PositiveInfinity;
+        var last = _system.NodeCount - 1;
+        for (var n = 0; n <= last; n++)
+        {
+            var toLeft = n > 0 ? _system.Conductance[n - 1] : _system.LeftBath.Conductance;
+            var toRight = n < last ? _system.Conductance[n] : _system.RightBath.Conductance;
+            var outflow = toLeft + toRight;
+            if (outflow > 0)
+            {
+                fastest = Math.Min(fastest, _system.Capacity[n] / outflow);
+            }
+        }
+
+        return double.IsPositiveInfinity(fastest) ? 0 : fastest;
+    }
+
     private static double[] LandingTimes(TimeLoopPlan plan, IStateEvents? events)
     {
         var times = new List<double>();
