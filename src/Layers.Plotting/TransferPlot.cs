@@ -153,9 +153,7 @@ public static class TransferPlot
         Medium medium, double low, double high, UnitDefinition massUnit, DisplayUnits display)
     {
         var compartment = (CompartmentFace)medium.Face;
-        var asFraction = display.MediumMassFraction is not null && compartment.DensityKgPerCubicMeter is not null;
-        var unit = asFraction ? display.MediumMassFraction! : DisplayText.ConcentrationUnit(display);
-        var perVolume = asFraction ? compartment.DensityKgPerCubicMeter!.Value : 1;
+        var (unit, perVolume) = MediumScale(compartment, display);
         double Map(double mass) => unit.FromSi(
             (compartment.InitialConcentrationKgPerCubicMeter + (massUnit.ToSi(mass) / compartment.VolumePerAreaMeters)) / perVolume);
         var axis = PlotFrame.Linear(
@@ -166,6 +164,15 @@ public static class TransferPlot
         axis.MajorGridlineStyle = LineStyle.None;
         return axis;
     }
+
+    /// <summary>
+    /// The unit a compartment's concentration is shown in, and what divides kg/m3 to get there: its density for a mass
+    /// fraction (mg/kg of food) where the display asks for one and the density is known, as the console does; else 1.
+    /// </summary>
+    private static (UnitDefinition Unit, double Divisor) MediumScale(CompartmentFace compartment, DisplayUnits display)
+        => display.MediumMassFraction is { } fraction && compartment.DensityKgPerCubicMeter is { } density
+            ? (fraction, density)
+            : (DisplayText.ConcentrationUnit(display), 1);
 
     private static void AddConcentrationPanel(
         PlotModel model, List<Medium> media, List<StateSample> samples, UnitDefinition timeUnit, UnitDefinition concentrationUnit)
@@ -261,17 +268,20 @@ public static class TransferPlot
         return model;
     }
 
+    private static string Shown(double kgPerCubicMeter, (UnitDefinition Unit, double Divisor) scale)
+        => DisplayText.Quantity(scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor), scale.Unit);
+
     private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options)
     {
-        var (timeUnit, massUnit, concentrationUnit) = units;
+        var massUnit = units.MassPerArea;
         yield return "Mass transferred per contact area into each face medium";
         var end = result.TimeSeries[^1];
         var finals = media.Where(medium => medium.Values.Count > 0).Select(medium =>
         {
             var face = medium.Side == Side.Left ? end.Left : end.Right;
             var amount = DisplayText.Quantity(massUnit.FromSi(medium.Plotted(medium.Values[^1].Transferred)), massUnit);
-            var concentration = medium.Face is CompartmentFace && face is not null
-                ? $" ({DisplayText.Quantity(concentrationUnit.FromSi(face.ConcentrationKgPerCubicMeter), concentrationUnit)})"
+            var concentration = medium.Face is CompartmentFace compartment && face is not null
+                ? $" ({Shown(face.ConcentrationKgPerCubicMeter, MediumScale(compartment, result.Case.Display))})"
                 : string.Empty;
             return $"{(medium.Flipped ? "out of" : "into")} {medium.Name} {amount}{concentration}";
         }).ToList();
