@@ -217,7 +217,7 @@ public static class CaseReader
         {
             if (accuracy is >= AccuracyTarget.Finest and <= AccuracyTarget.Coarsest)
             {
-                (grid, solver) = AccuracyTarget.Settings(accuracy, context.DurationSeconds ?? 0);
+                (grid, solver) = AccuracyTarget.Settings(accuracy);
             }
             else
             {
@@ -226,10 +226,17 @@ public static class CaseReader
             }
         }
 
+        var cells = numerics.Integer("cells");
+        var minimumCells = numerics.Integer("minimumCellsPerLayer");
         grid = grid with
         {
-            TotalCells = numerics.Integer("cells") ?? grid.TotalCells,
-            MinimumCellsPerLayer = numerics.Integer("minimumCellsPerLayer") ?? grid.MinimumCellsPerLayer,
+            TotalCells = cells ?? grid.TotalCells,
+            MinimumCellsPerLayer = minimumCells ?? grid.MinimumCellsPerLayer,
+
+            // A cell count given beside the accuracy asks for the shared count; a minimum per layer applies to either mesh.
+            ByDiffusionLength = cells is null
+                ? grid.ByDiffusionLength is { } mesh && minimumCells is { } minimum ? mesh with { MinimumCellsPerLayer = Math.Max(1, minimum) } : grid.ByDiffusionLength
+                : null,
         };
         solver = solver with { RelativeTolerance = numerics.Number("relativeTolerance") ?? solver.RelativeTolerance };
         foreach (var (setting, message) in grid.Problems().Concat(solver.Problems()))

@@ -9,18 +9,56 @@ namespace Layers.Core.Discretization;
 /// </summary>
 public static class GridBuilder
 {
-    /// <summary>Builds the mesh for a stack.</summary>
+    /// <summary>
+    /// Builds the mesh of a case: by diffusion lengths when its mesh settings ask for it
+    /// (<see cref="GridOptions.ByDiffusionLength"/>, with the earliest report time and the duration of the case and
+    /// small cells only at the edges where something crosses), else by the shared cell count.
+    /// </summary>
+    public static Grid Build(SimulationCase simulation)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        if (simulation.Grid.ByDiffusionLength is not { } mesh)
+        {
+            return Build(simulation.Stack, simulation.Grid);
+        }
+
+        var stack = simulation.Stack;
+        var leftOpen = simulation.Left is not ClosedFace;
+        var rightOpen = simulation.Right is not ClosedFace;
+        var earliestReport = simulation.ReportTimesSeconds.Where(time => time > 0).DefaultIfEmpty(simulation.DurationSeconds).Min();
+        var earliest = DiffusionLengthMesh.EarliestResolvedPerReportTime * earliestReport;
+        var shares = DiffusionLengthMesh.Shares(stack, leftOpen, rightOpen, simulation.DurationSeconds);
+        return Assemble(stack, layer => mesh.Widths(
+            stack.Layers[layer].ThicknessMeters,
+            stack.Layers[layer].DiffusivitySquareMetersPerSecond,
+            shares[layer],
+            earliest,
+            layer > 0 || leftOpen,
+            layer < stack.Count - 1 || rightOpen));
+    }
+
+    /// <summary>Builds the mesh for a stack by the shared cell count of <paramref name="options"/>.</summary>
     public static Grid Build(LayerStack stack, GridOptions options)
     {
+        ArgumentNullException.ThrowIfNull(stack);
+        ArgumentNullException.ThrowIfNull(options);
         var counts = CellsPerLayer(stack, options);
-        var widths = new List<double>();
-        var owners = new List<int>();
-        for (var layer = 0; layer < stack.Count; layer++)
+        return Assemble(stack, layer =>
         {
             var edge = options.ResolvedFromSeconds is { } early
                 ? EdgeWidthPerDiffusionLength * Math.Sqrt(stack.Layers[layer].DiffusivitySquareMetersPerSecond * early)
                 : double.PositiveInfinity;
-            var layerWidths = GradedWidths(stack.Layers[layer].ThicknessMeters, counts[layer], options, edge);
+            return GradedWidths(stack.Layers[layer].ThicknessMeters, counts[layer], options, edge);
+        });
+    }
+
+    private static Grid Assemble(LayerStack stack, Func<int, double[]> widthsOfLayer)
+    {
+        var widths = new List<double>();
+        var owners = new List<int>();
+        for (var layer = 0; layer < stack.Count; layer++)
+        {
+            var layerWidths = widthsOfLayer(layer);
             widths.AddRange(layerWidths);
             owners.AddRange(Enumerable.Repeat(layer, layerWidths.Length));
         }

@@ -28,6 +28,12 @@ public sealed record GridOptions
     /// </summary>
     public double? ResolvedFromSeconds { get; init; }
 
+    /// <summary>
+    /// Cells placed by each layer's diffusion lengths instead of shared out by <see cref="TotalCells"/>, or null (the
+    /// default) for the shared count. See <see cref="DiffusionLengthMesh"/>.
+    /// </summary>
+    public DiffusionLengthMesh? ByDiffusionLength { get; init; }
+
     /// <summary>Lists every setting outside its admissible range, as (setting, message) pairs.</summary>
     public IEnumerable<(string Setting, string Message)> Problems()
     {

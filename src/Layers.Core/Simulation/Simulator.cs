@@ -73,7 +73,7 @@ public static class Simulator
 
     private static (Grid Grid, DiffusionSystem System, double[] Initial, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(SimulationCase simulation)
     {
-        var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
+        var grid = GridBuilder.Build(simulation);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
         var stages = StageSystem.For(simulation, grid);
         var final = FinalStateTarget.ForStages(simulation, system, stages);

@@ -244,16 +244,21 @@ public sealed class CaseReaderTests
     [Fact]
     public void An_accuracy_target_picks_the_mesh_and_tolerance_and_keys_beside_it_override_them()
     {
-        // docs/case-format.md, $.numerics.accuracy: 320 cells at 1e-4, tolerance a quarter of the target, edges resolved at
-        // 1 % of the duration; an explicit key wins.
+        // docs/case-format.md, $.numerics.accuracy: cells by diffusion length, 0.05 of it at 1e-4 (scaling with the
+        // square root of the target), tolerance equal to the target; a cell count beside it asks for the shared count,
+        // a minimum per layer applies to the diffusion-length mesh.
         var chosen = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4 }""")));
-        var overridden = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4, "cells": 50 }""")));
+        var coarser = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-2 }""")));
+        var counted = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4, "cells": 50 }""")));
+        var atLeast = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4, "minimumCellsPerLayer": 9 }""")));
 
-        Assert.Equal(320, chosen.Grid.TotalCells);
-        Assert.Equal(2.5e-5, chosen.Solver.RelativeTolerance, 15);
-        Tolerance.Relative(0.01 * chosen.DurationSeconds, chosen.Grid.ResolvedFromSeconds!.Value, 1e-12, "resolved from");
-        Assert.Equal(50, overridden.Grid.TotalCells);
-        Assert.Equal(2.5e-5, overridden.Solver.RelativeTolerance, 15);
+        Assert.Equal(0.05, chosen.Grid.ByDiffusionLength!.WidthPerDiffusionLength, 15);
+        Assert.Equal(0.5, coarser.Grid.ByDiffusionLength!.WidthPerDiffusionLength, 15);
+        Assert.Equal(1e-4, chosen.Solver.RelativeTolerance, 15);
+        Assert.Null(counted.Grid.ByDiffusionLength);
+        Assert.Equal(50, counted.Grid.TotalCells);
+        Assert.Equal(1e-4, counted.Solver.RelativeTolerance, 15);
+        Assert.Equal(9, atLeast.Grid.ByDiffusionLength!.MinimumCellsPerLayer);
     }
 
     [Theory]

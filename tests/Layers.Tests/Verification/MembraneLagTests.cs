@@ -44,6 +44,28 @@ public sealed class MembraneLagTests
         Tolerance.Relative(Thickness * Thickness / (6 * Diffusivity), permeation.AnalyticLagTimeSeconds!.Value, 1e-12, "recognised single membrane");
     }
 
+    [Theory]
+    [InlineData(1e-3)]
+    [InlineData(1e-4)]
+    public void At_an_accuracy_target_the_amounts_at_every_report_time_are_within_it(double accuracy)
+    {
+        // numerics.accuracy (docs/numerics.md, "Choosing the accuracy"): the mesh by diffusion length, resolved from the
+        // earliest report, holds the cumulative amount of Crank eq. 4.24a to the target relative to the largest amount.
+        var scale = Thickness * Thickness / Diffusivity;
+        double[] reports = [0.1 * scale, 0.3 * scale, scale, 3 * scale];
+        var (grid, solver) = AccuracyTarget.Settings(accuracy);
+        var result = Simulator.Run(Membrane(reports[^1]) with { ReportTimesSeconds = reports, Grid = grid, Solver = solver });
+
+        var expected = reports.Select(time => MembraneTimeLag.CumulativeMassPerArea(Diffusivity, Thickness, MembraneOverDonor, Donor, time)).ToArray();
+        for (var i = 0; i < reports.Length; i++)
+        {
+            var received = result.Reports[i].Sample.Right!.TransferredIntoMediumPerArea;
+            Assert.True(
+                Math.Abs(received - expected[i]) <= accuracy * expected[^1],
+                $"at D t/L^2 = {reports[i] / scale}: {received} vs {expected[i]} (Crank eq. 4.24a), error {Math.Abs(received - expected[i]) / expected[^1]:E2}");
+        }
+    }
+
     private static Layers.Core.Domain.SimulationCase Membrane(double time)
         => Cases.Make(
             Cases.Bath(Donor),
