@@ -204,15 +204,17 @@ public static class CaseReader
 
     private static (GridOptions Grid, SolverOptions Solver) ReadNumerics(JsonFields root, ReadContext context)
     {
-        var grid = new GridOptions();
-        var solver = new SolverOptions();
+        var (grid, solver) = AccuracyTarget.Settings(AccuracyTarget.Default);
         if (root.Member("numerics") is not { } element
             || JsonFields.Open(element, root.PathOf("numerics"), context.Errors, NumericsKeys) is not { } numerics)
         {
             return (grid, solver);
         }
 
-        // A target accuracy picks the mesh and the tolerance; keys given beside it still override its choice.
+        // A target accuracy (given, or the default when no cell count is given) picks the mesh and the tolerance;
+        // a cell count without an accuracy asks for the shared-count mesh at its own defaults. Keys given beside
+        // either override their choice.
+        var cells = numerics.Integer("cells");
         if (numerics.Number("accuracy") is { } accuracy)
         {
             if (accuracy is >= AccuracyTarget.Finest and <= AccuracyTarget.Coarsest)
@@ -225,15 +227,16 @@ public static class CaseReader
                     $"must be from {AccuracyTarget.Finest:0e0} to {AccuracyTarget.Coarsest:0e0} (a relative accuracy such as 1e-4); got {accuracy}"));
             }
         }
+        else if (cells is not null)
+        {
+            (grid, solver) = (new GridOptions(), new SolverOptions());
+        }
 
-        var cells = numerics.Integer("cells");
         var minimumCells = numerics.Integer("minimumCellsPerLayer");
         grid = grid with
         {
             TotalCells = cells ?? grid.TotalCells,
             MinimumCellsPerLayer = minimumCells ?? grid.MinimumCellsPerLayer,
-
-            // A cell count given beside the accuracy asks for the shared count; a minimum per layer applies to either mesh.
             ByDiffusionLength = cells is null
                 ? grid.ByDiffusionLength is { } mesh && minimumCells is { } minimum ? mesh with { MinimumCellsPerLayer = Math.Max(1, minimum) } : grid.ByDiffusionLength
                 : null,

@@ -23,6 +23,9 @@ public static class AccuracyTarget
     /// <summary>Coarsest target the setting accepts.</summary>
     public const double Coarsest = 1e-2;
 
+    /// <summary>The target of a case file that names none.</summary>
+    public const double Default = 1e-4;
+
     /// <summary>Cell width per diffusion length, at the edges of the layer that matters most, at a target of 1e-4.</summary>
     public const double WidthPerDiffusionLengthAtOneInTenThousand = 0.05;
 

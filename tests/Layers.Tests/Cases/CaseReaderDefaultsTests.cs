@@ -99,20 +99,23 @@ public sealed class CaseReaderDefaultsTests
         Assert.Equal("reference medium", ReadValid(CaseJson.MinimalWith(("$.referenceMedium", """{ "density": "1 g/cm3" }"""))).ReferenceMedium);
 
     [Fact]
-    public void Numerics_default_to_240_cells_12_per_layer_and_tolerance_1e_6()
+    public void Numerics_default_to_the_accuracy_target_of_1e_4()
     {
+        // docs/case-format.md, $.numerics: without numerics the run aims at 1e-4 (cells by diffusion length, 0.05 of it
+        // at the edges, at least 4 per layer, step tolerance 1e-4).
         var simulation = ReadValid(CaseJson.Minimal);
 
-        Assert.Equal(240, simulation.Grid.TotalCells);
-        Assert.Equal(12, simulation.Grid.MinimumCellsPerLayer);
-        Assert.Equal(1e-6, simulation.Solver.RelativeTolerance);
+        Assert.Equal(0.05, simulation.Grid.ByDiffusionLength!.WidthPerDiffusionLength, 15);
+        Assert.Equal(4, simulation.Grid.ByDiffusionLength.MinimumCellsPerLayer);
+        Assert.Equal(1e-4, simulation.Solver.RelativeTolerance, 15);
     }
 
     [Fact]
-    public void A_numerics_object_with_one_key_keeps_the_defaults_of_the_others()
+    public void A_cell_count_without_an_accuracy_asks_for_the_shared_count_mesh_with_its_own_defaults()
     {
         var simulation = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "cells": 480 }""")));
 
+        Assert.Null(simulation.Grid.ByDiffusionLength);
         Assert.Equal(480, simulation.Grid.TotalCells);
         Assert.Equal(12, simulation.Grid.MinimumCellsPerLayer);
         Assert.Equal(1e-6, simulation.Solver.RelativeTolerance);
