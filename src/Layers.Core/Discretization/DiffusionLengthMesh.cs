@@ -1,12 +1,14 @@
+using Layers.Core.Domain;
+
 namespace Layers.Core.Discretization;
 
 /// <summary>
 /// A mesh whose cells are sized by what each layer's profile can do in the run rather than by its thickness: the
-/// cells at both edges of a layer (where interfaces and faces put the steep early gradients) are a fraction of the
-/// layer's diffusion length sqrt(D t) at the earliest time to resolve; they grow geometrically toward the middle up
-/// to a fraction of the diffusion length at the end of the run, and never exceed the layer's thickness over its
-/// minimum cell count. A layer that diffusion crosses many times over the run gets few cells; a slow, thick layer
-/// gets small cells at its edges and a few wide ones where nothing arrives.
+/// cells at the edges of a layer where something crosses (interfaces, open faces) are a fraction f of the layer's
+/// diffusion length sqrt(D t) at the earliest time to resolve, and grow by 1 + f toward the middle (a width
+/// proportional to the distance from the edge, as the self-similar early profile needs at every later time), up to
+/// the layer's thickness over its minimum cell count. A layer that diffusion crosses many times over the run gets
+/// few cells; a slow, thick layer gets small cells at its edges and a few wide ones where nothing arrives.
 /// </summary>
 /// <param name="WidthPerDiffusionLength">
 /// Cell width over the distance from the nearer edge (or over the early diffusion length, whichever is larger) in the
@@ -39,7 +41,7 @@ public sealed record DiffusionLengthMesh(
     /// <param name="leftFaceOpen">Whether the left face exchanges with a medium.</param>
     /// <param name="rightFaceOpen">Whether the right face exchanges with a medium.</param>
     /// <param name="latestSeconds">The end of the run, s.</param>
-    public static double[] Shares(Domain.LayerStack stack, bool leftFaceOpen, bool rightFaceOpen, double latestSeconds)
+    public static double[] Shares(LayerStack stack, bool leftFaceOpen, bool rightFaceOpen, double latestSeconds)
     {
         ArgumentNullException.ThrowIfNull(stack);
         var layers = stack.Layers;
@@ -84,7 +86,8 @@ public sealed record DiffusionLengthMesh(
             return Enumerable.Repeat(widest, MinimumCellsPerLayer).ToArray();
         }
 
-        var edge = Math.Min(fraction * Math.Sqrt(diffusivitySquareMetersPerSecond * earliestSeconds), widest);
+        // The floor keeps the count finite (logarithmic in it) for extreme inputs.
+        var edge = Math.Clamp(fraction * Math.Sqrt(diffusivitySquareMetersPerSecond * earliestSeconds), 1e-9 * thicknessMeters, widest);
         var growth = 1 + fraction;
 
         // From a resolved edge over half the layer (both edges resolved) or all of it (one): geometric growth up to
