@@ -132,14 +132,17 @@ internal static class RunCommand
     private static int Execute(RunSettings settings, TextWriter output, TextWriter error, CancellationToken cancellation)
     {
         var clock = System.Diagnostics.Stopwatch.StartNew();
+        var phases = new PhaseClock();
         var casePath = settings.CasePath;
         var read = CaseArgument.ReadOrReport(casePath, error);
+        phases.Mark("read");
         if (read?.Case is not { } simulation)
         {
             return ExitCodes.InvalidInput;
         }
 
         var result = Simulator.Run(simulation, cancellation);
+        phases.Mark("solve");
         if (result.Statistics.StopReason == Core.TimeStepping.StopReason.Cancelled)
         {
             error.WriteLine($"{casePath}: cancelled; no results were written.");
@@ -153,6 +156,7 @@ internal static class RunCommand
         }
 
         var files = CaseFiles.Build(result, settings);
+        phases.Mark(settings.Plots ? "files and plots" : "files");
         string folder;
         try
         {
@@ -164,6 +168,7 @@ internal static class RunCommand
             return ExitCodes.OutputFailed;
         }
 
+        phases.Mark("write");
         if (settings.Json)
         {
             output.Write(System.Text.Encoding.UTF8.GetString(files[CaseFiles.Summary]));
@@ -193,6 +198,8 @@ internal static class RunCommand
             var total = clock.Elapsed.TotalSeconds;
             error.WriteLine(FormattableString.Invariant(
                 $"timing: time loop {statistics.WallSeconds * 1e3:F2} ms ({statistics.AcceptedSteps} steps accepted, {statistics.RejectedSteps} rejected, {result.Grid.CellCount} cells, {statistics.Unknowns} unknowns); outside the time loop {(total - statistics.WallSeconds) * 1e3:F1} ms (reading, other solves, writing{(settings.Plots ? ", plots" : string.Empty)})"));
+            phases.Mark("print");
+            error.WriteLine(phases.Describe());
         }
 
         return result.FoodContact?.MeetsLimit == false ? ExitCodes.LimitExceeded : ExitCodes.Success;

@@ -80,10 +80,11 @@ public static class CaseReader
                 errors.AddRange(SweepExpander.Expand(json, fileName).Errors);
             }
 
-            if (errors.Count == 0)
+            if (errors.Count == 0 && DeclaresStudy(document.RootElement))
             {
                 // Likewise the study sections: read as one case the file is its base case, and `layers check`
-                // reports the mistakes of its design or uncertainty study.
+                // reports the mistakes of its design or uncertainty study. Only then is the document parsed again
+                // (as a mutable tree), which a plain case in a large batch need not pay for.
                 errors.AddRange(Studies.StudySections.Check(json, fileName, simulation!));
             }
 
@@ -100,6 +101,9 @@ public static class CaseReader
             return new CaseReadResult(fileName, null, located);
         }
     }
+
+    private static bool DeclaresStudy(JsonElement root) =>
+        root.ValueKind == JsonValueKind.Object && (root.TryGetProperty("design", out _) || root.TryGetProperty("uncertainty", out _));
 
     private static SimulationCase? Read(JsonElement rootElement, string fileName, ReadContext context)
     {

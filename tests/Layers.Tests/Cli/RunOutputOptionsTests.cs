@@ -93,4 +93,17 @@ public sealed class RunOutputOptionsTests
         Assert.Matches(@"^timing: time loop [0-9.]+ ms \([0-9]+ steps accepted, [0-9]+ rejected, [0-9]+ cells", outcome.Error);
         Assert.Equal(File.ReadAllText(temp.Combine(CaseName, "summary.json")), outcome.Output);
     }
+
+    [Fact]
+    public void Timing_names_each_phase_of_the_run_and_the_time_since_the_process_started()
+    {
+        using var temp = new TempFolder();
+
+        var outcome = CliRun.Invoke("run", Case, "--out", temp.Path, "--no-plots", "--quiet", "--timing");
+
+        Assert.Equal(ExitCodes.Success, outcome.ExitCode);
+        Assert.Matches(
+            @"(?m)^timing: phases read [0-9.]+ ms, solve [0-9.]+ ms, files [0-9.]+ ms, write [0-9.]+ ms, print [0-9.]+ ms, process start to here [0-9]+ ms$",
+            outcome.Error);
+    }
 }
