@@ -24,7 +24,7 @@ public sealed record DiffusionLengthMesh(
     /// still wider than the diffusion length decays only slowly, so the mesh resolves somewhat earlier than the first
     /// time reported (measured on the benchmark cases, docs/numerics.md).
     /// </summary>
-    public const double EarliestResolvedPerReportTime = 0.3;
+    public const double EarliestResolvedPerReportTime = 0.2;
 
     /// <summary>Coarsest width per diffusion length, however little a layer exchanges.</summary>
     public const double CoarsestWidthPerDiffusionLength = 0.35;
