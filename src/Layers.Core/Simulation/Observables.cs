@@ -95,12 +95,26 @@ internal sealed class Observables
 
     private double DistanceToFinal(ReadOnlySpan<double> state)
     {
-        var sum = 0.0;
-        for (var n = 0; n < state.Length; n++)
+        // Asked after every step: four partial sums, so that the additions do not wait on one another.
+        var count = state.Length;
+        ReadOnlySpan<double> capacity = _system.Capacity.AsSpan(0, count);
+        ReadOnlySpan<double> final = _final.NodeValues.AsSpan(0, count);
+        var values = state[..count];
+        double sum0 = 0, sum1 = 0, sum2 = 0, sum3 = 0;
+        var n = 0;
+        for (; n + 3 < count; n += 4)
         {
-            sum += _system.Capacity[n] * Math.Abs(state[n] - _final.NodeValues[n]);
+            sum0 += capacity[n] * Math.Abs(values[n] - final[n]);
+            sum1 += capacity[n + 1] * Math.Abs(values[n + 1] - final[n + 1]);
+            sum2 += capacity[n + 2] * Math.Abs(values[n + 2] - final[n + 2]);
+            sum3 += capacity[n + 3] * Math.Abs(values[n + 3] - final[n + 3]);
         }
 
-        return sum;
+        for (; n < count; n++)
+        {
+            sum0 += capacity[n] * Math.Abs(values[n] - final[n]);
+        }
+
+        return (sum0 + sum1) + (sum2 + sum3);
     }
 }

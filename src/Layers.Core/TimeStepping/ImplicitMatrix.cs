@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using Layers.Core.Discretization;
 
 namespace Layers.Core.TimeStepping;
@@ -44,6 +45,21 @@ internal sealed class ImplicitMatrix
     /// <summary>The factors of the last factorisation, for sweeps that fuse other work into the solve.</summary>
     public TridiagonalFactors Factors { get; }
 
+    /// <summary>Storage Cap_n of every node.</summary>
+    public ReadOnlySpan<double> Capacity => _capacity;
+
+    /// <summary>S_n: the sum of node n's conductances, baths included (the diagonal of A).</summary>
+    public ReadOnlySpan<double> ConductanceSum => _conductanceSum;
+
+    /// <summary>G_n-1: the conductance to the node on the left (0 for the first node; -A_n,n-1).</summary>
+    public ReadOnlySpan<double> LeftConductance => _leftConductance;
+
+    /// <summary>G_n: the conductance to the node on the right (0 for the last node; -A_n,n+1).</summary>
+    public ReadOnlySpan<double> RightConductance => _rightConductance;
+
+    /// <summary>G_n-1^2, kept so that the pivot recurrence does not multiply on its critical path.</summary>
+    public ReadOnlySpan<double> LeftConductanceSquared => _leftConductanceSquared;
+
     /// <summary>Factors Cap + c A for the stage coefficient c (s).</summary>
     public void Factor(double coefficientSeconds) => Factor(coefficientSeconds, default);
 
@@ -83,12 +99,20 @@ internal sealed class ImplicitMatrix
                 upper = fixedRight ? 0 : upper;
             }
 
-            previous = 1 / Math.FusedMultiplyAdd(-product, previous, diagonal);
+            previous = InversePivot(product, previous, diagonal);
             inversePivot[n] = previous;
             lowerMultiplier[n] = lower * previous;
             upperMultiplier[n] = upper * previous;
         }
     }
+
+    /// <summary>
+    /// 1 / p_n = 1 / (d_n - l_n u_n-1 / p_n-1), from the product of the off-diagonal entries and 1 / p_n-1: one place
+    /// for the rounding of the pivots, shared by every sweep that factors.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static double InversePivot(double offDiagonalProduct, double previousInversePivot, double diagonal)
+        => 1 / Math.FusedMultiplyAdd(-offDiagonalProduct, previousInversePivot, diagonal);
 
     /// <summary>Row n of c A: the entries left of and right of the diagonal, and the diagonal (without storage).</summary>
     public static (double Lower, double Diagonal, double Upper) Row(DiffusionSystem system, int n, double coefficientSeconds)

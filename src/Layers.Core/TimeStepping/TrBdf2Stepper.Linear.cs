@@ -16,13 +16,12 @@ internal sealed partial class TrBdf2Stepper
     private StepTrial TryLinear(ImplicitMatrix matrix, double[] start, double stepSeconds, double[] next, ErrorWeights weights)
     {
         var c = StageWeight * stepSeconds;
-        matrix.Factor(c);
         RatesAtStart(start, null);
         var factors = matrix.Factors;
         var n = start.Length;
 
         // Trapezoidal stage: (Cap + c A) u_g = Cap u_n + c (s - A u_n) + c s.
-        TrapezoidalForward(factors, start, c);
+        FactorAndTrapezoidalForward(matrix, start, c);
         BackwardWithResidual(factors, _stage, _rateAtStage);
 
         // BDF2 stage: (Cap + c A) u_n+1 = Cap (w1 u_g - w0 u_n) + c s.
@@ -36,21 +35,38 @@ internal sealed partial class TrBdf2Stepper
         return new StepTrial(error, left, right, new BathTotals(leftToStage, rightToStage));
     }
 
-    /// <summary>Forward sweep of the trapezoidal stage into the stage array, its right-hand side built on the way.</summary>
-    private void TrapezoidalForward(TridiagonalFactors factors, ReadOnlySpan<double> start, double c)
+    /// <summary>
+    /// Factors Cap + c A (as <see cref="ImplicitMatrix.Factor(double)"/> does) and, in the same sweep, runs the forward
+    /// sweep of the trapezoidal stage into the stage array: the two recurrences are independent from row to row, so the
+    /// substitution runs in the shadow of the division of the pivots.
+    /// </summary>
+    private void FactorAndTrapezoidalForward(ImplicitMatrix matrix, ReadOnlySpan<double> start, double c)
     {
         var count = start.Length;
-        ReadOnlySpan<double> inversePivot = factors.InversePivot[..count];
-        ReadOnlySpan<double> lowerMultiplier = factors.LowerMultiplier[..count];
-        ReadOnlySpan<double> capacity = _system.Capacity.AsSpan(0, count);
+        var cSquared = c * c;
+        var factors = matrix.Factors;
+        var inversePivot = factors.InversePivot[..count];
+        var lowerMultiplier = factors.LowerMultiplier[..count];
+        var upperMultiplier = factors.UpperMultiplier[..count];
+        var capacity = matrix.Capacity[..count];
+        var sum = matrix.ConductanceSum[..count];
+        var left = matrix.LeftConductance[..count];
+        var right = matrix.RightConductance[..count];
+        var leftSquared = matrix.LeftConductanceSquared[..count];
         ReadOnlySpan<double> rate = _rateAtStart.AsSpan(0, count);
         ReadOnlySpan<double> source = _source.AsSpan(0, count);
         var stage = _stage.AsSpan(0, count);
+        var pivot = 0.0;
         var previous = 0.0;
         for (var n = 0; n < count; n++)
         {
+            pivot = ImplicitMatrix.InversePivot(cSquared * leftSquared[n], pivot, capacity[n] + (c * sum[n]));
+            inversePivot[n] = pivot;
+            var lower = c * left[n] * pivot;
+            lowerMultiplier[n] = lower;
+            upperMultiplier[n] = c * right[n] * pivot;
             var rightHandSide = (capacity[n] * start[n]) + (c * (rate[n] + source[n]));
-            previous = Math.FusedMultiplyAdd(lowerMultiplier[n], previous, rightHandSide * inversePivot[n]);
+            previous = Math.FusedMultiplyAdd(lower, previous, rightHandSide * pivot);
             stage[n] = previous;
         }
     }
