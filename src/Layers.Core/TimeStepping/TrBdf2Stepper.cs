@@ -74,9 +74,12 @@ internal sealed partial class TrBdf2Stepper
 
         _stage = new double[n];
         _work = new double[n];
-        _dissolvedAtStart = new double[n];
-        _dissolvedAtStage = new double[n];
-        _dissolvedAtEnd = new double[n];
+
+        // Where nothing is capped the dissolved values are the states themselves and need no arrays of their own.
+        var dissolved = _solver is null ? 0 : n;
+        _dissolvedAtStart = new double[dissolved];
+        _dissolvedAtStage = new double[dissolved];
+        _dissolvedAtEnd = new double[dissolved];
         _rateAtStart = new double[n];
         _rateAtStage = new double[n];
         _rateAtEnd = new double[n];
