@@ -8,7 +8,7 @@ namespace Layers.Core.TimeStepping;
 /// A Thomas sweep is latency-bound: each row waits for the one before, one fused multiply-add per row. The loads,
 /// products and sums that build a right-hand side, the residual s - A u of the solution just found, the combination
 /// of the three rates in the error estimate and its norm do not lie on that chain, so folded into the sweeps they
-/// cost little, where as separate passes over the nodes they cost a pass each. The arithmetic is that of the plain
+/// cost little, whereas as separate passes over the nodes they cost a pass each. The arithmetic is that of the plain
 /// passes: the residual is formed from the same differences, the right-hand sides from the same products.
 /// </remarks>
 internal sealed partial class TrBdf2Stepper
@@ -37,8 +37,8 @@ internal sealed partial class TrBdf2Stepper
 
     /// <summary>
     /// Factors Cap + c A (as <see cref="ImplicitMatrix.Factor(double)"/> does) and, in the same sweep, runs the forward
-    /// sweep of the trapezoidal stage into the stage array: the two recurrences are independent from row to row, so the
-    /// substitution runs in the shadow of the division of the pivots.
+    /// sweep of the trapezoidal stage into the stage array: the substitution's chain does not feed the pivots', so it runs
+    /// in the shadow of the division that each pivot waits for.
     /// </summary>
     private void FactorAndTrapezoidalForward(ImplicitMatrix matrix, ReadOnlySpan<double> start, double c)
     {
