@@ -27,7 +27,7 @@ internal sealed class CappedStageSolver : IStageSolver
     private readonly DiffusionSystem _system;
     private readonly double[] _saturation;
     private readonly bool[] _saturated;
-    private readonly TridiagonalFactors _factors;
+    private readonly ImplicitMatrix _matrix;
     private readonly double[] _work;
     private double _coefficient;
 
@@ -37,7 +37,7 @@ internal sealed class CappedStageSolver : IStageSolver
         _saturation = system.Saturation ?? throw new ArgumentException("The system has no saturation values.", nameof(system));
         var n = system.NodeCount;
         _saturated = new bool[n];
-        _factors = new TridiagonalFactors(n);
+        _matrix = new ImplicitMatrix(system);
         _work = new double[n];
     }
 
@@ -67,7 +67,7 @@ internal sealed class CappedStageSolver : IStageSolver
         return false;
     }
 
-    public void Filter(Span<double> values) => _factors.Solve(values, values);
+    public void Filter(Span<double> values) => _matrix.Solve(values, values);
 
     public void Dissolve(ReadOnlySpan<double> content, Span<double> dissolved)
     {
@@ -100,8 +100,7 @@ internal sealed class CappedStageSolver : IStageSolver
     /// </summary>
     private void FactorAndSolve(ReadOnlySpan<double> rightHandSide, Span<double> content)
     {
-        var capacity = _system.Capacity;
-        var last = capacity.Length - 1;
+        var last = _saturated.Length - 1;
         for (var n = 0; n <= last; n++)
         {
             var (lower, diagonal, upper) = ImplicitMatrix.Row(_system, n, _coefficient);
@@ -109,25 +108,22 @@ internal sealed class CappedStageSolver : IStageSolver
             if (_saturated[n])
             {
                 fixedPart += diagonal * _saturation[n];
-                diagonal = 0;
             }
 
             if (n > 0 && _saturated[n - 1])
             {
                 fixedPart += lower * _saturation[n - 1];
-                lower = 0;
             }
 
             if (n < last && _saturated[n + 1])
             {
                 fixedPart += upper * _saturation[n + 1];
-                upper = 0;
             }
 
             _work[n] = rightHandSide[n] - fixedPart;
-            _factors.SetRow(n, lower, capacity[n] + diagonal, upper);
         }
 
-        _factors.Solve(_work, content);
+        _matrix.Factor(_coefficient, _saturated);
+        _matrix.Solve(_work, content);
     }
 }

@@ -35,9 +35,13 @@ internal sealed class StepInterpolant
         var wStart = (theta - gamma) * (theta - 1) / gamma;
         var wStage = theta * (theta - 1) / (gamma * (gamma - 1));
         var wEnd = theta * (theta - gamma) / (1 - gamma);
-        for (var i = 0; i < _state.Length; i++)
+        var state = _state.AsSpan();
+        var atStart = start[..state.Length];
+        var atStage = stage[..state.Length];
+        var atEnd = end[..state.Length];
+        for (var i = 0; i < state.Length; i++)
         {
-            _state[i] = (wStart * start[i]) + (wStage * stage[i]) + (wEnd * end[i]);
+            state[i] = (wStart * atStart[i]) + (wStage * atStage[i]) + (wEnd * atEnd[i]);
         }
 
         return new BathTotals(

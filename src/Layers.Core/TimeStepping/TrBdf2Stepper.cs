@@ -18,7 +18,7 @@ namespace Layers.Core.TimeStepping;
 /// The mass exchanged with baths over a step is integrated with the same quadrature as the stages, so the discrete
 /// mass balance closes exactly.
 /// </remarks>
-internal sealed class TrBdf2Stepper
+internal sealed partial class TrBdf2Stepper
 {
     /// <summary>Where the trapezoidal stage ends, as a fraction of the step: gamma = 2 - sqrt(2).</summary>
     public static readonly double Gamma = 2 - Math.Sqrt(2);
@@ -27,10 +27,19 @@ internal sealed class TrBdf2Stepper
     private static readonly double BdfWeightOfStart = (1 - Gamma) * (1 - Gamma) / (Gamma * (2 - Gamma));
     private static readonly double ErrorConstant = ((-3 * Gamma * Gamma) + (4 * Gamma) - 2) / (12 * (2 - Gamma));
 
+    // The weights of the three rates in the error estimate, r_n / gamma - r_g / (gamma (1 - gamma)) + r_n+1 / (1 - gamma).
+    private static readonly double ErrorWeightOfStart = 1 / Gamma;
+    private static readonly double ErrorWeightOfStage = -1 / (Gamma * (1 - Gamma));
+    private static readonly double ErrorWeightOfEnd = 1 / (1 - Gamma);
+
     private readonly DiffusionSystem _system;
-    private readonly IStageSolver _solver;
+    private readonly IStageSolver? _solver;
+    private readonly ImplicitMatrix? _matrix;
     private readonly double[] _stage;
     private readonly double[] _work;
+
+    /// <summary>s: the bath terms G_bath u_bath of the end nodes, zero elsewhere.</summary>
+    private readonly double[] _source;
     private readonly double[] _dissolvedAtStage;
     private readonly double[] _rateAtStage;
     private double[] _dissolvedAtStart;
@@ -50,13 +59,27 @@ internal sealed class TrBdf2Stepper
     public TrBdf2Stepper(DiffusionSystem system)
     {
         _system = system;
-        _solver = system.Saturation is null ? new LinearStageSolver(system) : new CappedStageSolver(system);
         var n = system.NodeCount;
+        _source = new double[n];
+        _source[0] += system.LeftBath.Conductance * system.LeftBath.BathValue;
+        _source[n - 1] += system.RightBath.Conductance * system.RightBath.BathValue;
+        if (system.Saturation is null)
+        {
+            _matrix = new ImplicitMatrix(system);
+        }
+        else
+        {
+            _solver = new CappedStageSolver(system);
+        }
+
         _stage = new double[n];
         _work = new double[n];
-        _dissolvedAtStart = new double[n];
-        _dissolvedAtStage = new double[n];
-        _dissolvedAtEnd = new double[n];
+
+        // Where nothing is capped the dissolved values are the states themselves and need no arrays of their own.
+        var dissolved = _solver is null ? 0 : n;
+        _dissolvedAtStart = new double[dissolved];
+        _dissolvedAtStage = new double[dissolved];
+        _dissolvedAtEnd = new double[dissolved];
         _rateAtStart = new double[n];
         _rateAtStage = new double[n];
         _rateAtEnd = new double[n];
@@ -82,36 +105,25 @@ internal sealed class TrBdf2Stepper
     /// <param name="weights">Per-node tolerance scale used to normalise the error.</param>
     /// <returns>The error and bath exchange of the step; an infinite error when a stage solve did not converge.</returns>
     public StepTrial Try(double[] start, double stepSeconds, double[] next, ErrorWeights weights)
+        => _matrix is null ? TryCapped(_solver!, start, stepSeconds, next, weights) : TryLinear(_matrix, start, stepSeconds, next, weights);
+
+    private StepTrial TryCapped(IStageSolver solver, double[] start, double stepSeconds, double[] next, ErrorWeights weights)
     {
         var capacity = _system.Capacity;
         var n = capacity.Length;
         var c = StageWeight * stepSeconds;
-        _solver.Prepare(c);
-        if (ReferenceEquals(start, _rateAtEndOf))
-        {
-            (_rateAtStart, _rateAtEnd) = (_rateAtEnd, _rateAtStart);
-            (_dissolvedAtStart, _dissolvedAtEnd) = (_dissolvedAtEnd, _dissolvedAtStart);
-            _rateAtStartOf = start;
-        }
-        else if (!ReferenceEquals(start, _rateAtStartOf))
-        {
-            _solver.Dissolve(start, _dissolvedAtStart);
-            _system.Residual(_dissolvedAtStart, _rateAtStart);
-            _rateAtStartOf = start;
-        }
+        solver.Prepare(c);
+        RatesAtStart(start, solver);
 
-        // The end arrays are overwritten below; until they hold this step's end, they belong to no state.
-        _rateAtEndOf = null;
-
-        // Trapezoidal stage: Cap w_g + c A u_g = Cap w_n + c (s - A u_n) + c s.
+        // Trapezoidal stage: Cap w_g + c A u_g = Cap w_n + c (s - A u_n) + c s. The right-hand sides and the error are
+        // formed as in the linear step's sweeps, so that where nothing saturates both give the same numbers.
         for (var i = 0; i < n; i++)
         {
-            _work[i] = (capacity[i] * start[i]) + (c * _rateAtStart[i]);
+            _work[i] = (capacity[i] * start[i]) + (c * (_rateAtStart[i] + _source[i]));
         }
 
-        AddSource(_work, c);
         start.CopyTo(_stage);
-        if (!_solver.Solve(_work, _stage, _dissolvedAtStage))
+        if (!solver.Solve(_work, _stage, _dissolvedAtStage))
         {
             return StepTrial.NotConverged;
         }
@@ -121,12 +133,11 @@ internal sealed class TrBdf2Stepper
         // BDF2 stage: Cap w_n+1 + c A u_n+1 = Cap (w1 w_g - w0 w_n) + c s.
         for (var i = 0; i < n; i++)
         {
-            _work[i] = capacity[i] * ((BdfWeightOfStage * _stage[i]) - (BdfWeightOfStart * start[i]));
+            _work[i] = (capacity[i] * ((BdfWeightOfStage * _stage[i]) - (BdfWeightOfStart * start[i]))) + (c * _source[i]);
         }
 
-        AddSource(_work, c);
         _stage.CopyTo(next);
-        if (!_solver.Solve(_work, next, _dissolvedAtEnd))
+        if (!solver.Solve(_work, next, _dissolvedAtEnd))
         {
             return StepTrial.NotConverged;
         }
@@ -134,24 +145,56 @@ internal sealed class TrBdf2Stepper
         _system.Residual(_dissolvedAtEnd, _rateAtEnd);
         _rateAtEndOf = next;
 
-        var error = FilteredError(start, next, stepSeconds, weights);
+        var error = FilteredError(solver, start, next, stepSeconds, weights);
         var (leftToStage, left) = BathInflow(_system.LeftBath, _dissolvedAtStart[0], _dissolvedAtStage[0], _dissolvedAtEnd[0], c);
         var (rightToStage, right) = BathInflow(_system.RightBath, _dissolvedAtStart[n - 1], _dissolvedAtStage[n - 1], _dissolvedAtEnd[n - 1], c);
         return new StepTrial(error, left, right, new BathTotals(leftToStage, rightToStage));
     }
 
-    private double FilteredError(ReadOnlySpan<double> start, ReadOnlySpan<double> next, double h, ErrorWeights weights)
+    /// <summary>
+    /// Makes the start arrays hold the dissolved values and rates s - A u of <paramref name="start"/>, reusing those of
+    /// the last candidate (it was accepted) or of the last start (the step was rejected).
+    /// </summary>
+    private void RatesAtStart(double[] start, IStageSolver? solver)
+    {
+        if (ReferenceEquals(start, _rateAtEndOf))
+        {
+            (_rateAtStart, _rateAtEnd) = (_rateAtEnd, _rateAtStart);
+            (_dissolvedAtStart, _dissolvedAtEnd) = (_dissolvedAtEnd, _dissolvedAtStart);
+            _rateAtStartOf = start;
+        }
+        else if (!ReferenceEquals(start, _rateAtStartOf))
+        {
+            if (solver is null)
+            {
+                _system.Residual(start, _rateAtStart);
+            }
+            else
+            {
+                solver.Dissolve(start, _dissolvedAtStart);
+                _system.Residual(_dissolvedAtStart, _rateAtStart);
+            }
+
+            _rateAtStartOf = start;
+        }
+
+        // The end arrays are overwritten next; until they hold this step's end, they belong to no state.
+        _rateAtEndOf = null;
+    }
+
+    private double FilteredError(IStageSolver solver, ReadOnlySpan<double> start, ReadOnlySpan<double> next, double h, ErrorWeights weights)
     {
         var n = _work.Length;
         var scale = 2 * ErrorConstant * h;
+        var weightOfStart = scale * ErrorWeightOfStart;
+        var weightOfStage = scale * ErrorWeightOfStage;
+        var weightOfEnd = scale * ErrorWeightOfEnd;
         for (var i = 0; i < n; i++)
         {
-            _work[i] = scale * ((_rateAtStart[i] / Gamma)
-                - (_rateAtStage[i] / (Gamma * (1 - Gamma)))
-                + (_rateAtEnd[i] / (1 - Gamma)));
+            _work[i] = (weightOfStart * _rateAtStart[i]) + (weightOfStage * _rateAtStage[i]) + (weightOfEnd * _rateAtEnd[i]);
         }
 
-        _solver.Filter(_work);
+        solver.Filter(_work);
 
         // The largest |error| / tolerance, found without a division per node: a division only where a new largest
         // ratio appears.
@@ -172,14 +215,6 @@ internal sealed class TrBdf2Stepper
         }
 
         return worst;
-    }
-
-    private void AddSource(double[] rightHandSide, double c)
-    {
-        var left = _system.LeftBath;
-        var right = _system.RightBath;
-        rightHandSide[0] += c * left.Conductance * left.BathValue;
-        rightHandSide[^1] += c * right.Conductance * right.BathValue;
     }
 
     /// <summary>
