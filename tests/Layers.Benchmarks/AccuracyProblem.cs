@@ -82,6 +82,30 @@ public sealed record AccuracyProblem(
         return [.. result.Reports.Select(report => report.Sample.Right!.TransferredIntoMediumPerArea)];
     }
 
+    /// <summary>
+    /// Mass received on the right at the report times by the tool at a <c>numerics.accuracy</c> setting (the mesh by
+    /// diffusion length), through the lean solve to the duration: the same work as the plain reference does.
+    /// </summary>
+    public static double[] ToolReceivedAtAccuracy(SimulationCase simulation, double accuracy)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        var (grid, solver) = AccuracyTarget.Settings(accuracy);
+        var (samples, statistics) = Simulator.RunTimeSeries(simulation with { Grid = grid, Solver = solver });
+        if (statistics.StopReason != StopReason.Completed)
+        {
+            throw new InvalidOperationException($"{simulation.Title}: the tool stopped early at accuracy {accuracy}: {statistics}");
+        }
+
+        return [.. simulation.ReportTimesSeconds.Select(time => samples.First(sample => Math.Abs(sample.TimeSeconds - time) <= 1e-9 * time).Right!.TransferredIntoMediumPerArea)];
+    }
+
+    /// <summary>The cells of the mesh a <c>numerics.accuracy</c> setting gives this problem.</summary>
+    public int CellsAtAccuracy(double accuracy)
+        => GridBuilder.Build(Case with { Grid = AccuracyTarget.Settings(accuracy).Grid }).CellCount;
+
+    /// <summary>The error of a run of the tool at a <c>numerics.accuracy</c> setting.</summary>
+    public double ToolErrorAtAccuracy(double accuracy) => Error(ToolReceivedAtAccuracy(Case, accuracy));
+
     /// <summary>The error of a run of the tool.</summary>
     public double ToolError(int cells, double relativeTolerance) => Error(ToolReceived(Case, cells, relativeTolerance));
 

@@ -4,9 +4,10 @@ using Layers.Benchmarks.Reference;
 namespace Layers.Benchmarks;
 
 /// <summary>
-/// The tool against the plain reference at equal accuracy, in the same run. The tool runs at the first setting of
-/// the work-precision ladder (cells from coarse to fine, then tolerances from loose to tight) whose error is at most
-/// 1e-4 of the final amount; the plain reference at the coarsest of its settings that meets the same requirement.
+/// The tool against the plain reference at equal accuracy, in the same run. The tool runs at the coarsest
+/// <c>numerics.accuracy</c> setting of the work-precision ladder whose error is at most 1e-4 of the final amount (its
+/// default mesh by diffusion length, solved to the duration); the plain reference at the coarsest of its settings that
+/// meets the same requirement.
 /// Both settings and errors are printed by the setup. The Ratio column is tool time / plain time.
 /// </summary>
 [Config(typeof(SolveConfig))]
@@ -14,7 +15,7 @@ public class EqualAccuracyBenchmarks
 {
     private const double TargetError = 1e-4;
     private AccuracyProblem _problem = null!;
-    private (int Cells, double Tolerance) _tool;
+    private double _toolAccuracy;
     private (int Cells, int Steps) _plain;
 
     /// <summary>The problem: the analytic sheet or the laminate.</summary>
@@ -26,12 +27,12 @@ public class EqualAccuracyBenchmarks
     public void Setup()
     {
         _problem = Problem == "sheet" ? AccuracyProblem.Sheet() : AccuracyProblem.Laminate();
-        _tool = ToolMatching(_problem, TargetError);
-        var toolError = _problem.ToolError(_tool.Cells, _tool.Tolerance);
+        _toolAccuracy = ToolMatching(_problem, TargetError);
+        var toolError = _problem.ToolErrorAtAccuracy(_toolAccuracy);
         _plain = PlainMatching(_problem, TargetError);
         var plainError = _problem.PlainError(_plain.Cells, _plain.Steps);
         Console.WriteLine(
-            $"// {Problem}: tool {_tool.Cells} cells rtol {_tool.Tolerance:0e0} error {toolError:0.00e0}; " +
+            $"// {Problem}: tool accuracy {_toolAccuracy:0e0} ({_problem.CellsAtAccuracy(_toolAccuracy)} cells) error {toolError:0.00e0}; " +
             $"plain {_plain.Cells} cells {_plain.Steps} steps error {plainError:0.00e0}");
     }
 
@@ -41,20 +42,17 @@ public class EqualAccuracyBenchmarks
 
     /// <summary>The tool at the matching setting.</summary>
     [Benchmark]
-    public double[] Tool() => AccuracyProblem.ToolReceived(_problem.Case, _tool.Cells, _tool.Tolerance);
+    public double[] Tool() => AccuracyProblem.ToolReceivedAtAccuracy(_problem.Case, _toolAccuracy);
 
-    /// <summary>The first tool setting of the work-precision ladder with an error at most <paramref name="target"/>.</summary>
-    public static (int Cells, double Tolerance) ToolMatching(AccuracyProblem problem, double target)
+    /// <summary>The coarsest accuracy setting of the work-precision ladder with an error at most <paramref name="target"/>.</summary>
+    public static double ToolMatching(AccuracyProblem problem, double target)
     {
         ArgumentNullException.ThrowIfNull(problem);
-        foreach (var cells in WorkPrecision.ToolCells)
+        foreach (var accuracy in WorkPrecision.ToolAccuracies)
         {
-            foreach (var tolerance in WorkPrecision.ToolTolerances)
+            if (problem.ToolErrorAtAccuracy(accuracy) <= target)
             {
-                if (problem.ToolError(cells, tolerance) <= target)
-                {
-                    return (cells, tolerance);
-                }
+                return accuracy;
             }
         }
 

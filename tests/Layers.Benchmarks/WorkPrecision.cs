@@ -6,8 +6,9 @@ using Layers.Plotting;
 namespace Layers.Benchmarks;
 
 /// <summary>
-/// The work-precision command: for each <see cref="AccuracyProblem"/>, the tool at several mesh sizes and relative
-/// tolerances and the plain reference at several mesh and step sizes; writes work-precision.csv with every point
+/// The work-precision command: for each <see cref="AccuracyProblem"/>, the tool at several accuracy settings (its
+/// default mesh by diffusion length) and at several shared-count mesh sizes and relative tolerances, and the plain
+/// reference at several mesh and step sizes; writes work-precision.csv with every point
 /// and one PNG per problem (work-precision.png for the analytic sheet, work-precision-laminate.png).
 /// </summary>
 public static class WorkPrecision
@@ -17,6 +18,9 @@ public static class WorkPrecision
 
     /// <summary>Relative tolerances along each of the tool's lines.</summary>
     public static IReadOnlyList<double> ToolTolerances { get; } = [1e-3, 1e-4, 1e-5, 1e-6, 1e-7, 1e-8];
+
+    /// <summary>The <c>numerics.accuracy</c> settings of the tool's line on its own mesh by diffusion length.</summary>
+    public static IReadOnlyList<double> ToolAccuracies { get; } = [1e-2, 3e-3, 1e-3, 3e-4, 1e-4, 3e-5, 1e-5];
 
     /// <summary>
     /// Plain reference settings: cells doubled and steps quadrupled together, which keeps its first-order time error
@@ -34,6 +38,18 @@ public static class WorkPrecision
         foreach (var problem in AccuracyProblem.All())
         {
             var series = new List<WorkPrecisionSeries>();
+            var byAccuracy = new List<WorkPrecisionPoint>();
+            foreach (var accuracy in ToolAccuracies)
+            {
+                var error = problem.ToolErrorAtAccuracy(accuracy);
+                var (seconds, runs) = Timing.Median(() => AccuracyProblem.ToolReceivedAtAccuracy(problem.Case, accuracy));
+                var cells = problem.CellsAtAccuracy(accuracy);
+                byAccuracy.Add(new WorkPrecisionPoint(seconds, error));
+                csv.Append(Invariant($"{problem.Name},tool-accuracy,{cells},{accuracy:R},,{error:R},{seconds:R},{runs}\n"));
+                log.WriteLine(Invariant($"{problem.Name}: tool, accuracy {accuracy:0e0} ({cells} cells): error {error:0.00e0}, {seconds * 1e3:0.000} ms"));
+            }
+
+            series.Add(new WorkPrecisionSeries("tool, numerics.accuracy 1e-2 to 1e-5 (mesh by diffusion length; solve to the duration)", byAccuracy));
             foreach (var cells in ToolCells)
             {
                 var points = new List<WorkPrecisionPoint>();
@@ -46,7 +62,7 @@ public static class WorkPrecision
                     log.WriteLine(Invariant($"{problem.Name}: tool, {cells} cells, rtol {tolerance:0e0}: error {error:0.00e0}, {seconds * 1e3:0.000} ms"));
                 }
 
-                series.Add(new WorkPrecisionSeries($"tool, {cells} cells, rtol 1e-3 to 1e-8", points));
+                series.Add(new WorkPrecisionSeries($"tool, {cells} cells shared by thickness, rtol 1e-3 to 1e-8", points));
             }
 
             var plain = new List<WorkPrecisionPoint>();
