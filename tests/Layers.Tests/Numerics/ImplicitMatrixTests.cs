@@ -1,4 +1,3 @@
-using Layers.Core.Discretization;
 using Layers.Core.TimeStepping;
 using Layers.Tests.TestSupport;
 using MathNet.Numerics.LinearAlgebra;
@@ -15,13 +14,7 @@ public sealed class ImplicitMatrixTests
     public void Tridiagonal_solve_matches_a_dense_solve(int seed)
     {
         var random = new Random(seed);
-        var simulation = Cases.Make(
-            Cases.Bath(3, k: 0.2, film: 1e-6),
-            Cases.Compartment(1e-3, k: 7),
-            100,
-            grid: new GridOptions { TotalCells = 12, MinimumCellsPerLayer = 4 },
-            layers: [Cases.Layer("a", 1e-5, 1e-12, k: 0.3), Cases.Layer("b", 3e-5, 1e-13, k: 30)]);
-        var (system, _) = DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation.Stack, simulation.Grid));
+        var system = SmallMixedSystem.Build();
         var coefficient = 10 * random.NextDouble();
         var rightHandSide = Enumerable.Range(0, system.NodeCount).Select(_ => random.NextDouble()).ToArray();
         var matrix = new ImplicitMatrix(system);

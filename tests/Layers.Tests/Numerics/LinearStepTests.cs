@@ -20,13 +20,7 @@ public sealed class LinearStepTests
     public void Fused_step_matches_the_stage_equations_solved_densely(int seed)
     {
         var random = new Random(seed);
-        var simulation = Cases.Make(
-            Cases.Bath(3, k: 0.2, film: 1e-6),
-            Cases.Compartment(1e-3, k: 7),
-            100,
-            grid: new GridOptions { TotalCells = 12, MinimumCellsPerLayer = 4 },
-            layers: [Cases.Layer("a", 1e-5, 1e-12, k: 0.3), Cases.Layer("b", 3e-5, 1e-13, k: 30)]);
-        var (system, _) = DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation.Stack, simulation.Grid));
+        var system = SmallMixedSystem.Build();
         var count = system.NodeCount;
         var start = Enumerable.Range(0, count).Select(_ => random.NextDouble()).ToArray();
         var step = 100 * random.NextDouble();

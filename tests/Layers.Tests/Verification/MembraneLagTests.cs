@@ -47,6 +47,7 @@ public sealed class MembraneLagTests
     [Theory]
     [InlineData(1e-3)]
     [InlineData(1e-4)]
+    [InlineData(1e-5)]
     public void At_an_accuracy_target_the_amounts_at_every_report_time_are_within_it(double accuracy)
     {
         // numerics.accuracy (docs/numerics.md, "Choosing the accuracy"): the mesh by diffusion length, resolved from the
