@@ -19,7 +19,7 @@ public class SolveBenchmarks
     public string Case { get; set; } = "laminate";
 
     /// <summary><c>numerics.accuracy</c> of the run (1e-4 is also what a case without numerics gets).</summary>
-    [Params("1e-3", "1e-4")]
+    [Params("1e-3", "3e-4", "1e-4")]
     public string Accuracy { get; set; } = "default";
 
     /// <summary>The cases benchmarked.</summary>
