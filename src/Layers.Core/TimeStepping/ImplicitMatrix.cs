@@ -9,36 +9,39 @@ namespace Layers.Core.TimeStepping;
 /// solve are O(n) and allocate nothing after construction.
 /// </summary>
 /// <remarks>
-/// Row n of Cap + c A is (-c G_n-1, Cap_n + c (G_n-1 + G_n), -c G_n), bath conductances included on the diagonal of
-/// the end nodes. Only c changes from step to step, so the sums of conductances and the squares G_n-1^2 are kept:
-/// the pivot recurrence p_n = Cap_n + c S_n - c^2 G_n-1^2 / p_n-1 then has one fused multiply-add and one division on
-/// its critical path.
+/// Row n of Cap + c A is (-c G_n-1, Cap_n + c (G_n-1 + G_n + G_bath), -c G_n), G_bath being the conductance to a bath
+/// (end nodes only). The pivots are formed without a subtraction: with E_n the excess of pivot n over what it passes
+/// on to the next row, p_n = E_n + c G_n and E_n = Cap_n + c G_bath + c G_n-1 E_n-1 / p_n-1 (the plain recurrence
+/// p_n = d_n - c^2 G_n-1^2 / p_n-1 rewritten; every term is positive). The plain recurrence subtracts numbers of size
+/// c G from one another to leave one of size Cap: once a step is 1e16 times a cell's diffusion time h^2/D, Cap drowns
+/// in the round-off of c G, the pivots of the fast cells come out wrong by orders of magnitude, and the step gains or
+/// loses mass. Subtraction-free, every pivot is exact to a few units of round-off whatever the step, as in the
+/// elimination of Grassmann, Taksar and Heyman, Oper. Res. 33 (1985) 1107-1116, and the accurate factorisation of
+/// diagonally dominant M-matrices from their off-diagonal entries and row sums (Alfa, Xue and Ye, Math. Comp. 71 (2002)
+/// 217-236; from memory).
 /// </remarks>
 internal sealed class ImplicitMatrix
 {
     private readonly double[] _capacity;
-    private readonly double[] _conductanceSum;
+    private readonly double[] _bathConductance;
     private readonly double[] _leftConductance;
     private readonly double[] _rightConductance;
-    private readonly double[] _leftConductanceSquared;
 
     public ImplicitMatrix(DiffusionSystem system)
     {
         var count = system.NodeCount;
         _capacity = system.Capacity;
-        _conductanceSum = new double[count];
+        _bathConductance = new double[count];
         _leftConductance = new double[count];
         _rightConductance = new double[count];
-        _leftConductanceSquared = new double[count];
         for (var n = 0; n < count; n++)
         {
-            var (lower, diagonal, upper) = Row(system, n, 1);
-            _conductanceSum[n] = diagonal;
-            _leftConductance[n] = -lower;
-            _rightConductance[n] = -upper;
-            _leftConductanceSquared[n] = lower * lower;
+            _leftConductance[n] = n > 0 ? system.Conductance[n - 1] : 0;
+            _rightConductance[n] = n < count - 1 ? system.Conductance[n] : 0;
         }
 
+        _bathConductance[0] += system.LeftBath.Conductance;
+        _bathConductance[count - 1] += system.RightBath.Conductance;
         Factors = new TridiagonalFactors(count);
     }
 
@@ -48,17 +51,14 @@ internal sealed class ImplicitMatrix
     /// <summary>Storage Cap_n of every node.</summary>
     public ReadOnlySpan<double> Capacity => _capacity;
 
-    /// <summary>S_n: the sum of node n's conductances, baths included (the diagonal of A).</summary>
-    public ReadOnlySpan<double> ConductanceSum => _conductanceSum;
+    /// <summary>G_bath of every node: the conductance to a bath (0 but at the end nodes that have one).</summary>
+    public ReadOnlySpan<double> BathConductance => _bathConductance;
 
     /// <summary>G_n-1: the conductance to the node on the left (0 for the first node; -A_n,n-1).</summary>
     public ReadOnlySpan<double> LeftConductance => _leftConductance;
 
     /// <summary>G_n: the conductance to the node on the right (0 for the last node; -A_n,n+1).</summary>
     public ReadOnlySpan<double> RightConductance => _rightConductance;
-
-    /// <summary>G_n-1^2, kept so that the pivot recurrence does not multiply on its critical path.</summary>
-    public ReadOnlySpan<double> LeftConductanceSquared => _leftConductanceSquared;
 
     /// <summary>Factors Cap + c A for the stage coefficient c (s).</summary>
     public void Factor(double coefficientSeconds) => Factor(coefficientSeconds, default);
@@ -67,52 +67,62 @@ internal sealed class ImplicitMatrix
     /// Factors Cap + c A D, where D = diag(1 - fixed) takes out the columns of the nodes marked in
     /// <paramref name="fixedColumns"/> (empty: none), whose u is held and whose unknown is their content instead.
     /// </summary>
+    /// <remarks>
+    /// Cap + c A D is diagonally dominant by columns, so the excess is that of the columns: a column taken out holds
+    /// only its storage (E = p = Cap); a free one passes c G_n down and receives c G_n-1 E_n-1 / p_n-1 from above.
+    /// </remarks>
     public void Factor(double coefficientSeconds, ReadOnlySpan<bool> fixedColumns)
     {
         var c = coefficientSeconds;
-        var cSquared = c * c;
         var count = _capacity.Length;
         var masked = !fixedColumns.IsEmpty;
         ReadOnlySpan<double> capacity = _capacity.AsSpan(0, count);
-        ReadOnlySpan<double> sum = _conductanceSum.AsSpan(0, count);
+        ReadOnlySpan<double> bath = _bathConductance.AsSpan(0, count);
         ReadOnlySpan<double> left = _leftConductance.AsSpan(0, count);
         ReadOnlySpan<double> right = _rightConductance.AsSpan(0, count);
-        ReadOnlySpan<double> leftSquared = _leftConductanceSquared.AsSpan(0, count);
         var inversePivot = Factors.InversePivot[..count];
         var lowerMultiplier = Factors.LowerMultiplier[..count];
         var upperMultiplier = Factors.UpperMultiplier[..count];
-        var previous = 0.0;
+        var kept = 0.0;
         for (var n = 0; n < count; n++)
         {
-            // -l_n u_n-1 / p_n-1 = -c^2 G_n-1^2 / p_n-1: the product of the entries is off the critical path.
-            var product = cSquared * leftSquared[n];
-            var diagonal = capacity[n] + (c * sum[n]);
             var lower = c * left[n];
             var upper = c * right[n];
-            if (masked)
+            double pivot;
+            if (masked && fixedColumns[n])
             {
-                var fixedLeft = n > 0 && fixedColumns[n - 1];
-                var fixedRight = n < count - 1 && fixedColumns[n + 1];
-                product = fixedLeft || fixedColumns[n] ? 0 : product;
-                diagonal = fixedColumns[n] ? capacity[n] : diagonal;
-                lower = fixedLeft ? 0 : lower;
-                upper = fixedRight ? 0 : upper;
+                pivot = 1 / capacity[n];
+                kept = 1;
+            }
+            else
+            {
+                (pivot, kept) = Pivot(capacity[n] + (c * bath[n]), lower, kept, upper);
             }
 
-            previous = InversePivot(product, previous, diagonal);
-            inversePivot[n] = previous;
-            lowerMultiplier[n] = lower * previous;
-            upperMultiplier[n] = upper * previous;
+            if (masked)
+            {
+                lower = n > 0 && fixedColumns[n - 1] ? 0 : lower;
+                upper = n < count - 1 && fixedColumns[n + 1] ? 0 : upper;
+            }
+
+            inversePivot[n] = pivot;
+            lowerMultiplier[n] = lower * pivot;
+            upperMultiplier[n] = upper * pivot;
         }
     }
 
     /// <summary>
-    /// 1 / p_n = 1 / (d_n - l_n u_n-1 / p_n-1), from the product of the off-diagonal entries and 1 / p_n-1: one place
-    /// for the rounding of the pivots, shared by every sweep that factors.
+    /// 1 / p_n and E_n / p_n from the row's own excess (storage and bath), its coupling c G_n-1 to the row before, that
+    /// row's E_n-1 / p_n-1, and its coupling c G_n to the row after: one place for the rounding of the pivots, shared by
+    /// every sweep that factors. No subtraction, so no cancellation however large c is.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static double InversePivot(double offDiagonalProduct, double previousInversePivot, double diagonal)
-        => 1 / Math.FusedMultiplyAdd(-offDiagonalProduct, previousInversePivot, diagonal);
+    public static (double InversePivot, double Kept) Pivot(double ownExcess, double coupledBefore, double keptBefore, double coupledAfter)
+    {
+        var excess = Math.FusedMultiplyAdd(coupledBefore, keptBefore, ownExcess);
+        var inverse = 1 / (excess + coupledAfter);
+        return (inverse, excess * inverse);
+    }
 
     /// <summary>Row n of c A: the entries left of and right of the diagonal, and the diagonal (without storage).</summary>
     public static (double Lower, double Diagonal, double Upper) Row(DiffusionSystem system, int n, double coefficientSeconds)

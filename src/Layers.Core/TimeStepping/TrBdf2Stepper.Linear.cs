@@ -20,9 +20,12 @@ internal sealed partial class TrBdf2Stepper
         var factors = matrix.Factors;
         var n = start.Length;
 
-        // Trapezoidal stage: (Cap + c A) u_g = Cap u_n + c (s - A u_n) + c s.
+        // Trapezoidal stage: (Cap + c A) u_g = Cap u_n + c (s - A u_n) + c s, solved as u_g = 2 z - u_n with
+        // (Cap + c A) z = Cap u_n + c s (the trapezoidal rule is a backward Euler half step extrapolated). The right-hand
+        // side then holds no rate: c (s - A u_n) is a difference of fluxes of size c G, which at steps far beyond a
+        // cell's diffusion time holds round-off far larger than Cap u_n, and would carry it into u_g.
         FactorAndTrapezoidalForward(matrix, start, c);
-        BackwardWithResidual(factors, _stage, _rateAtStage);
+        BackwardReflectedWithResidual(factors, start, _stage, _rateAtStage);
 
         // BDF2 stage: (Cap + c A) u_n+1 = Cap (w1 u_g - w0 u_n) + c s.
         BdfForward(factors, start, next, c);
@@ -37,36 +40,35 @@ internal sealed partial class TrBdf2Stepper
 
     /// <summary>
     /// Factors Cap + c A (as <see cref="ImplicitMatrix.Factor(double)"/> does) and, in the same sweep, runs the forward
-    /// sweep of the trapezoidal stage into the stage array: the substitution's chain does not feed the pivots', so it runs
+    /// sweep of the half step's z into the stage array: the substitution's chain does not feed the pivots', so it runs
     /// in the shadow of the division that each pivot waits for.
     /// </summary>
     private void FactorAndTrapezoidalForward(ImplicitMatrix matrix, ReadOnlySpan<double> start, double c)
     {
         var count = start.Length;
-        var cSquared = c * c;
         var factors = matrix.Factors;
         var inversePivot = factors.InversePivot[..count];
         var lowerMultiplier = factors.LowerMultiplier[..count];
         var upperMultiplier = factors.UpperMultiplier[..count];
         var capacity = matrix.Capacity[..count];
-        var sum = matrix.ConductanceSum[..count];
+        var bath = matrix.BathConductance[..count];
         var left = matrix.LeftConductance[..count];
         var right = matrix.RightConductance[..count];
-        var leftSquared = matrix.LeftConductanceSquared[..count];
-        ReadOnlySpan<double> rate = _rateAtStart.AsSpan(0, count);
         ReadOnlySpan<double> source = _source.AsSpan(0, count);
         var stage = _stage.AsSpan(0, count);
-        var pivot = 0.0;
+        var kept = 0.0;
         var previous = 0.0;
         for (var n = 0; n < count; n++)
         {
-            pivot = ImplicitMatrix.InversePivot(cSquared * leftSquared[n], pivot, capacity[n] + (c * sum[n]));
+            var lower = c * left[n];
+            var upper = c * right[n];
+            (var pivot, kept) = ImplicitMatrix.Pivot(capacity[n] + (c * bath[n]), lower, kept, upper);
             inversePivot[n] = pivot;
-            var lower = c * left[n] * pivot;
-            lowerMultiplier[n] = lower;
-            upperMultiplier[n] = c * right[n] * pivot;
-            var rightHandSide = (capacity[n] * start[n]) + (c * (rate[n] + source[n]));
-            previous = Math.FusedMultiplyAdd(lower, previous, rightHandSide * pivot);
+            var lowerOverPivot = lower * pivot;
+            lowerMultiplier[n] = lowerOverPivot;
+            upperMultiplier[n] = upper * pivot;
+            var rightHandSide = (capacity[n] * start[n]) + (c * source[n]);
+            previous = Math.FusedMultiplyAdd(lowerOverPivot, previous, rightHandSide * pivot);
             stage[n] = previous;
         }
     }
@@ -88,6 +90,37 @@ internal sealed partial class TrBdf2Stepper
             previous = Math.FusedMultiplyAdd(lowerMultiplier[n], previous, rightHandSide * inversePivot[n]);
             end[n] = previous;
         }
+    }
+
+    /// <summary>
+    /// Backward sweep of the half step's z in place, each value replaced at once by the stage's u_g = 2 z - u_n, and the
+    /// rate s - A u_g as in <see cref="BackwardWithResidual"/>.
+    /// </summary>
+    private void BackwardReflectedWithResidual(TridiagonalFactors factors, ReadOnlySpan<double> start, Span<double> values, Span<double> rates)
+    {
+        var count = values.Length;
+        ReadOnlySpan<double> upperMultiplier = factors.UpperMultiplier[..count];
+        ReadOnlySpan<double> conductance = _system.Conductance.AsSpan(0, count - 1);
+        var before = start[..count];
+        var x = values[..count];
+        var rate = rates[..count];
+        var right = _system.RightBath;
+        var halfStep = x[count - 1];
+        var after = (2 * halfStep) - before[count - 1];
+        x[count - 1] = after;
+        var outflow = -right.InflowRate(after);
+        for (var n = count - 2; n >= 0; n--)
+        {
+            halfStep = Math.FusedMultiplyAdd(upperMultiplier[n], halfStep, x[n]);
+            var value = (2 * halfStep) - before[n];
+            x[n] = value;
+            var flux = conductance[n] * (value - after);
+            rate[n + 1] = flux - outflow;
+            outflow = flux;
+            after = value;
+        }
+
+        rate[0] = _system.LeftBath.InflowRate(after) - outflow;
     }
 
     /// <summary>
