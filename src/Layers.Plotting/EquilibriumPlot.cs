@@ -145,7 +145,7 @@ public static class EquilibriumPlot
                 later));
         }
 
-        Add("whole system", sample => sample.FractionOfFinalState, result.FinalState.System);
+        Add("whole system", sample => double.IsNaN(sample.FractionOfFinalState) ? null : sample.FractionOfFinalState, result.FinalState.System);
         foreach (var side in new[] { Side.Left, Side.Right })
         {
             if (result.Case.Face(side) is CompartmentFace compartment)

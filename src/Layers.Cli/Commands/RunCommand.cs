@@ -151,7 +151,7 @@ internal static class RunCommand
 
         if (!result.Completed)
         {
-            error.WriteLine($"{casePath}: the solver stopped early ({result.Statistics}); no results were written.");
+            error.WriteLine($"{casePath}: {result.FailureReason}; no results were written.");
             return ExitCodes.SolverFailed;
         }
 

@@ -85,7 +85,7 @@ public static class BatchRunner
             {
                 return result.Statistics.StopReason == TimeStepping.StopReason.Cancelled
                     ? Row(item, BatchStatus.Cancelled, "stopped: the run was cancelled; nothing written")
-                    : Row(item, BatchStatus.Failed, $"the solver stopped early ({result.Statistics}); nothing written");
+                    : Row(item, BatchStatus.Failed, $"{result.FailureReason}; nothing written");
             }
 
             CaseOutputFolder.Write(outputRoot, item.Name, buildFiles(result, item));

@@ -34,7 +34,8 @@ public static class ResultTables
                 row.Add(format.MassPerAreaValue(sample.TransferredIntoMediumPerArea));
             }
 
-            row.Add(DisplayFormat.Percent(report.Sample.FractionOfFinalState));
+            // Undefined (NaN) when the system starts at its final state.
+            row.Add(double.IsNaN(report.Sample.FractionOfFinalState) ? "n/a" : DisplayFormat.Percent(report.Sample.FractionOfFinalState));
             return (IReadOnlyList<string>)row;
         }).ToArray();
         return new TextTable("At the report times", headers, rows);

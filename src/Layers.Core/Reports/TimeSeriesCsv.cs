@@ -48,7 +48,8 @@ public static class TimeSeriesCsv
     private static IEnumerable<string> Row(StateSample sample)
     {
         yield return CsvText.Number(sample.TimeSeconds);
-        yield return CsvText.Number(sample.FractionOfFinalState);
+        // Empty when not applicable (the system starts at its final state).
+        yield return double.IsNaN(sample.FractionOfFinalState) ? string.Empty : CsvText.Number(sample.FractionOfFinalState);
         foreach (var face in new[] { sample.Left, sample.Right })
         {
             if (face is not null)

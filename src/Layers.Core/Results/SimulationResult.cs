@@ -41,6 +41,12 @@ public sealed record SimulationResult
     /// <summary>The food-contact assessment, for a case with food-contact settings that ran to its end.</summary>
     public FoodContactResult? FoodContact { get; init; }
 
-    /// <summary>True when the time loop reached the end of the duration.</summary>
+    /// <summary>
+    /// Why the run is not a result, in words (the solver stopped early, or the run failed its own mass-balance or sign
+    /// check); empty when it completed.
+    /// </summary>
+    public string FailureReason { get; init; } = string.Empty;
+
+    /// <summary>True when the time loop reached the end of the duration and the run passed its own checks.</summary>
     public bool Completed => Statistics.StopReason == StopReason.Completed;
 }

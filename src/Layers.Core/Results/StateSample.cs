@@ -7,7 +7,7 @@ namespace Layers.Core.Results;
 /// <param name="Right">The right face medium, or null when the right face is closed.</param>
 /// <param name="FractionOfFinalState">
 /// 1 - (sum of |m - m_final| over all nodes) / (the same at t = 0): how far the whole system has gone toward its
-/// equilibrium (closed systems) or steady state (with baths); 1 when it starts there.
+/// equilibrium (closed systems) or steady state (with baths); NaN (not applicable) when it starts there, to round-off.
 /// </param>
 /// <param name="MassBalanceError">
 /// (mass now - mass at t = 0 - mass received from baths) / reference mass, where the reference is the larger of the

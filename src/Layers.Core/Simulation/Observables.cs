@@ -15,6 +15,7 @@ internal sealed class Observables
     private readonly double[] _initialState;
     private readonly double _initialMass;
     private readonly double _initialDistance;
+    private readonly bool _startsAtFinalState;
     private readonly SamplingEvents? _sampling;
 
     public Observables(
@@ -31,11 +32,49 @@ internal sealed class Observables
         _initialState = initialState.ToArray();
         _initialMass = system.TotalMass(initialState);
         _initialDistance = DistanceToFinal(initialState);
+        _startsAtFinalState = _initialDistance <= StartsAtFinalStateBelow * MassScale(initialState);
     }
 
-    /// <summary>1 - distance(u, final) / distance(u0, final), with distance the capacity-weighted L1 norm.</summary>
+    /// <summary>
+    /// An initial distance from the final state below this fraction of the mass scale (sum of Cap (|u0| + |u_final|))
+    /// is round-off: the fraction of the way would be round-off divided by round-off.
+    /// </summary>
+    public const double StartsAtFinalStateBelow = 1e-12;
+
+    /// <summary>True when the system starts at its final state (to round-off), so the fraction of the way is undefined.</summary>
+    public bool StartsAtFinalState => _startsAtFinalState;
+
+    /// <summary>
+    /// 1 - distance(u, final) / distance(u0, final), with distance the capacity-weighted L1 norm; NaN (not applicable)
+    /// when the system starts at its final state.
+    /// </summary>
     public double FractionOfFinalState(ReadOnlySpan<double> state)
-        => _initialDistance > 0 ? 1 - (DistanceToFinal(state) / _initialDistance) : 1;
+        => _startsAtFinalState ? double.NaN : 1 - (DistanceToFinal(state) / _initialDistance);
+
+    /// <summary>
+    /// The lowest amount held by a layer or a compartment in the state, relative to the reference mass of the mass
+    /// balance (negative when some amount is below zero; 0 when nothing is).
+    /// </summary>
+    public double LowestAmountRelative(StateSample sample, ReadOnlySpan<double> state, BathTotals baths)
+    {
+        var lowest = 0.0;
+        foreach (var mass in sample.LayerMassPerArea)
+        {
+            lowest = Math.Min(lowest, mass);
+        }
+
+        foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            var node = _system.CompartmentNode(side, _case);
+            if (node >= 0)
+            {
+                lowest = Math.Min(lowest, _system.Capacity[node] * state[node]);
+            }
+        }
+
+        var reference = Reference(baths);
+        return reference > 0 ? lowest / reference : lowest;
+    }
 
     /// <summary>Fraction of the way to equilibrium of a compartment's content, or null if it does not change.</summary>
     public double? CompartmentFraction(Side side, ReadOnlySpan<double> state)
@@ -62,7 +101,7 @@ internal sealed class Observables
         }
 
         var exchanged = baths.LeftPerArea + baths.RightPerArea;
-        var reference = Math.Max(Math.Abs(_initialMass), Math.Abs(baths.LeftPerArea) + Math.Abs(baths.RightPerArea));
+        var reference = Reference(baths);
         var withdrawn = (_sampling?.RemovedPerArea(Side.Left) ?? 0) + (_sampling?.RemovedPerArea(Side.Right) ?? 0);
         var imbalance = _system.TotalMass(state) - _initialMass - exchanged + withdrawn;
         return new StateSample(
@@ -72,6 +111,21 @@ internal sealed class Observables
             Face(Side.Right, state, baths.RightPerArea),
             FractionOfFinalState(state),
             reference > 0 ? imbalance / reference : 0);
+    }
+
+    /// <summary>The reference mass of the mass balance: the larger of the initial mass and the mass exchanged with baths.</summary>
+    private double Reference(BathTotals baths)
+        => Math.Max(Math.Abs(_initialMass), Math.Abs(baths.LeftPerArea) + Math.Abs(baths.RightPerArea));
+
+    private double MassScale(ReadOnlySpan<double> initialState)
+    {
+        var scale = 0.0;
+        for (var n = 0; n < initialState.Length; n++)
+        {
+            scale += _system.Capacity[n] * (Math.Abs(initialState[n]) + Math.Abs(_final.NodeValues[n]));
+        }
+
+        return scale;
     }
 
     private FaceSample? Face(Side side, ReadOnlySpan<double> state, double bathInflow)

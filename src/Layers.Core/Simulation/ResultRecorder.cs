@@ -38,7 +38,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         _final = final;
         _observables = new Observables(simulation, system, initialState, final, sampling);
         _profiles = new ProfileBuilder(simulation, system);
-        _systemFraction = _observables.FractionOfFinalState(initialState);
+        _systemFraction = Tracked(_observables.FractionOfFinalState(initialState));
         _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction);
         _leftTracker = TrackerFor(Side.Left, initialState);
         _rightTracker = TrackerFor(Side.Right, initialState);
@@ -49,6 +49,12 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     public IReadOnlyList<ReportPoint> Reports => _reports;
 
     public double WorstMassBalanceError { get; private set; }
+
+    /// <summary>
+    /// The lowest amount held by any layer or compartment at any output, relative to the mass balance's reference
+    /// mass; 0 when none was negative.
+    /// </summary>
+    public double LowestAmountRelative { get; private set; }
 
     /// <summary>Lag-time intercept t - Q/J, once steady enough.</summary>
     public double? LagTimeSeconds { get; private set; }
@@ -66,6 +72,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         var sample = _observables.Sample(timeSeconds, state, bathInflow);
         _samples.Add(sample);
         WorstMassBalanceError = Math.Max(WorstMassBalanceError, Math.Abs(sample.MassBalanceError));
+        LowestAmountRelative = Math.Min(LowestAmountRelative, _observables.LowestAmountRelative(sample, state, bathInflow));
         if (OutputSchedule.IsReportTime(_case, timeSeconds))
         {
             _reports.Add(new ReportPoint(sample, _profiles.Build(state)));
@@ -79,7 +86,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
 
     public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
     {
-        _systemFraction = _observables.FractionOfFinalState(state);
+        _systemFraction = Tracked(_observables.FractionOfFinalState(state));
         _systemTracker.Observe(timeSeconds, _systemFraction);
         Observe(_leftTracker, Side.Left, timeSeconds, state);
         Observe(_rightTracker, Side.Right, timeSeconds, state);
@@ -100,6 +107,12 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         Times(_leftTracker),
         Times(_rightTracker),
         horizonSeconds);
+
+    /// <summary>
+    /// A system that starts at its final state has no fraction of the way (NaN); for the times to 50/90/99 % and the lag
+    /// time it is all the way there from the start, as when the distance was exactly zero.
+    /// </summary>
+    private static double Tracked(double fraction) => double.IsNaN(fraction) ? 1 : fraction;
 
     private static ThresholdTimes? Times(CrossingTracker? tracker)
         => tracker is null ? null : new ThresholdTimes(tracker.Times[0], tracker.Times[1], tracker.Times[2]);

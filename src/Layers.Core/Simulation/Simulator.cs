@@ -28,6 +28,12 @@ public static class Simulator
         var statistics = StagedIntegration.Run(
             stages, initial, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
             simulation.Solver, observer, sampling, cancellation).Statistics;
+        var failure = statistics.StopReason == StopReason.Completed ? string.Empty : $"the solver stopped early ({statistics})";
+        if (statistics.StopReason == StopReason.Completed)
+        {
+            (var reason, failure) = SelfChecks.Judge(recorder.WorstMassBalanceError, recorder.LowestAmountRelative);
+            statistics = statistics with { StopReason = reason };
+        }
 
         return new SimulationResult
         {
@@ -49,6 +55,7 @@ public static class Simulator
             DispersedLayers = undissolved?.Summaries ?? [],
             DiffusionCell = DiffusionCellAnalysis.Of(simulation, recorder.Samples, sampling),
             Statistics = statistics,
+            FailureReason = failure,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
                 ? null
                 : FoodContactAssessment.Assess(simulation, grid, stages, initial, watcher, cancellation),

@@ -196,7 +196,7 @@ public static class DesignSolver
 
             if (!run.Completed)
             {
-                throw new StopException(StudyStatus.SolverFailed, $"with {settings.Input.Write(value)} at {settings.Input.Path} the solver stopped early ({run.Statistics})");
+                throw new StopException(StudyStatus.SolverFailed, $"with {settings.Input.Write(value)} at {settings.Input.Path} {run.FailureReason}");
             }
 
             var evaluated = (value, settings.Result.Read(run) ?? double.NaN, run);

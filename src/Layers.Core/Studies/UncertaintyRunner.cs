@@ -82,7 +82,7 @@ public static class UncertaintyRunner
                 }
                 else if (run.Statistics.StopReason != StopReason.Cancelled)
                 {
-                    failures[i] = run.Statistics.ToString();
+                    failures[i] = run.FailureReason;
                 }
             });
         }
@@ -101,7 +101,7 @@ public static class UncertaintyRunner
             return outcome with
             {
                 Status = StudyStatus.SolverFailed,
-                Message = $"sample {failed + 1} of {settings.Samples} ({Describe(settings, values[failed])}): the solver stopped early ({failures[failed]})",
+                Message = $"sample {failed + 1} of {settings.Samples} ({Describe(settings, values[failed])}): {failures[failed]}",
             };
         }
 

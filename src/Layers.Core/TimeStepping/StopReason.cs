@@ -17,4 +17,10 @@ public enum StopReason
 
     /// <summary>The caller cancelled the run.</summary>
     Cancelled,
+
+    /// <summary>The loop reached the end, but the mass balance did not close (see <c>SelfChecks</c>).</summary>
+    MassBalanceNotClosed,
+
+    /// <summary>The loop reached the end, but some layer or compartment held a negative amount (see <c>SelfChecks</c>).</summary>
+    NegativeAmount,
 }

@@ -50,6 +50,7 @@ public sealed class TransientSolver
         var interpolant = new StepInterpolant(_system.NodeCount);
         var landings = LandingTimes(plan, events);
         var weights = Weights(_options.RelativeTolerance, loop.Scale);
+        var floors = NegativityFloors(initialState, loop.Scale);
 
         // Past the end only the times to approach the final state are sought; they are read to a few digits, so the
         // steps there may be looser (and grow faster) than those that make the reported profiles and amounts.
@@ -92,7 +93,7 @@ public sealed class TransientSolver
             var landsOnTarget = loop.Time + step >= target * (1 - 1e-12);
             var tried = landsOnTarget ? target - loop.Time : step;
             var trial = stepper.Try(loop.Current, tried, loop.Candidate, loop.Time >= plan.EndSeconds ? weightsAfterEnd : weights);
-            var error = NegativeBeyondRoundOff(loop.Candidate, loop.Scale) ? double.PositiveInfinity : trial.NormalisedError;
+            var error = NegativeBeyondRoundOff(loop.Candidate, floors) ? double.PositiveInfinity : trial.NormalisedError;
             var (accept, proposal) = _controller.Decide(tried, error);
             if (!accept)
             {
@@ -215,12 +216,38 @@ public sealed class TransientSolver
         return scale > 0 ? scale : 1;
     }
 
-    private bool NegativeBeyondRoundOff(ReadOnlySpan<double> state, double scale)
+    /// <summary>
+    /// The lowest value each node may take: minus the tolerance times the smaller of the largest |u| and the reference
+    /// mass over the node's storage. The first bounds u, the second the node's amount: where partition coefficients
+    /// span many decades, a node with a large Cap holds much mass at a small u, and a negative u that is round-off on the
+    /// scale of u can be a negative amount far beyond round-off on the scale of the mass.
+    /// </summary>
+    private double[] NegativityFloors(ReadOnlySpan<double> initialState, double scale)
     {
-        var floor = -_options.NegativityTolerance * scale;
-        foreach (var value in state)
+        var capacity = _system.Capacity;
+        var bath = Math.Max(Math.Abs(_system.LeftBath.BathValue), Math.Abs(_system.RightBath.BathValue));
+        double initialMass = 0, bathMass = 0;
+        for (var n = 0; n < capacity.Length; n++)
         {
-            if (value < floor)
+            initialMass += capacity[n] * Math.Abs(initialState[n]);
+            bathMass += capacity[n] * bath;
+        }
+
+        var mass = Math.Max(initialMass, bathMass);
+        var floors = new double[capacity.Length];
+        for (var n = 0; n < floors.Length; n++)
+        {
+            floors[n] = -_options.NegativityTolerance * (mass > 0 ? Math.Min(scale, mass / capacity[n]) : scale);
+        }
+
+        return floors;
+    }
+
+    private static bool NegativeBeyondRoundOff(ReadOnlySpan<double> state, ReadOnlySpan<double> floors)
+    {
+        for (var n = 0; n < state.Length; n++)
+        {
+            if (state[n] < floors[n])
             {
                 return true;
             }
