@@ -26,8 +26,9 @@ public sealed record SolverOptions
     public int MaximumSteps { get; init; } = 1_000_000;
 
     /// <summary>
-    /// A step whose smallest u is below minus this fraction of the largest |u| is rejected and retried smaller, so
-    /// no concentration turns negative beyond round-off. Default 1e-12.
+    /// A step whose smallest u is below minus this fraction of the largest |u|, or where some node's amount Cap u is
+    /// below minus this fraction of the reference mass, is rejected and retried smaller, so no concentration or amount
+    /// turns negative beyond round-off. Default 1e-12.
     /// </summary>
     public double NegativityTolerance { get; init; } = 1e-12;
 
