@@ -93,7 +93,9 @@ public sealed class TransientSolver
             var landsOnTarget = loop.Time + step >= target * (1 - 1e-12);
             var tried = landsOnTarget ? target - loop.Time : step;
             var trial = stepper.Try(loop.Current, tried, loop.Candidate, loop.Time >= plan.EndSeconds ? weightsAfterEnd : weights);
-            var error = NegativeBeyondRoundOff(loop.Candidate, floors) ? double.PositiveInfinity : trial.NormalisedError;
+            var negative = NegativeBeyondRoundOff(loop.Candidate, floors)
+                || NegativeAtOutputsInside(plan.OutputTimesSeconds, outputIndex, loop, loop.Time + tried, stepper, interpolant, floors);
+            var error = negative ? double.PositiveInfinity : trial.NormalisedError;
             var (accept, proposal) = _controller.Decide(tried, error);
             if (!accept)
             {
@@ -241,6 +243,38 @@ public sealed class TransientSolver
         }
 
         return floors;
+    }
+
+    /// <summary>
+    /// True when an output that falls inside the step tried would be interpolated below a floor: the quadratic through
+    /// the start, the stage and the end can dip below zero between them where all three are not, and an amount reported
+    /// there would fail the run's sign check.
+    /// </summary>
+    private static bool NegativeAtOutputsInside(
+        IReadOnlyList<double> outputs,
+        int index,
+        LoopState loop,
+        double end,
+        TrBdf2Stepper stepper,
+        StepInterpolant interpolant,
+        ReadOnlySpan<double> floors)
+    {
+        var start = loop.Time;
+        for (; index < outputs.Count && outputs[index] < end && !IsAt(outputs[index], end); index++)
+        {
+            if (outputs[index] <= start)
+            {
+                continue;
+            }
+
+            interpolant.At((outputs[index] - start) / (end - start), loop.Current, stepper.Stage, loop.Candidate, default, default, default);
+            if (NegativeBeyondRoundOff(interpolant.State, floors))
+            {
+                return true;
+            }
+        }
+
+        return false;
     }
 
     private static bool NegativeBeyondRoundOff(ReadOnlySpan<double> state, ReadOnlySpan<double> floors)
