@@ -129,4 +129,31 @@ public sealed class PlotBoundsTests
         // Only the first layer is loaded and diffusion spreads it from there: the layers nearest to it hold most.
         Assert.Equal(Enumerable.Range(0, 12).Select(i => $"in l{i}"), lines);
     }
+
+    [Fact]
+    public void A_profile_of_many_thin_layers_names_only_those_with_room_and_no_two_names_overlap()
+    {
+        var layers = string.Join(", ", Enumerable.Range(0, 60).Select(i =>
+            $$"""{ "name": "coating number {{i}}", "thickness": "10 um", "diffusionCoefficient": "1e-9 cm2/s", "partitionCoefficient": 1, "initialConcentration": "{{(i == 0 ? 1 : 0)}} mg/mL" }"""));
+        var read = CaseReader.ReadText(
+            $$"""
+            { "title": "Sixty layers", "layers": [{{layers}}], "left": { "kind": "closed" }, "right": { "kind": "closed" }, "duration": "1 h" }
+            """,
+            "sixty.json");
+        Assert.True(read.IsValid, read.FormatErrors());
+        var result = Simulator.Run(read.Case!);
+
+        var model = ProfilePlot.Create(result, new PlotOptions());
+
+        // 60 names of some 130 pixels cannot sit side by side over 60 bands of about 18 pixels in four rows.
+        var names = model.Annotations.OfType<TextAnnotation>().ToList();
+        Assert.InRange(names.Count, 1, 59);
+        var rows = names.GroupBy(name => name.TextPosition.Y).ToList();
+        Assert.InRange(rows.Count, 1, 4);
+        foreach (var row in rows)
+        {
+            var centres = row.Select(name => name.TextPosition.X).Order().ToList();
+            Assert.Equal(centres.Count, centres.Distinct().Count());
+        }
+    }
 }
