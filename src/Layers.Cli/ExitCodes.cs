@@ -40,6 +40,6 @@ public static class ExitCodes
     /// <summary>The command line itself was wrong (unknown option, missing argument): EX_USAGE of sysexits.h.</summary>
     public const int Usage = 64;
 
-    /// <summary>Interrupted (Ctrl+C): 128 + SIGINT, the shell convention.</summary>
+    /// <summary>Interrupted (Ctrl+C or SIGTERM): 128 + SIGINT, the shell convention; nothing new is written for the cases not finished.</summary>
     public const int Cancelled = 130;
 }

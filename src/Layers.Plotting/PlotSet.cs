@@ -20,23 +20,29 @@ public static class PlotSet
     /// <summary>Renders every plot of a result.</summary>
     /// <param name="result">A simulation result.</param>
     /// <param name="options">Picture size and axis choices.</param>
+    /// <param name="cancellation">Checked before each plot; once it fires, <see cref="OperationCanceledException"/> is thrown.</param>
     /// <returns>PNG bytes by file name: profile.png, transfer.png and equilibrium.png, and cumulative.png for cases with permeation metrics.</returns>
-    public static IReadOnlyDictionary<string, byte[]> Render(SimulationResult result, PlotOptions options)
+    public static IReadOnlyDictionary<string, byte[]> Render(SimulationResult result, PlotOptions options, CancellationToken cancellation = default)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
-        var plots = new Dictionary<string, byte[]>(StringComparer.Ordinal)
+        var plots = new Dictionary<string, byte[]>(StringComparer.Ordinal);
+        void Add(string name, Func<OxyPlot.PlotModel> create)
         {
-            [ProfileFileName] = PngRenderer.Render(ProfilePlot.Create(result, options), options),
-            [TransferFileName] = PngRenderer.Render(TransferPlot.Create(result, options), options),
-            [EquilibriumFileName] = PngRenderer.Render(EquilibriumPlot.Create(result, options), options),
-        };
-        if (CumulativeAmountPlot.Applies(result))
-        {
-            plots[CumulativeFileName] = PngRenderer.Render(CumulativeAmountPlot.Create(result, options), options);
+            cancellation.ThrowIfCancellationRequested();
+            plots[name] = PngRenderer.Render(create(), options);
         }
 
+        Add(ProfileFileName, () => ProfilePlot.Create(result, options));
+        Add(TransferFileName, () => TransferPlot.Create(result, options));
+        Add(EquilibriumFileName, () => EquilibriumPlot.Create(result, options));
+        if (CumulativeAmountPlot.Applies(result))
+        {
+            Add(CumulativeFileName, () => CumulativeAmountPlot.Create(result, options));
+        }
+
+        cancellation.ThrowIfCancellationRequested();
         return plots;
     }
 }

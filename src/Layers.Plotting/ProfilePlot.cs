@@ -9,8 +9,9 @@ using OxyPlot.Series;
 namespace Layers.Plotting;
 
 /// <summary>
-/// Concentration across the stack at each report time: one colour per time, one line per layer so that the jump
-/// at a partitioning interface shows as a gap, the layers as shaded bands named at the top. A face that touches a
+/// Concentration across the stack at each report time (at most 12 of them, spread evenly): one colour per time, one
+/// line per layer so that the jump at a partitioning interface shows as a gap, the layers as shaded bands named at
+/// the top (names that find no room are left out when there are many layers). A face that touches a
 /// medium (compartment or bath) gets a narrow strip beyond it showing the medium's concentration at the same
 /// times, so that the jump at that face shows too.
 /// </summary>
@@ -21,6 +22,12 @@ public static class ProfilePlot
 
     // Width of the strip standing for a face medium, as a fraction of the stack's thickness.
     private const double MediumStripFraction = 0.08;
+
+    // Most report times drawn: more curves would not be told apart, and each costs a line per layer.
+    private const int MostTimesDrawn = 12;
+
+    // Above this many bands, a name that finds no free row is left out rather than pushed down over the curves.
+    private const int ManyBands = 40;
 
     /// <summary>Builds the profile plot.</summary>
     /// <param name="result">A simulation result.</param>
@@ -40,7 +47,7 @@ public static class ProfilePlot
 
         var model = PlotFrame.Create(
             simulation.Title,
-            ["Concentration across the stack at the report times", FaceText.Both(simulation)],
+            [TimesLine(result.Reports.Count), FaceText.Both(simulation)],
             options);
         var thickness = depthUnit.FromSi(simulation.Stack.TotalThicknessMeters);
         var xAxis = PlotFrame.Linear(AxisPosition.Bottom, $"Depth from the left face ({DisplayText.Unit(depthUnit)})");
@@ -137,7 +144,7 @@ public static class ProfilePlot
         }
 
         var index = 0;
-        foreach (var report in result.Reports)
+        foreach (var report in Drawn(result.Reports))
         {
             var sample = report.Sample;
             double? Medium(Side side) => (side == Side.Left ? sample.Left : sample.Right)?.ConcentrationKgPerCubicMeter;
@@ -156,6 +163,20 @@ public static class ProfilePlot
 
         return curves;
     }
+
+    /// <summary>The report times drawn: all of them, or as many as can be told apart, spread evenly, the last included.</summary>
+    private static IEnumerable<ReportPoint> Drawn(IReadOnlyList<ReportPoint> reports) =>
+        reports.Count <= MostTimesDrawn
+            ? reports
+            : Enumerable.Range(0, MostTimesDrawn)
+                .Select(i => (int)Math.Round(i * (reports.Count - 1) / (double)(MostTimesDrawn - 1)))
+                .Distinct()
+                .Select(i => reports[i]);
+
+    private static string TimesLine(int reports) =>
+        reports <= MostTimesDrawn
+            ? "Concentration across the stack at the report times"
+            : $"Concentration across the stack at {MostTimesDrawn} of the {reports} report times, spread evenly (all are in profiles.csv)";
 
     private static (double Low, double High) ValueRange(List<Curve> curves, bool logarithmic)
     {
@@ -241,7 +262,11 @@ public static class ProfilePlot
             var rows = Enumerable.Range(0, 4)
                 .Select(row => Labels.Box(left, area.Top + PlotStyle.LabelGap / 2 + row * size.Height, size))
                 .ToList();
-            var box = placer.Place(rows);
+            if ((bands.Count > ManyBands ? placer.TryPlace(rows) : placer.Place(rows)) is not { } box)
+            {
+                continue;
+            }
+
             boxes.Add((box, band.Name, band));
             bottom = Math.Max(bottom, box.Bottom);
         }

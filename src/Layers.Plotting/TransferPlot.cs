@@ -242,20 +242,23 @@ public static class TransferPlot
     private static PlotModel LayerHoldings(SimulationResult result, PlotOptions options, TimeAxis time, UnitDefinition massUnit)
     {
         var layers = result.Case.Stack.Layers;
+        var samples = time.Samples(result).ToList();
+        var drawn = HoldingMost(layers.Count, samples);
         var model = PlotFrame.Create(
             result.Case.Title,
-            ["Both faces closed, nothing leaves the stack: mass per area held by each layer"],
+            [drawn.Count == layers.Count
+                ? "Both faces closed, nothing leaves the stack: mass per area held by each layer"
+                : $"Both faces closed, nothing leaves the stack: mass per area held by the {drawn.Count} of the {layers.Count} layers that hold most"],
             options);
         model.Axes.Add(time.Axis);
         var axis = PlotFrame.Linear(AxisPosition.Left, $"Held per area of stack ({DisplayText.Unit(massUnit)})");
         axis.Key = MassAxisKey;
         model.Axes.Add(axis);
-        var samples = time.Samples(result).ToList();
         var (low, high) = Range(
             samples.SelectMany(sample => sample.LayerMassPerArea).Select(massUnit.FromSi), options with { LimitMassPerArea = null }, massUnit);
         axis.Minimum = low;
         axis.Maximum = high;
-        for (var i = 0; i < layers.Count; i++)
+        foreach (var i in drawn)
         {
             var index = i;
             model.Series.Add(Line(
@@ -267,6 +270,18 @@ public static class TransferPlot
 
         return model;
     }
+
+    // Most layers drawn one line each: more would not be told apart, and each costs a line and a legend entry.
+    private const int MostLayersDrawn = 12;
+
+    /// <summary>The layers drawn, in stack order: all, or the ones with the largest holding at any time.</summary>
+    private static List<int> HoldingMost(int layerCount, List<StateSample> samples) =>
+        layerCount <= MostLayersDrawn
+            ? [.. Enumerable.Range(0, layerCount)]
+            : [.. Enumerable.Range(0, layerCount)
+                .OrderByDescending(i => samples.Select(sample => sample.LayerMassPerArea[i]).DefaultIfEmpty(0).Max())
+                .Take(MostLayersDrawn)
+                .Order()];
 
     private static string Shown(double kgPerCubicMeter, (UnitDefinition Unit, double Divisor) scale)
         => DisplayText.Quantity(scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor), scale.Unit);

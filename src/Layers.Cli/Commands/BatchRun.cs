@@ -23,7 +23,7 @@ internal static class BatchRun
             collection.Items,
             settings.OutputRoot,
             settings.Jobs,
-            (result, item) => CaseFiles.Build(result, settings with { CasePath = item.File }),
+            (result, item) => CaseFiles.Build(result, settings with { CasePath = item.File }, cancellation),
             progress,
             cancellation));
         try

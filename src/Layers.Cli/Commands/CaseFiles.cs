@@ -11,16 +11,27 @@ internal static class CaseFiles
 {
     public const string Summary = "summary.json";
 
-    public static Dictionary<string, byte[]> Build(SimulationResult result, RunSettings settings)
+    /// <summary>
+    /// The files of a solved case; throws <see cref="OperationCanceledException"/> between plots and files once
+    /// <paramref name="cancellation"/> fires (Ctrl+C, SIGTERM), so that nothing more is made.
+    /// </summary>
+    public static Dictionary<string, byte[]> Build(SimulationResult result, RunSettings settings, CancellationToken cancellation)
     {
-        var pictures = settings.Plots ? PlotSet.Render(result, WithMigrationLimit(settings.PlotOptions, result)) : new Dictionary<string, byte[]>();
-        var files = new Dictionary<string, byte[]>
+        var pictures = settings.Plots
+            ? PlotSet.Render(result, WithMigrationLimit(settings.PlotOptions, result), cancellation)
+            : new Dictionary<string, byte[]>();
+        var files = new Dictionary<string, byte[]>();
+        void Add(string name, Func<string> text)
         {
-            [Summary] = Encoding.UTF8.GetBytes(SummaryJson.Write(result, settings.CasePath)),
-            ["timeseries.csv"] = Encoding.UTF8.GetBytes(TimeSeriesCsv.Write(result)),
-            ["profiles.csv"] = Encoding.UTF8.GetBytes(ProfilesCsv.Write(result)),
-            ["report.html"] = Encoding.UTF8.GetBytes(HtmlReport.Write(result, settings.CasePath, pictures)),
-        };
+            cancellation.ThrowIfCancellationRequested();
+            files[name] = Encoding.UTF8.GetBytes(text());
+        }
+
+        Add(Summary, () => SummaryJson.Write(result, settings.CasePath));
+        Add("timeseries.csv", () => TimeSeriesCsv.Write(result));
+        Add("profiles.csv", () => ProfilesCsv.Write(result));
+        Add("report.html", () => HtmlReport.Write(result, settings.CasePath, pictures));
+        cancellation.ThrowIfCancellationRequested();
         foreach (var (name, png) in pictures)
         {
             files[name] = png;

@@ -103,7 +103,12 @@ internal static class FitCommand
         string folder;
         try
         {
-            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(settings.CasePath) + "-fit", files);
+            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(settings.CasePath) + "-fit", files, cancellation);
+        }
+        catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
+        {
+            error.WriteLine($"{settings.CasePath}: fit cancelled; no results were written.");
+            return ExitCodes.Cancelled;
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {

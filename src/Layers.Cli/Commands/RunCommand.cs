@@ -2,6 +2,7 @@ using System.CommandLine;
 using Layers.Core.Batch;
 using Layers.Core.Cases;
 using Layers.Core.Reports;
+using Layers.Core.Results;
 using Layers.Core.Simulation;
 using Layers.Plotting;
 
@@ -129,7 +130,16 @@ internal static class RunCommand
         }
     }
 
-    private static int Execute(RunSettings settings, TextWriter output, TextWriter error, CancellationToken cancellation)
+    private static int Execute(RunSettings settings, TextWriter output, TextWriter error, CancellationToken cancellation) =>
+        Execute(settings, output, error, CaseFiles.Build, cancellation);
+
+    /// <summary>One case, with the maker of its files given (tests cancel while the files are made).</summary>
+    internal static int Execute(
+        RunSettings settings,
+        TextWriter output,
+        TextWriter error,
+        Func<SimulationResult, RunSettings, CancellationToken, Dictionary<string, byte[]>> buildFiles,
+        CancellationToken cancellation)
     {
         var clock = System.Diagnostics.Stopwatch.StartNew();
         var phases = new PhaseClock();
@@ -155,12 +165,18 @@ internal static class RunCommand
             return ExitCodes.SolverFailed;
         }
 
-        var files = CaseFiles.Build(result, settings);
-        phases.Mark(settings.Plots ? "files and plots" : "files");
+        Dictionary<string, byte[]> files;
         string folder;
         try
         {
-            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(casePath), files);
+            files = buildFiles(result, settings, cancellation);
+            phases.Mark(settings.Plots ? "files and plots" : "files");
+            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(casePath), files, cancellation);
+        }
+        catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
+        {
+            error.WriteLine($"{casePath}: cancelled; no results were written.");
+            return ExitCodes.Cancelled;
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {

@@ -19,8 +19,9 @@ public interface IBatchProgress
 /// <summary>
 /// Runs the cases of a batch in parallel, at most <c>jobs</c> at a time. Each case is read, solved and written on
 /// its own: a bad or failing case becomes a row with its message and never stops the others. Each case folder is
-/// written as a whole (<see cref="CaseOutputFolder"/>). On cancellation the cases running are stopped, the ones not
-/// started are marked cancelled, and the cases already written keep their results.
+/// written as a whole (<see cref="CaseOutputFolder"/>). On cancellation the cases running are stopped (in their solve,
+/// or while their files are made or written: nothing of theirs is committed), the ones not started are marked
+/// cancelled, and the cases already written keep their results.
 /// </summary>
 public static class BatchRunner
 {
@@ -28,7 +29,10 @@ public static class BatchRunner
     /// <param name="items">The cases.</param>
     /// <param name="outputRoot">The folder that receives one folder per case.</param>
     /// <param name="jobs">How many cases run at once (at least 1).</param>
-    /// <param name="buildFiles">The files to write for a solved case, by name (summary.json, CSV, plots ...).</param>
+    /// <param name="buildFiles">
+    /// The files to write for a solved case, by name (summary.json, CSV, plots ...); it may throw
+    /// <see cref="OperationCanceledException"/> once <paramref name="cancellation"/> fires.
+    /// </param>
     /// <param name="progress">Told about starts and ends; may be null.</param>
     /// <param name="cancellation">Stops the batch.</param>
     public static IReadOnlyList<BatchRow> Run(
@@ -88,12 +92,18 @@ public static class BatchRunner
                     : Row(item, BatchStatus.Failed, $"{result.FailureReason}; nothing written");
             }
 
-            CaseOutputFolder.Write(outputRoot, item.Name, buildFiles(result, item));
+            // Cancellation after the solve (while plots and files are made or written) commits nothing either.
+            var files = buildFiles(result, item);
+            CaseOutputFolder.Write(outputRoot, item.Name, files, cancellation);
             return new BatchRow(item.Name, item.File, item.Parameters, BatchStatus.Succeeded, string.Empty, BatchKeyResults.From(result))
             {
                 SolveSeconds = seconds,
                 Limit = LimitCheck.Of(result),
             };
+        }
+        catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
+        {
+            return Row(item, BatchStatus.Cancelled, "stopped: the run was cancelled; nothing written");
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {

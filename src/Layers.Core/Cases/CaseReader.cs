@@ -123,7 +123,7 @@ public static class CaseReader
         context.DurationText = durationText;
         var left = FaceReader.Read(root, "left", context);
         var right = FaceReader.Read(root, "right", context);
-        var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context);
+        var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context, CaseLimits.MaxReportTimes);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
         var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));

@@ -9,18 +9,23 @@ namespace Layers.Core.Cases;
 /// </summary>
 internal sealed class JsonPositions
 {
-    private readonly Dictionary<string, (long Line, long Column)> _positions = new(StringComparer.Ordinal);
+    // Byte offsets only: the column is counted when an error asks for it, because counting it for every token costs
+    // the length of its line each time, which grows with the square of a one-line file's length.
+    private readonly Dictionary<string, int> _offsets = new(StringComparer.Ordinal);
+    private readonly byte[] _bytes;
+    private readonly List<int> _lineStarts;
 
-    private JsonPositions()
+    private JsonPositions(byte[] bytes)
     {
+        _bytes = bytes;
+        _lineStarts = LineStarts(bytes);
     }
 
     /// <summary>Indexes a document that has already parsed without error.</summary>
     public static JsonPositions Of(string json)
     {
-        var index = new JsonPositions();
         var bytes = Encoding.UTF8.GetBytes(json);
-        var lineStarts = LineStarts(bytes);
+        var index = new JsonPositions(bytes);
         var reader = new Utf8JsonReader(bytes, new JsonReaderOptions { CommentHandling = JsonCommentHandling.Skip });
         var containers = new Stack<(string Path, int NextIndex, bool IsArray)>();
         string? pendingProperty = null;
@@ -31,7 +36,7 @@ internal sealed class JsonPositions
             {
                 case JsonTokenType.PropertyName:
                     pendingProperty = $"{parentPath}.{reader.GetString()}";
-                    index.Record(pendingProperty, reader.TokenStartIndex, bytes, lineStarts);
+                    index.Record(pendingProperty, reader.TokenStartIndex);
                     continue;
                 case JsonTokenType.EndObject or JsonTokenType.EndArray:
                     containers.Pop();
@@ -43,11 +48,11 @@ internal sealed class JsonPositions
             {
                 containers.Pop();
                 containers.Push((parentPath, nextIndex + 1, true));
-                index.Record(path, reader.TokenStartIndex, bytes, lineStarts);
+                index.Record(path, reader.TokenStartIndex);
             }
             else if (pendingProperty is null)
             {
-                index.Record(path, reader.TokenStartIndex, bytes, lineStarts);
+                index.Record(path, reader.TokenStartIndex);
             }
 
             pendingProperty = null;
@@ -65,9 +70,12 @@ internal sealed class JsonPositions
     {
         for (var current = path; current.Length > 0; current = Parent(current))
         {
-            if (_positions.TryGetValue(current, out var position))
+            if (_offsets.TryGetValue(current, out var offset))
             {
-                return position;
+                var line = _lineStarts.BinarySearch(offset);
+                line = line >= 0 ? line : ~line - 1;
+                var column = Encoding.UTF8.GetCharCount(_bytes, _lineStarts[line], offset - _lineStarts[line]) + 1;
+                return (line + 1, column);
             }
         }
 
@@ -94,16 +102,5 @@ internal sealed class JsonPositions
         return starts;
     }
 
-    private void Record(string path, long byteOffset, byte[] bytes, List<int> lineStarts)
-    {
-        if (_positions.ContainsKey(path))
-        {
-            return;
-        }
-
-        var line = lineStarts.BinarySearch((int)byteOffset);
-        line = line >= 0 ? line : ~line - 1;
-        var column = Encoding.UTF8.GetCharCount(bytes, lineStarts[line], (int)byteOffset - lineStarts[line]) + 1;
-        _positions[path] = (line + 1, column);
-    }
+    private void Record(string path, long byteOffset) => _offsets.TryAdd(path, (int)byteOffset);
 }

@@ -24,6 +24,13 @@ internal static class LayerReader
             return layers;
         }
 
+        if (array.GetArrayLength() > CaseLimits.MaxLayers)
+        {
+            // Refused before any layer is read, so that a runaway file costs no more than its parse.
+            root.Error("layers", $"at most {CaseLimits.MaxLayers} layers are allowed; got {array.GetArrayLength()}");
+            return layers;
+        }
+
         // Names differing only in letter case or surrounding spaces would be confusing in reports and CSV headers.
         var names = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
         var index = 0;

@@ -14,9 +14,10 @@ internal static class TimesReader
 
     /// <summary>
     /// Reads a list of times within (0, duration]; report times (<paramref name="ascending"/>) must also be strictly
-    /// ascending and must not be an empty list.
+    /// ascending and must not be an empty list. A list longer than <paramref name="most"/> is refused unread.
     /// </summary>
-    public static List<double>? List(JsonFields root, string key, double? duration, string? durationText, bool ascending, ReadContext context)
+    public static List<double>? List(
+        JsonFields root, string key, double? duration, string? durationText, bool ascending, ReadContext context, int most = CaseLimits.MaxOutputTimes)
     {
         if (root.Member(key) is not { } array)
         {
@@ -32,6 +33,12 @@ internal static class TimesReader
         if (ascending && array.GetArrayLength() == 0)
         {
             root.Error(key, "must hold at least one time (leave the key out for the default times); got []");
+            return null;
+        }
+
+        if (array.GetArrayLength() > most)
+        {
+            root.Error(key, $"at most {most} times are allowed; got {array.GetArrayLength()}");
             return null;
         }
 

@@ -1,8 +1,8 @@
 namespace Layers.Core.Reports;
 
 /// <summary>
-/// Writes one file as a whole: to a hidden temporary file beside it, then renamed over the target, so that an
-/// interrupted run leaves the earlier file or the new one, never half of either.
+/// Writes one file as a whole: to a hidden temporary file beside it, flushed to the disk, then renamed over the
+/// target, so that an interrupted run or a power loss leaves the earlier file or the new one, never half of either.
 /// </summary>
 public static class AtomicFile
 {
@@ -11,10 +11,10 @@ public static class AtomicFile
     {
         var folder = Path.GetDirectoryName(Path.GetFullPath(path))!;
         Directory.CreateDirectory(folder);
-        var temporary = Path.Combine(folder, $".{Path.GetFileName(path)}.writing-{Guid.NewGuid().ToString("N")[..8]}");
+        var temporary = Path.Combine(folder, StagingNames.Writing(Path.GetFileName(path), StagingNames.NewToken()));
         try
         {
-            File.WriteAllBytes(temporary, content);
+            DurableFile.Write(temporary, content);
             File.Move(temporary, path, overwrite: true);
         }
         finally
