@@ -6,10 +6,12 @@ namespace Layers.Cli.Commands;
 /// <summary>The case-file argument shared by the commands, and reading it with errors reported the same way.</summary>
 internal static class CaseArgument
 {
-    public static Argument<string> Create() => new("case")
+    public static Argument<string> Create()
     {
-        Description = "Path of a JSON case file (format: docs/case-format.md).",
-    };
+        var argument = new Argument<string>("case") { Description = "Path of a JSON case file (format: docs/case-format.md)." };
+        CommandLineRules.PathsNotOptions(argument);
+        return argument;
+    }
 
     /// <summary>Reads a case; on failure prints every error to <paramref name="error"/> and returns null.</summary>
     public static CaseReadResult? ReadOrReport(string path, TextWriter error)

@@ -27,6 +27,8 @@ internal static class MergeCommand
         var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
         var json = new Option<bool>("--json") { Description = "Print the merged summary.json to stdout instead of the table." };
         var noPlots = new Option<bool>("--no-plots") { Description = "Skip the sweep plots." };
+        CommandLineRules.PathsNotOptions(folders);
+        CommandLineRules.NonEmptyPath(outputRoot);
         var command = new Command("merge", "Combine the summaries of shard runs into one.");
         command.Arguments.Add(folders);
         command.Options.Add(outputRoot);

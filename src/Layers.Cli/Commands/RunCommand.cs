@@ -59,13 +59,11 @@ internal static class RunCommand
         command.Options.Add(jobs);
         command.Options.Add(recursive);
         command.Options.Add(shard);
-        jobs.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int>() is < 1 or > 1024)
-            {
-                result.AddError($"--jobs must be from 1 to 1024; got {result.GetValueOrDefault<int>()}");
-            }
-        });
+        CommandLineRules.PathsNotOptions(caseFile);
+        CommandLineRules.NonEmptyPath(outputRoot);
+        CommandLineRules.WholeNumber(jobs, 1, 1024);
+        CommandLineRules.WholeNumber(width, 200, 10000, " pixels");
+        CommandLineRules.WholeNumber(height, 200, 10000, " pixels");
         shard.Validators.Add(result =>
         {
             if (!ShardSpec.TryParse(result.GetValueOrDefault<string?>() ?? string.Empty, out _, out var problem))
@@ -73,16 +71,6 @@ internal static class RunCommand
                 result.AddError(problem!);
             }
         });
-        foreach (var size in new[] { width, height })
-        {
-            size.Validators.Add(result =>
-            {
-                if (result.GetValueOrDefault<int>() is < 200 or > 10000)
-                {
-                    result.AddError($"{size.Name} must be from 200 to 10000 pixels; got {result.GetValueOrDefault<int>()}");
-                }
-            });
-        }
         command.SetAction((parseResult, cancellation) =>
         {
             var paths = parseResult.GetValue(caseFile)!;
