@@ -133,7 +133,7 @@ internal static class MergeCommand
             var comma = line.LastIndexOf(',');
             if (comma > 0 && double.TryParse(line[(comma + 1)..], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out var seconds))
             {
-                times[line[..comma].Trim('"')] = seconds;
+                times[CsvText.ReadText(line[..comma].Trim('"'))] = seconds;
             }
         }
 
