@@ -13,10 +13,23 @@ internal static class CaseArgument
         return argument;
     }
 
-    /// <summary>Reads a case; on failure prints every error to <paramref name="error"/> and returns null.</summary>
-    public static CaseReadResult? ReadOrReport(string path, TextWriter error)
+    /// <summary>
+    /// <c>--allow-outside-files</c>: lets a case name files (its measured data) outside its own folder, which is
+    /// refused by default so that a case received from someone else cannot make the tool read any file.
+    /// </summary>
+    public static Option<bool> AllowOutsideFilesOption() => new("--allow-outside-files")
     {
-        var result = CaseReader.ReadFile(path);
+        Description = "Let case files name data files outside their own folder (refused by default; see docs/cli.md).",
+    };
+
+    /// <summary>The access the option gives.</summary>
+    public static CaseFileAccess Access(ParseResult parseResult, Option<bool> allowOutside) =>
+        parseResult.GetValue(allowOutside) ? CaseFileAccess.Anywhere : CaseFileAccess.InsideCaseFolder;
+
+    /// <summary>Reads a case; on failure prints every error to <paramref name="error"/> and returns null.</summary>
+    public static CaseReadResult? ReadOrReport(string path, TextWriter error, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
+    {
+        var result = CaseReader.ReadFile(path, access);
         if (result.IsValid)
         {
             return result;

@@ -59,6 +59,8 @@ internal static class RunCommand
         command.Options.Add(jobs);
         command.Options.Add(recursive);
         command.Options.Add(shard);
+        var allowOutside = CaseArgument.AllowOutsideFilesOption();
+        command.Options.Add(allowOutside);
         CommandLineRules.PathsNotOptions(caseFile);
         CommandLineRules.NonEmptyPath(outputRoot);
         CommandLineRules.WholeNumber(jobs, 1, 1024);
@@ -88,6 +90,7 @@ internal static class RunCommand
                     !parseResult.GetValue(linearTime)),
                 Jobs = parseResult.GetValue(jobs),
                 Recursive = parseResult.GetValue(recursive),
+                Access = CaseArgument.Access(parseResult, allowOutside),
                 Shard = parseResult.GetValue(shard) is { } text && ShardSpec.TryParse(text, out var part, out _) ? part : null,
             };
             using var interrupt = new InterruptScope(cancellation);
@@ -107,14 +110,8 @@ internal static class RunCommand
             return false;
         }
 
-        try
-        {
-            return !SweepExpander.Declares(File.ReadAllText(path));
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            return true; // The single-case path reports the unreadable file.
-        }
+        // An unreadable file is reported by the single-case path.
+        return CaseReader.ReadDocument(path, out _) is not { } text || !SweepExpander.Declares(text);
     }
 
     private static int Execute(RunSettings settings, TextWriter output, TextWriter error, CancellationToken cancellation)
@@ -122,7 +119,7 @@ internal static class RunCommand
         var clock = System.Diagnostics.Stopwatch.StartNew();
         var phases = new PhaseClock();
         var casePath = settings.CasePath;
-        var read = CaseArgument.ReadOrReport(casePath, error);
+        var read = CaseArgument.ReadOrReport(casePath, error, settings.Access);
         phases.Mark("read");
         if (read?.Case is not { } simulation)
         {
