@@ -151,10 +151,10 @@ public sealed class CaseFilePathTests
     }
 
     [Theory]
-    [InlineData($"root:x:0:0:{Secret}:/root:/bin/bash\n1,2\n")]
-    [InlineData($"time [h],cumulative amount [ug/cm2]\n1,{Secret}-and-much-more-text-after-it\n")]
-    [InlineData($"time [h],cumulative amount [ug/cm2]\n1,2,{Secret}\n")]
-    public void A_message_about_a_data_file_quotes_at_most_the_cell_at_fault_and_at_most_24_characters_of_it(string content)
+    [InlineData($"root:x:0:0:{Secret}:/root:/bin/bash\n1,2\n", "/bin/bash")]
+    [InlineData($"time [h],cumulative amount [ug/cm2]\n1,{Secret}-and-much-more-text-after-it\n", "much-more")]
+    [InlineData($"time [h],cumulative amount [ug/cm2]\n1,2,{Secret}\n", Secret)]
+    public void A_message_about_a_data_file_quotes_at_most_the_cell_at_fault_and_at_most_24_characters_of_it(string content, string neverShown)
     {
         using var temp = new TempFolder();
         temp.WriteFile("q.csv", content);
@@ -162,8 +162,7 @@ public sealed class CaseFilePathTests
 
         var message = MeasuredError(CaseReader.ReadFile(caseFile)).Message;
 
-        Assert.DoesNotContain("/bin/bash", message, StringComparison.Ordinal);
-        Assert.DoesNotContain("much-more", message, StringComparison.Ordinal);
+        Assert.DoesNotContain(neverShown, message, StringComparison.Ordinal);
         Assert.StartsWith("'q.csv' line ", message, StringComparison.Ordinal);
     }
 
