@@ -57,7 +57,7 @@ public static class CaseFilePath
 
         var realFolder = RealPath.Of(folder);
         var realPath = RealPath.Of(path);
-        if (realFolder is null || realPath is null || !RealPath.IsWithin(realPath, realFolder) || realPath == realFolder)
+        if (realFolder is null || realPath is null || !RealPath.IsWithin(realPath, realFolder))
         {
             problem = $"'{written}' is outside {folderName}; a file named there must be in that folder or below it " +
                 "(the command line's --allow-outside-files lifts this)";
