@@ -25,6 +25,7 @@ internal static class BatchRun
             settings.Jobs,
             (result, item) => CaseFiles.Build(result, settings with { CasePath = item.File }, cancellation),
             progress,
+            settings.Access,
             cancellation));
         try
         {

@@ -6,15 +6,30 @@ namespace Layers.Cli.Commands;
 /// <summary>The case-file argument shared by the commands, and reading it with errors reported the same way.</summary>
 internal static class CaseArgument
 {
-    public static Argument<string> Create() => new("case")
+    public static Argument<string> Create()
     {
-        Description = "Path of a JSON case file (format: docs/case-format.md).",
+        var argument = new Argument<string>("case") { Description = "Path of a JSON case file (format: docs/case-format.md)." };
+        CommandLineRules.PathsNotOptions(argument);
+        return argument;
+    }
+
+    /// <summary>
+    /// <c>--allow-outside-files</c>: lets a case name files (its measured data) outside its own folder, which is
+    /// refused by default so that a case received from someone else cannot make the tool read any file.
+    /// </summary>
+    public static Option<bool> AllowOutsideFilesOption() => new("--allow-outside-files")
+    {
+        Description = "Let case files name data files outside their own folder (refused by default; see docs/cli.md).",
     };
 
+    /// <summary>The access the option gives.</summary>
+    public static CaseFileAccess Access(ParseResult parseResult, Option<bool> allowOutside) =>
+        parseResult.GetValue(allowOutside) ? CaseFileAccess.Anywhere : CaseFileAccess.InsideCaseFolder;
+
     /// <summary>Reads a case; on failure prints every error to <paramref name="error"/> and returns null.</summary>
-    public static CaseReadResult? ReadOrReport(string path, TextWriter error)
+    public static CaseReadResult? ReadOrReport(string path, TextWriter error, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
     {
-        var result = CaseReader.ReadFile(path);
+        var result = CaseReader.ReadFile(path, access);
         if (result.IsValid)
         {
             return result;

@@ -11,9 +11,11 @@ internal static class CheckCommand
         var caseFile = CaseArgument.Create();
         var command = new Command("check", "Validate a case file and print the stack in consistent units, without solving.");
         command.Arguments.Add(caseFile);
+        var allowOutside = CaseArgument.AllowOutsideFilesOption();
+        command.Options.Add(allowOutside);
         command.SetAction(parseResult =>
         {
-            var read = CaseArgument.ReadOrReport(parseResult.GetValue(caseFile)!, error);
+            var read = CaseArgument.ReadOrReport(parseResult.GetValue(caseFile)!, error, CaseArgument.Access(parseResult, allowOutside));
             if (read?.Case is not { } simulation)
             {
                 return ExitCodes.InvalidInput;

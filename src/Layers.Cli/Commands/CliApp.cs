@@ -24,13 +24,14 @@ public static class CliApp
     }
 
     /// <summary>
-    /// Invokes a parsed command line. System.CommandLine answers a usage error with 1, which layers keeps for
-    /// "a limit was exceeded"; usage errors are mapped to <see cref="ExitCodes.Usage"/> here.
+    /// Invokes a parsed command line. A usage error is answered here, with <see cref="ExitCodes.Usage"/> and one line
+    /// on stderr: System.CommandLine would answer it with 1, which layers keeps for "a limit was exceeded", and with
+    /// the whole help text, in which the mistake is easily missed.
     /// </summary>
     public static int Invoke(ParseResult parseResult, InvocationConfiguration? configuration = null)
     {
-        var code = parseResult.Invoke(configuration);
-        return parseResult.Errors.Count > 0 && code == 1 ? ExitCodes.Usage : code;
+        ArgumentNullException.ThrowIfNull(parseResult);
+        return parseResult.Errors.Count > 0 ? ReportUsageError(parseResult, configuration) : parseResult.Invoke(configuration);
     }
 
     /// <summary>
@@ -39,7 +40,24 @@ public static class CliApp
     /// </summary>
     public static async Task<int> InvokeAsync(ParseResult parseResult, InvocationConfiguration? configuration = null)
     {
-        var code = await parseResult.InvokeAsync(configuration).ConfigureAwait(false);
-        return parseResult.Errors.Count > 0 && code == 1 ? ExitCodes.Usage : code;
+        ArgumentNullException.ThrowIfNull(parseResult);
+        return parseResult.Errors.Count > 0
+            ? ReportUsageError(parseResult, configuration)
+            : await parseResult.InvokeAsync(configuration).ConfigureAwait(false);
+    }
+
+    /// <summary>
+    /// The usage error as one line: one mistake (the others are often its consequences) and where the options
+    /// are listed, e.g. <c>layers run: --jobs must be from 1 to 1024; got '0' (layers run --help lists the options)</c>.
+    /// </summary>
+    private static int ReportUsageError(ParseResult parseResult, InvocationConfiguration? configuration)
+    {
+        // The subcommands are one level below the root.
+        var command = parseResult.CommandResult.Command is RootCommand ? "layers" : "layers " + parseResult.CommandResult.Command.Name;
+        // A word the parser did not recognise says more than the missing command that follows from it.
+        var first = parseResult.Errors.OrderBy(error => error.Message.StartsWith("Required", StringComparison.Ordinal) ? 1 : 0).First();
+        var message = first.Message.ReplaceLineEndings(" ").Trim();
+        (configuration?.Error ?? Console.Error).WriteLine($"{command}: {message} ({command} --help lists the options)");
+        return ExitCodes.Usage;
     }
 }

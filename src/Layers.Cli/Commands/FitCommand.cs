@@ -42,6 +42,8 @@ internal static class FitCommand
         var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
         var json = new Option<bool>("--json") { Description = "Print fit.json to stdout instead of the tables, for scripts." };
         var noPlots = new Option<bool>("--no-plots") { Description = "Skip fit.png." };
+        CommandLineRules.NonEmptyPath(data);
+        CommandLineRules.NonEmptyPath(outputRoot);
         var command = new Command("fit", "Estimate inputs of a case (D, K, ...) from measured concentrations or cumulative amounts by weighted least squares.");
         command.Arguments.Add(caseFile);
         foreach (var option in new Option[] { data, estimate, face, outputRoot, quiet, json, noPlots })

@@ -60,13 +60,13 @@ internal static class RunCommand
         command.Options.Add(jobs);
         command.Options.Add(recursive);
         command.Options.Add(shard);
-        jobs.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int>() is < 1 or > 1024)
-            {
-                result.AddError($"--jobs must be from 1 to 1024; got {result.GetValueOrDefault<int>()}");
-            }
-        });
+        var allowOutside = CaseArgument.AllowOutsideFilesOption();
+        command.Options.Add(allowOutside);
+        CommandLineRules.PathsNotOptions(caseFile);
+        CommandLineRules.NonEmptyPath(outputRoot);
+        CommandLineRules.WholeNumber(jobs, 1, 1024);
+        CommandLineRules.WholeNumber(width, 200, 10000, " pixels");
+        CommandLineRules.WholeNumber(height, 200, 10000, " pixels");
         shard.Validators.Add(result =>
         {
             if (!ShardSpec.TryParse(result.GetValueOrDefault<string?>() ?? string.Empty, out _, out var problem))
@@ -74,16 +74,6 @@ internal static class RunCommand
                 result.AddError(problem!);
             }
         });
-        foreach (var size in new[] { width, height })
-        {
-            size.Validators.Add(result =>
-            {
-                if (result.GetValueOrDefault<int>() is < 200 or > 10000)
-                {
-                    result.AddError($"{size.Name} must be from 200 to 10000 pixels; got {result.GetValueOrDefault<int>()}");
-                }
-            });
-        }
         command.SetAction((parseResult, cancellation) =>
         {
             var paths = parseResult.GetValue(caseFile)!;
@@ -101,6 +91,7 @@ internal static class RunCommand
                     !parseResult.GetValue(linearTime)),
                 Jobs = parseResult.GetValue(jobs),
                 Recursive = parseResult.GetValue(recursive),
+                Access = CaseArgument.Access(parseResult, allowOutside),
                 Shard = parseResult.GetValue(shard) is { } text && ShardSpec.TryParse(text, out var part, out _) ? part : null,
             };
             using var interrupt = new InterruptScope(cancellation);
@@ -120,14 +111,8 @@ internal static class RunCommand
             return false;
         }
 
-        try
-        {
-            return !SweepExpander.Declares(File.ReadAllText(path));
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            return true; // The single-case path reports the unreadable file.
-        }
+        // An unreadable file is reported by the single-case path.
+        return CaseReader.ReadDocument(path, out _) is not { } text || !SweepExpander.Declares(text);
     }
 
     private static int Execute(RunSettings settings, TextWriter output, TextWriter error, CancellationToken cancellation) =>
@@ -144,7 +129,7 @@ internal static class RunCommand
         var clock = System.Diagnostics.Stopwatch.StartNew();
         var phases = new PhaseClock();
         var casePath = settings.CasePath;
-        var read = CaseArgument.ReadOrReport(casePath, error);
+        var read = CaseArgument.ReadOrReport(casePath, error, settings.Access);
         phases.Mark("read");
         if (read?.Case is not { } simulation)
         {

@@ -1,4 +1,5 @@
 using Layers.Core.Batch;
+using Layers.Core.Cases;
 using Layers.Plotting;
 
 namespace Layers.Cli.Commands;
@@ -31,6 +32,9 @@ internal sealed record RunSettings(string CasePath, string OutputRoot)
 
     /// <summary>Look into sub-folders of the folders given.</summary>
     public bool Recursive { get; init; }
+
+    /// <summary>Which files a case may name: by default only those in its own folder (<c>--allow-outside-files</c>).</summary>
+    public CaseFileAccess Access { get; init; } = CaseFileAccess.InsideCaseFolder;
 
     /// <summary>The part of the batch to run; null for all of it.</summary>
     public ShardSpec? Shard { get; init; }

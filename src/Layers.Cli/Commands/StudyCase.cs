@@ -24,7 +24,13 @@ internal static class StudyCase
         }
 
         // The reader has parsed the file already, so it is a JSON object here.
-        var document = CaseVariation.Parse(File.ReadAllText(path))!;
+        var document = CaseVariation.Parse(CaseReader.ReadDocument(path, out _) ?? string.Empty);
+        if (document is null)
+        {
+            error.WriteLine($"{path}: $: cannot read the file again after reading it once; was it changed?");
+            return null;
+        }
+
         if (!document.ContainsKey(section))
         {
             error.WriteLine($"{path}: $.{section}: the case declares no {section} study; see docs/case-format.md, section \"{char.ToUpperInvariant(section[0])}{section[1..]}\"");

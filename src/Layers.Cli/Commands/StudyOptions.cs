@@ -32,23 +32,10 @@ internal sealed class StudyOptions
             command.Options.Add(option);
         }
 
-        _jobs.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int>() is < 1 or > 1024)
-            {
-                result.AddError($"--jobs must be from 1 to 1024; got {result.GetValueOrDefault<int>()}");
-            }
-        });
-        foreach (var size in new[] { _width, _height })
-        {
-            size.Validators.Add(result =>
-            {
-                if (result.GetValueOrDefault<int>() is < 200 or > 10000)
-                {
-                    result.AddError($"{size.Name} must be from 200 to 10000 pixels; got {result.GetValueOrDefault<int>()}");
-                }
-            });
-        }
+        CommandLineRules.NonEmptyPath(_outputRoot);
+        CommandLineRules.WholeNumber(_jobs, 1, 1024);
+        CommandLineRules.WholeNumber(_width, 200, 10000, " pixels");
+        CommandLineRules.WholeNumber(_height, 200, 10000, " pixels");
     }
 
     /// <summary>The values given.</summary>

@@ -26,20 +26,8 @@ internal static class UncertaintyCommand
         command.Options.Add(seed);
         command.Options.Add(latin);
         options.AddTo(command);
-        samples.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int?>() is < 2 or > UncertaintySettings.MaximumSamples)
-            {
-                result.AddError($"--samples must be from 2 to {UncertaintySettings.MaximumSamples}; got {result.GetValueOrDefault<int?>()}");
-            }
-        });
-        seed.Validators.Add(result =>
-        {
-            if (result.GetValueOrDefault<int?>() is < 0)
-            {
-                result.AddError($"--seed must be 0 or more; got {result.GetValueOrDefault<int?>()}");
-            }
-        });
+        CommandLineRules.WholeNumber(samples, 2, UncertaintySettings.MaximumSamples);
+        CommandLineRules.WholeNumber(seed, 0, int.MaxValue);
         command.SetAction((parseResult, cancellation) =>
         {
             using var interrupt = new InterruptScope(cancellation);

@@ -17,6 +17,7 @@ internal static class VerifyCommand
     public static Command Create(TextWriter output, TextWriter error)
     {
         var report = new Option<string?>("--report") { Description = "Folder to receive validation.md and its plots." };
+        CommandLineRules.NonEmptyPath(report);
         var command = new Command("verify", "Run the analytic benchmarks and show how closely the tool reproduces them.");
         command.Options.Add(report);
         command.SetAction((parseResult, cancellation) => Task.FromResult(Execute(parseResult.GetValue(report), output, error, cancellation)));

@@ -1,4 +1,5 @@
 using Layers.Core.Cases;
+using Layers.Core.Files;
 
 namespace Layers.Core.Batch;
 
@@ -20,8 +21,7 @@ public static class BatchCollector
         foreach (var path in paths)
         {
             var found = Directory.Exists(path)
-                ? Directory.EnumerateFiles(path, "*.json", recursive ? SearchOption.AllDirectories : SearchOption.TopDirectoryOnly)
-                    .Order(StringComparer.Ordinal).ToList()
+                ? JsonFilesIn(path, recursive).Order(StringComparer.Ordinal).ToList()
                 : new List<string> { path };
             files.AddRange(found.Where(file => seen.Add(Path.GetFullPath(file))));
         }
@@ -36,17 +36,44 @@ public static class BatchCollector
         return new BatchCollection(MarkDuplicates(items), sweeps.OrderBy(sweep => sweep.Name, StringComparer.Ordinal).ToList());
     }
 
+    /// <summary>
+    /// The *.json in a folder and, when recursive, in its sub-folders, entering each real folder once: a symbolic
+    /// link back to a folder already entered (a loop, or a second way to the same cases) is not followed again,
+    /// where the system's own walk would follow a loop until the path grows 40 links deep.
+    /// </summary>
+    private static List<string> JsonFilesIn(string root, bool recursive)
+    {
+        var files = new List<string>();
+        var entered = new HashSet<string>(StringComparer.Ordinal);
+        var pending = new Stack<string>([root]);
+        while (pending.Count > 0)
+        {
+            var folder = pending.Pop();
+            if (RealPath.Of(folder) is not { } real || !entered.Add(real))
+            {
+                continue;
+            }
+
+            files.AddRange(Directory.EnumerateFiles(folder, "*.json"));
+            if (recursive)
+            {
+                // Pushed last-first, so that of two ways to one folder the first by name is the one kept.
+                foreach (var sub in Directory.EnumerateDirectories(folder).Order(StringComparer.Ordinal).Reverse())
+                {
+                    pending.Push(sub);
+                }
+            }
+        }
+
+        return files;
+    }
+
     private static IEnumerable<BatchItem> Expand(string file, List<SweepGroup> sweeps)
     {
         var name = Path.GetFileNameWithoutExtension(file);
-        string text;
-        try
+        if (CaseReader.ReadDocument(file, out var error) is not { } text)
         {
-            text = File.ReadAllText(file);
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            return [new BatchItem(name, file, null, [new CaseError("$", $"cannot read the file: {exception.Message}")], [])];
+            return [new BatchItem(name, file, null, [error!], [])];
         }
 
         if (!SweepExpander.Declares(text))

@@ -17,6 +17,18 @@ public static class BatchColumns
         "limit", "limitVerdict", "message",
     ];
 
+    /// <summary>
+    /// True for the columns that hold numbers (written by <see cref="CsvText.Number"/>); the others hold text, which
+    /// <see cref="CsvText.Field"/> makes safe to open in a spreadsheet.
+    /// </summary>
+    public static bool HoldsNumbers(int column) => NumberColumns.Contains(Names[column]);
+
+    private static HashSet<string> NumberColumns { get; } = new(StringComparer.Ordinal)
+    {
+        "leftReceivedKgPerSquareMeter", "rightReceivedKgPerSquareMeter", "steadyFluxKgPerSquareMeterSecond", "lagTimeSeconds",
+        "timeTo90PercentSeconds", "worstMassBalanceError",
+    };
+
     /// <summary>The cells of a row, in the order of <see cref="Names"/>; numbers in invariant culture, G10.</summary>
     public static IReadOnlyList<string> Cells(BatchRow row)
     {

@@ -41,6 +41,24 @@ public static class BatchRunner
         int jobs,
         Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
         IBatchProgress? progress,
+        CancellationToken cancellation) =>
+        Run(items, outputRoot, jobs, buildFiles, progress, CaseFileAccess.InsideCaseFolder, cancellation);
+
+    /// <summary>As the other overload, with the files the cases may name chosen by the user.</summary>
+    /// <param name="items">The cases.</param>
+    /// <param name="outputRoot">The folder that receives one folder per case.</param>
+    /// <param name="jobs">How many cases run at once (at least 1).</param>
+    /// <param name="buildFiles">The files to write for a solved case, by name (summary.json, CSV, plots ...).</param>
+    /// <param name="progress">Told about starts and ends; may be null.</param>
+    /// <param name="access">Which files a case may name (its measured data).</param>
+    /// <param name="cancellation">Stops the batch.</param>
+    public static IReadOnlyList<BatchRow> Run(
+        IReadOnlyList<BatchItem> items,
+        string outputRoot,
+        int jobs,
+        Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
+        IBatchProgress? progress,
+        CaseFileAccess access,
         CancellationToken cancellation)
     {
         var rows = new BatchRow[items.Count];
@@ -57,7 +75,7 @@ public static class BatchRunner
             }
 
             progress?.Started(item);
-            rows[index] = RunOne(item, outputRoot, buildFiles, cancellation);
+            rows[index] = RunOne(item, outputRoot, buildFiles, access, cancellation);
             progress?.Finished(rows[index]);
         });
         return BatchRow.Ordered(rows);
@@ -67,6 +85,7 @@ public static class BatchRunner
         BatchItem item,
         string outputRoot,
         Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
+        CaseFileAccess access,
         CancellationToken cancellation)
     {
         if (item.Json is null)
@@ -74,7 +93,7 @@ public static class BatchRunner
             return Row(item, BatchStatus.Invalid, Describe(item.Errors, item.File));
         }
 
-        var read = CaseReader.ReadText(item.Json, item.File);
+        var read = CaseReader.ReadText(item.Json, item.File, access);
         if (read.Case is not { } simulation)
         {
             return Row(item, BatchStatus.Invalid, Describe(read.Errors, item.File));

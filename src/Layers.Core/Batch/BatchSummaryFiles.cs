@@ -48,10 +48,10 @@ public static class BatchSummaryFiles
     public static string WriteCsv(IReadOnlyList<BatchRow> rows)
     {
         var text = new StringBuilder();
-        text.Append(CsvText.Line(BatchColumns.Names)).Append('\n');
+        text.Append(CsvText.Line(BatchColumns.Names.Select(CsvText.Field))).Append('\n');
         foreach (var row in rows)
         {
-            text.Append(CsvText.Line(BatchColumns.Cells(row).Select(CsvText.Field))).Append('\n');
+            text.Append(CsvText.Line(BatchColumns.Cells(row).Select((cell, column) => BatchColumns.HoldsNumbers(column) ? cell : CsvText.Field(cell)))).Append('\n');
         }
 
         return text.ToString();

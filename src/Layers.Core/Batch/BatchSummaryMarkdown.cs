@@ -21,14 +21,11 @@ internal static class BatchSummaryMarkdown
         text.Append('|').Append(string.Concat(headers.Select(_ => " --- |"))).Append('\n');
         foreach (var row in rows)
         {
-            var cells = BatchColumns.Cells(row).Append(BatchColumns.Seconds(row.SolveSeconds)).Select(Escape);
+            var cells = BatchColumns.Cells(row).Append(BatchColumns.Seconds(row.SolveSeconds)).Select(MarkdownText.Cell);
             text.Append("| ").Append(string.Join(" | ", cells)).Append(" |\n");
         }
 
         text.Append('\n').Append(CautionText.Paragraph).Append('\n');
         return text.ToString();
     }
-
-    private static string Escape(string cell) =>
-        cell.Replace("|", "\\|", StringComparison.Ordinal).Replace("\r", " ", StringComparison.Ordinal).Replace("\n", " ", StringComparison.Ordinal);
 }

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using Layers.Core.Discretization;
+using Layers.Core.Files;
 using Layers.Core.Domain;
 using Layers.Core.Simulation;
 using Layers.Core.TimeStepping;
@@ -33,24 +34,32 @@ public static class CaseReader
         CommentHandling = JsonCommentHandling.Disallow,
     };
 
-    /// <summary>Reads a case file from disk.</summary>
-    public static CaseReadResult ReadFile(string path)
+    /// <summary>Reads a case file from disk (<see cref="InputFile"/>: a regular UTF-8 file within the size limit).</summary>
+    /// <param name="path">The case file.</param>
+    /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
+    public static CaseReadResult ReadFile(string path, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
     {
-        string text;
-        try
+        if (ReadDocument(path, out var error) is not { } text)
         {
-            text = File.ReadAllText(path);
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            return new CaseReadResult(path, null, [new CaseError("$", $"cannot read the file: {exception.Message}")]);
+            return new CaseReadResult(path, null, [error!]);
         }
 
-        return ReadText(text, path);
+        return ReadText(text, path, access);
+    }
+
+    /// <summary>The text of a case file, or null with the error that says why it cannot be read.</summary>
+    public static string? ReadDocument(string path, out CaseError? error)
+    {
+        var text = InputFile.ReadText(path, InputFile.CaseLimitBytes, out var problem);
+        error = problem is null ? null : new CaseError("$", problem.StartsWith("cannot read the file", StringComparison.Ordinal) ? problem : $"cannot read the file: {problem}");
+        return text;
     }
 
     /// <summary>Reads a case from JSON text; <paramref name="fileName"/> names it in messages and gives the default title.</summary>
-    public static CaseReadResult ReadText(string json, string fileName)
+    /// <param name="json">The case document.</param>
+    /// <param name="fileName">The case file: named in messages, gives the default title, and is where the files the case names are looked for.</param>
+    /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
+    public static CaseReadResult ReadText(string json, string fileName, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
     {
         JsonDocument document;
         try
@@ -72,7 +81,7 @@ public static class CaseReader
         using (document)
         {
             var errors = new List<CaseError>();
-            var simulation = Read(document.RootElement, fileName, new ReadContext(errors));
+            var simulation = Read(document.RootElement, fileName, new ReadContext(errors, access));
             if (errors.Count == 0 && document.RootElement.ValueKind == JsonValueKind.Object && document.RootElement.TryGetProperty("sweep", out _))
             {
                 // A sweep document read as one case is its base case; once that is valid its sweep must still

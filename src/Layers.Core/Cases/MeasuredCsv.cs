@@ -32,11 +32,12 @@ internal static class MeasuredCsv
 
     /// <summary>
     /// Reads the measured cumulative amounts of a permeation test (two columns, at least three times &gt; 0), taken as
-    /// already corrected for sampling.
+    /// already corrected for sampling, from the file <paramref name="written"/> names relative to the case file.
     /// </summary>
-    public static MeasuredPermeation? Read(string path, string written, string jsonPath, List<CaseError> errors)
+    public static MeasuredPermeation? Read(string caseFile, string written, CaseFileAccess access, string jsonPath, List<CaseError> errors)
     {
-        var table = Read(path, written, Permeation, out var problem);
+        var text = CaseFilePath.ReadText(caseFile, written, access, out var problem);
+        var table = text is null ? null : Parse(text, written, Permeation, out problem);
         if (table is not null && table.TimesSeconds.Count(t => t > 0) < 3)
         {
             problem = $"'{written}' holds {table.TimesSeconds.Count} data lines; at least three at times > 0 are needed to find a steady flux";
@@ -51,21 +52,15 @@ internal static class MeasuredCsv
         return new MeasuredPermeation(written, table!.TimesSeconds, table.Values);
     }
 
-    /// <summary>Reads a measured file; on failure returns null and says why, naming the file and the line.</summary>
-    public static Table? Read(string path, string written, Layout layout, out string? problem)
+    /// <summary>
+    /// Parses the text of a measured file; on failure returns null and says why, naming the file and the line and
+    /// quoting no more of the file than the one cell at fault (the file may not be what the user meant to give).
+    /// </summary>
+    public static Table? Parse(string content, string written, Layout layout, out string? problem)
     {
+        ArgumentNullException.ThrowIfNull(content);
         problem = null;
-        string[] lines;
-        try
-        {
-            lines = File.ReadAllLines(path);
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            problem = $"cannot read the measured data '{written}': {exception.Message}";
-            return null;
-        }
-
+        var lines = content.Split('\n');
         var rows = lines.Select((text, index) => (text: text.Trim(), number: index + 1)).Where(line => line.text.Length > 0).ToArray();
         if (rows.Length == 0)
         {
@@ -83,7 +78,8 @@ internal static class MeasuredCsv
         {
             var count = layout.AllowsDeviation ? "two or three columns" : "two columns";
             var third = layout.AllowsDeviation ? ", and optionally a standard deviation in a unit of the same kind" : string.Empty;
-            problem = $"'{written}' line {rows[0].number}: expected {count} with units in brackets, a time and {layout.ValueWhat}{third}, e.g. '{layout.ValueExample}'; got '{rows[0].text}'";
+            var wrong = time is null ? header[0] : value is null && columns >= 2 ? header[1] : columns > 2 ? header[2] : header[0];
+            problem = $"'{written}' line {rows[0].number}: expected {count} with units in brackets, a time and {layout.ValueWhat}{third}, e.g. '{layout.ValueExample}'; got {Token(wrong)} in {Columns(columns)}";
             return null;
         }
 
@@ -97,20 +93,21 @@ internal static class MeasuredCsv
             if (numbers.Length != columns || numbers.Any(n => n is null))
             {
                 var expected = columns == 2 ? "two numbers separated by a comma, e.g. '4,12.5'" : "three numbers separated by commas, e.g. '4,12.5,0.8'";
-                problem = $"'{written}' line {number}: expected {expected}; got '{text}'";
+                var got = cells.Length != columns ? Columns(cells.Length) : Token(cells[Array.FindIndex(numbers, n => n is null)]) + " where a number belongs";
+                problem = $"'{written}' line {number}: expected {expected}; got {got}";
                 return null;
             }
 
             var t = numbers[0]!.Value;
             if (t < 0 || (times.Count > 0 && time.ToSi(t) <= times[^1]))
             {
-                problem = $"'{written}' line {number}: times must be >= 0 and ascending; got '{cells[0].Trim()}'";
+                problem = $"'{written}' line {number}: times must be >= 0 and ascending; got {Token(cells[0])}";
                 return null;
             }
 
             if (deviations is not null && !(numbers[2] > 0))
             {
-                problem = $"'{written}' line {number}: the standard deviation must be > 0; got '{cells[2].Trim()}'";
+                problem = $"'{written}' line {number}: the standard deviation must be > 0; got {Token(cells[2])}";
                 return null;
             }
 
@@ -122,6 +119,19 @@ internal static class MeasuredCsv
         var name = header[1][..header[1].IndexOf('[', StringComparison.Ordinal)].Trim();
         return new Table(time, value, name, times, values, deviations);
     }
+
+    // A cell is quoted in a message only up to this length: enough to show a typing mistake, too short to carry a
+    // line of someone else's file into the output.
+    private const int QuotedCharacters = 24;
+
+    private static string Token(string cell)
+    {
+        var trimmed = cell.Trim();
+        var shown = new string(trimmed.Take(QuotedCharacters).Select(c => char.IsControl(c) ? '?' : c).ToArray());
+        return $"'{shown}{(trimmed.Length > QuotedCharacters ? "..." : string.Empty)}'";
+    }
+
+    private static string Columns(int count) => count == 1 ? "1 column" : $"{count} columns";
 
     private static double? Number(string cell)
         => double.TryParse(cell.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out var number) && double.IsFinite(number) ? number : null;

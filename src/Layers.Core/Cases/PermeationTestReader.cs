@@ -35,8 +35,7 @@ internal static class PermeationTestReader
         MeasuredPermeation? measured = null;
         if (test.Text("measured") is { } file)
         {
-            var folder = Path.GetDirectoryName(Path.GetFullPath(caseFile)) ?? ".";
-            measured = MeasuredCsv.Read(Path.Combine(folder, file), file, test.PathOf("measured"), context.Errors);
+            measured = MeasuredCsv.Read(caseFile, file, context.Access, test.PathOf("measured"), context.Errors);
         }
 
         return new PermeationTest

@@ -11,9 +11,16 @@ internal sealed class ReadContext
 {
     public static readonly Dimension[] ConcentrationDimensions = [Dimension.MassConcentration, Dimension.MassFraction];
 
-    public ReadContext(List<CaseError> errors) => Errors = errors;
+    public ReadContext(List<CaseError> errors, CaseFileAccess access)
+    {
+        Errors = errors;
+        Access = access;
+    }
 
     public List<CaseError> Errors { get; }
+
+    /// <summary>Which files the case may name.</summary>
+    public CaseFileAccess Access { get; }
 
     public PartitionBasis Basis { get; set; } = PartitionBasis.Volume;
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Studies;
 
 namespace Layers.Core.Fitting;
 
@@ -46,7 +47,13 @@ public static class CaseFitter
             return null;
         }
 
-        var root = (JsonObject)JsonNode.Parse(File.ReadAllText(request.CasePath))!;
+        // Read once already by the case reader, so a JSON object here unless the file changed meanwhile.
+        if (CaseVariation.Parse(CaseReader.ReadDocument(request.CasePath, out _) ?? string.Empty) is not { } root)
+        {
+            errors.Add($"{request.CasePath}: $: cannot read the file again after reading it once; was it changed?");
+            return null;
+        }
+
         if (root.ContainsKey("sweep"))
         {
             errors.Add($"{request.CasePath}: $.sweep: a case with a sweep cannot be fitted; fit a case without \"sweep\"");

@@ -1,4 +1,5 @@
 using Layers.Core.Cases;
+using Layers.Core.Files;
 using Layers.Core.Units;
 
 namespace Layers.Core.Fitting;
@@ -45,7 +46,10 @@ public sealed record MeasuredSeries(
     /// <returns>The series, or null with the problem (file, line, what was expected) in <paramref name="problem"/>.</returns>
     public static MeasuredSeries? Read(string path, out string? problem)
     {
-        if (MeasuredCsv.Read(path, path, Layout, out problem) is not { } table)
+        // The path is the user's own, given on the command line: any regular file they can read.
+        var text = InputFile.ReadText(path, InputFile.CaseLimitBytes, out var reason);
+        problem = reason is null ? null : $"'{path}': {reason}";
+        if (text is null || MeasuredCsv.Parse(text, path, Layout, out problem) is not { } table)
         {
             return null;
         }

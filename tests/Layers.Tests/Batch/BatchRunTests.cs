@@ -57,7 +57,8 @@ public sealed class BatchRunTests
         CliRun.Invoke("run", input, "--recursive", "--out", temp.Combine("four"), "--no-plots", "--jobs", "4");
         CliRun.Invoke("run", input, "--recursive", "--out", temp.Combine("s1"), "--no-plots", "--shard", "1/2");
         CliRun.Invoke("run", input, "--recursive", "--out", temp.Combine("s2"), "--no-plots", "--shard", "2/2");
-        var merge = CliRun.Invoke("merge", temp.Combine("s1"), temp.Combine("s2"), "--out", temp.Combine("merged"));
+        // The sweep file is in a temporary folder, outside the current folder, so merge needs leave to read it again.
+        var merge = CliRun.Invoke("merge", temp.Combine("s1"), temp.Combine("s2"), "--out", temp.Combine("merged"), "--allow-outside-files");
 
         foreach (var file in new[] { "summary.csv", "summary.json" })
         {
@@ -82,7 +83,8 @@ public sealed class BatchRunTests
         CliRun.Invoke(["run", sweep, "--out", temp.Combine("s1"), "--shard", "1/2", .. small]);
         CliRun.Invoke(["run", sweep, "--out", temp.Combine("s2"), "--shard", "2/2", .. small]);
 
-        var merge = CliRun.Invoke("merge", temp.Combine("s1"), temp.Combine("s2"), "--out", temp.Combine("merged"));
+        // The sweep file is in a temporary folder, outside the current folder, so merge needs leave to read it again.
+        var merge = CliRun.Invoke("merge", temp.Combine("s1"), temp.Combine("s2"), "--out", temp.Combine("merged"), "--allow-outside-files");
 
         Assert.True(merge.ExitCode == ExitCodes.Success, merge.Error);
         Assert.False(File.Exists(temp.Combine("s1", "lag.sweep.png")));

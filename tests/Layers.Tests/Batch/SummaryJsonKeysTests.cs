@@ -1,0 +1,33 @@
+using System.Text.Json;
+using Layers.Cli;
+using Layers.Tests.TestSupport;
+
+namespace Layers.Tests.Batch;
+
+/// <summary>docs/outputs.md says how the keys of summary.json's cases relate to the columns of summary.csv; that must hold.</summary>
+public sealed class SummaryJsonKeysTests
+{
+    [Fact]
+    public void Every_summary_csv_column_is_a_summary_json_key_except_those_the_docs_map_to_other_keys()
+    {
+        using var temp = new TempFolder();
+        temp.WriteFile(Path.Combine("in", "one.json"), CaseJson.Minimal);
+        temp.WriteFile(Path.Combine("in", "two.json"), CaseJson.Minimal);
+        Assert.Equal(ExitCodes.Success, CliRun.Invoke("run", temp.Combine("in"), "--out", temp.Combine("out"), "--no-plots", "-q").ExitCode);
+        var columns = File.ReadLines(temp.Combine("out", "summary.csv")).First().Split(',');
+        using var json = JsonDocument.Parse(File.ReadAllText(temp.Combine("out", "summary.json")));
+        var entry = json.RootElement.GetProperty("cases")[0];
+        var keys = entry.EnumerateObject().Select(member => member.Name)
+            .Concat(entry.GetProperty("results").EnumerateObject().Select(member => member.Name))
+            .ToHashSet(StringComparer.Ordinal);
+
+        var missing = columns.Where(column => !keys.Contains(column)).ToList();
+
+        // limitVerdict is the "exceeded" member of the limit object in summary.json, as the docs' limit row says.
+        Assert.Equal(["case", "limitVerdict"], missing);
+        Assert.Contains("name", keys);
+        var docs = File.ReadAllText(RepoRoot.File("docs", "outputs.md")).ReplaceLineEndings(" ");
+        Assert.Contains("except that the case name is under `name` rather than `case`", docs, StringComparison.Ordinal);
+        Assert.Contains("`{ quantity, limit, value, exceeded }`", docs, StringComparison.Ordinal);
+    }
+}
