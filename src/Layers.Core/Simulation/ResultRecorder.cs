@@ -91,7 +91,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         }
     }
 
-    public FinalStateSummary Summary(double horizonSeconds) => new(
+    public FinalStateSummary Summary(double horizonSeconds, double? lastSampleSeconds = null) => new(
         _final.Kind,
         Enumerable.Range(0, _case.Stack.Count).Select(layer => _final.LayerEdges(_case, layer)).ToArray(),
         _final.MediumConcentration(_case.Left, Side.Left),
@@ -99,7 +99,11 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         Times(_systemTracker)!,
         Times(_leftTracker),
         Times(_rightTracker),
-        horizonSeconds);
+        horizonSeconds)
+    {
+        MassLeftAfterSamplingPerArea = _final.MassLeftAfterSamplingPerArea,
+        LastSampleSeconds = _final.MassLeftAfterSamplingPerArea is null ? null : lastSampleSeconds,
+    };
 
     private static ThresholdTimes? Times(CrossingTracker? tracker)
         => tracker is null ? null : new ThresholdTimes(tracker.Times[0], tracker.Times[1], tracker.Times[2]);
