@@ -26,7 +26,11 @@ internal static class CumulativeAmountPlot
         var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
         var time = TimeAxis.Create(result, logarithmic: false);
         var receiver = FaceText.MediumName(simulation.Right) ?? "right face";
-        var subtitle = new List<string> { $"Cumulative amount received by {receiver}: model and measurements, with the steady lines" };
+        var anySteady = new[] { cell.Simulated, cell.Measured }.Any(metrics => metrics is { IsSteady: true });
+        var subtitle = new List<string>
+        {
+            $"Cumulative amount received by {receiver}: model and measurements" + (anySteady ? ", with the steady lines" : string.Empty),
+        };
         subtitle.AddRange(new[] { cell.Simulated, cell.Measured }
             .Where(metrics => metrics?.NoSteadyLineReason is not null)
             .Select(metrics => $"no steady line for the {metrics!.Source} data: {metrics.NoSteadyLineReason}"));

@@ -3,6 +3,7 @@ using Layers.Core.Domain;
 using Layers.Core.Permeation;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
+using Layers.Plotting;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Pharma;
@@ -63,6 +64,10 @@ public sealed class SteadyLineCriteriaTests
         var table = string.Join("\n", DiffusionCellTables.For(result).SelectMany(t => t.Rows).Select(row => string.Join(" | ", row)));
         Assert.Contains("steady flux J_ss | none: no steady line", table, StringComparison.Ordinal);
         Assert.Contains(DiffusionCellTables.Warnings(result), line => line.Contains(metrics.NoSteadyLineReason!, StringComparison.Ordinal));
+
+        var plot = CumulativeAmountPlot.Create(result, new PlotOptions());
+        Assert.Contains("no steady line for the simulated data: the donor lost", plot.Subtitle.Replace('\n', ' '), StringComparison.Ordinal);
+        Assert.DoesNotContain(plot.Series, series => series.Title?.Contains("steady line", StringComparison.Ordinal) == true);
     }
 
     [Fact]
