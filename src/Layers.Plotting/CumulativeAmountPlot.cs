@@ -8,7 +8,8 @@ namespace Layers.Plotting;
 /// <summary>
 /// Model and experiment on one picture: the simulated cumulative amount per area received by the right face medium
 /// (line), the amounts of the receptor samples corrected for earlier samples (open markers), the measured amounts
-/// (filled markers), and the steady line fitted to each (dashed), whose intercepts are the lag times.
+/// (filled markers), and the steady line fitted to each (dashed), whose intercepts are the lag times. A curve that
+/// reaches no steady line gets no line; the subtitle says why.
 /// </summary>
 internal static class CumulativeAmountPlot
 {
@@ -25,7 +26,15 @@ internal static class CumulativeAmountPlot
         var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
         var time = TimeAxis.Create(result, logarithmic: false);
         var receiver = FaceText.MediumName(simulation.Right) ?? "right face";
-        var model = PlotFrame.Create(simulation.Title, [$"Cumulative amount received by {receiver}: model and measurements, with the steady lines"], options);
+        var anySteady = new[] { cell.Simulated, cell.Measured }.Any(metrics => metrics is { IsSteady: true });
+        var subtitle = new List<string>
+        {
+            $"Cumulative amount received by {receiver}: model and measurements" + (anySteady ? ", with the steady lines" : string.Empty),
+        };
+        subtitle.AddRange(new[] { cell.Simulated, cell.Measured }
+            .Where(metrics => metrics?.NoSteadyLineReason is not null)
+            .Select(metrics => $"no steady line for the {metrics!.Source} data: {metrics.NoSteadyLineReason}"));
+        var model = PlotFrame.Create(simulation.Title, subtitle, options);
         model.Axes.Add(time.Axis);
         var yAxis = PlotFrame.Linear(AxisPosition.Left, $"Cumulative amount per area ({DisplayText.Unit(massUnit)})");
         model.Axes.Add(yAxis);
@@ -81,7 +90,7 @@ internal static class CumulativeAmountPlot
 
     private static void AddLine(PlotModel model, PermeationMetrics? metrics, int colour, Layers.Core.Units.UnitDefinition timeUnit, Layers.Core.Units.UnitDefinition massUnit)
     {
-        if (metrics is null)
+        if (metrics is not { IsSteady: true })
         {
             return;
         }

@@ -207,9 +207,14 @@ public static class EquilibriumPlot
     private static IEnumerable<string> Subtitle(SimulationResult result, List<Track> tracks)
     {
         var final = result.FinalState;
-        yield return final.Kind == FinalStateKind.BathEquilibrium
-            ? "Progress toward equilibrium with the bath: 0 % at the start, 100 % at equilibrium"
-            : "Progress toward the closed-system equilibrium: 0 % at the start, 100 % at equilibrium";
+        yield return final.Kind switch
+        {
+            FinalStateKind.BathEquilibrium => "Progress toward equilibrium with the bath: 0 % at the start, 100 % at equilibrium",
+            FinalStateKind.AllRemoved => "Everything ends in the first-order removal: the whole system's progress is the fraction of the initial mass removed",
+            _ when final.MassLeftAfterSamplingPerArea is not null && final.LastSampleSeconds is { } last
+                => $"Progress toward the closed-system equilibrium of the mass left after the last sample ({DisplayText.Time(last)}): 0 % at the start, 100 % at equilibrium",
+            _ => "Progress toward the closed-system equilibrium: 0 % at the start, 100 % at equilibrium",
+        };
         var beyond = tracks.Where(track => track.Missed.Count > 0)
             .Select(track => $"{track.Title}: {string.Join(", ", track.Missed)}")
             .ToList();

@@ -9,9 +9,11 @@ using OxyPlot.Series;
 namespace Layers.Plotting;
 
 /// <summary>
-/// Mass transferred per contact area into each face medium against time. With one receiving compartment, a second
-/// scale on the right reads the same curve as the compartment's concentration; otherwise (two compartments, or a
-/// compartment that only gives mass) the compartments' concentrations get a panel of their own under the amounts.
+/// Mass transferred per contact area into each face medium against time. With one receiving compartment that keeps
+/// all it receives, a second scale on the right reads the same curve as the compartment's concentration; otherwise
+/// (two compartments, a compartment that only gives mass, or one that loses mass to sampling or first-order removal,
+/// whose content is no longer what it received) the compartments' concentrations get a panel of their own under the
+/// amounts.
 /// An optional limit is drawn as a dashed line with its label and the time each receiving medium reaches it.
 /// </summary>
 public static class TransferPlot
@@ -46,7 +48,7 @@ public static class TransferPlot
             simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options), options);
         model.Axes.Add(time.Axis);
         var compartments = media.Where(medium => medium.Face is CompartmentFace).ToList();
-        var secondScale = compartments.Count == 1 && !compartments[0].Flipped;
+        var secondScale = compartments.Count == 1 && !compartments[0].Flipped && KeepsWhatItReceives((CompartmentFace)compartments[0].Face);
         var panel = compartments.Count > 0 && !secondScale;
         var massAxis = PlotFrame.Linear(AxisPosition.Left, $"Transferred per contact area ({DisplayText.Unit(massUnit)})");
         massAxis.Key = MassAxisKey;
@@ -77,6 +79,13 @@ public static class TransferPlot
 
         return model;
     }
+
+    /// <summary>
+    /// True when the compartment's concentration is c0 + m / (V/A) for the amount m it received: not so once samples or
+    /// first-order removal take some of it out, since m counts what they took and the compartment no longer holds it.
+    /// </summary>
+    private static bool KeepsWhatItReceives(CompartmentFace compartment)
+        => compartment.Sampling is null && compartment.RemovalRatePerSecond <= 0;
 
     private static List<Medium> Media(
         SimulationResult result, double firstSeconds, UnitDefinition timeUnit, UnitDefinition massUnit)

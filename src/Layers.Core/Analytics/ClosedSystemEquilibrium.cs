@@ -18,21 +18,30 @@ public sealed record ClosedSystemEquilibrium(double ContinuousVariable)
     /// <exception cref="ArgumentException">When a face is a bath (the system is open).</exception>
     public static ClosedSystemEquilibrium Of(SimulationCase simulation)
     {
+        ArgumentNullException.ThrowIfNull(simulation);
+        var mass = simulation.Stack.InitialMassPerArea
+            + new[] { simulation.Left, simulation.Right }.OfType<CompartmentFace>().Sum(compartment => compartment.InitialMassPerArea);
+        return Of(simulation, mass);
+    }
+
+    /// <summary>
+    /// The equilibrium of a closed case that holds <paramref name="massPerArea"/> rather than its initial mass: the
+    /// state it settles to once nothing more is taken out (after the last sample of a sampled compartment).
+    /// </summary>
+    /// <param name="simulation">A closed case.</param>
+    /// <param name="massPerArea">Mass per contact area in the whole system, kg/m2.</param>
+    /// <exception cref="ArgumentException">When a face is a bath (the system is open).</exception>
+    public static ClosedSystemEquilibrium Of(SimulationCase simulation, double massPerArea)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
         if (!simulation.IsClosed)
         {
             throw new ArgumentException("A case with a bath is open; use SteadyStateStack.", nameof(simulation));
         }
 
-        var mass = simulation.Stack.InitialMassPerArea;
-        var capacity = simulation.Stack.Layers.Sum(layer => layer.ThicknessMeters * layer.PartitionCoefficient);
-        foreach (var face in new[] { simulation.Left, simulation.Right })
-        {
-            if (face is CompartmentFace compartment)
-            {
-                mass += compartment.InitialMassPerArea;
-                capacity += compartment.VolumePerAreaMeters * compartment.PartitionCoefficient;
-            }
-        }
+        var mass = massPerArea;
+        var capacity = simulation.Stack.Layers.Sum(layer => layer.ThicknessMeters * layer.PartitionCoefficient)
+            + new[] { simulation.Left, simulation.Right }.OfType<CompartmentFace>().Sum(compartment => compartment.VolumePerAreaMeters * compartment.PartitionCoefficient);
 
         var lowestCap = simulation.Stack.Layers.Min(layer => layer.SaturationContinuousVariable);
         return new ClosedSystemEquilibrium(Math.Min(mass / capacity, lowestCap))

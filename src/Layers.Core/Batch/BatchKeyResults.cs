@@ -4,7 +4,7 @@ using Layers.Core.Results;
 namespace Layers.Core.Batch;
 
 /// <summary>The key results of one solved case that a batch summary lists, in SI units (names carry them).</summary>
-/// <param name="FinalState">closedEquilibrium, bathEquilibrium or steadyPermeation.</param>
+/// <param name="FinalState">closedEquilibrium, bathEquilibrium, steadyPermeation or allRemoved.</param>
 /// <param name="LeftReceivedKgPerSquareMeter">Mass per area received by the left medium at the end of the duration; null when closed.</param>
 /// <param name="RightReceivedKgPerSquareMeter">The same for the right medium.</param>
 /// <param name="SteadyFluxKgPerSquareMeterSecond">Steady flux between two baths, left to right; null otherwise.</param>

@@ -51,7 +51,10 @@ public static class DiffusionCellTables
         return tables;
     }
 
-    /// <summary>Warnings to show with the results: lost sink conditions, a steady part shorter than asked for.</summary>
+    /// <summary>
+    /// Warnings to show with the results: lost sink conditions, a steady part shorter than asked for, and why there is
+    /// no steady line where there is none.
+    /// </summary>
     public static IReadOnlyList<string> Warnings(SimulationResult result)
     {
         if (result.DiffusionCell is not { } cell)
@@ -70,6 +73,12 @@ public static class DiffusionCellTables
 
         foreach (var metrics in new[] { cell.Simulated, cell.Measured }.OfType<PermeationMetrics>())
         {
+            if (metrics.NoSteadyLineReason is { } reason)
+            {
+                warnings.Add($"note: no steady flux, lag time or k_p from the {metrics.Source} data: {reason}");
+                continue;
+            }
+
             if (metrics.FromSeconds < SteadyLine.LagMultiple * metrics.LagTimeSeconds * (1 - 1e-9))
             {
                 warnings.Add($"warning: the {metrics.Source} data do not reach {SteadyLine.LagMultiple.ToString(CultureInfo.InvariantCulture)} lag times beyond the last three points; the steady flux and lag time are not steady-state values");
@@ -92,11 +101,14 @@ public static class DiffusionCellTables
         void Add(string what, Func<PermeationMetrics, string> value)
             => rows.Add([what, .. columns.Take(headers.Count - 1).Select(metrics => metrics is null ? "-" : value(metrics))]);
         Add("cumulative amount at the last time", metrics => format.MassPerArea(metrics.CumulativeAtEndPerArea));
-        Add("steady flux J_ss", metrics => format.Flux(metrics.SteadyFluxKgPerSquareMeterSecond));
-        Add("lag time", metrics => format.Time(metrics.LagTimeSeconds));
-        Add("permeability coefficient k_p = J_ss / C_donor", metrics => metrics.PermeabilityCoefficientMetersPerSecond is { } kp
-            ? QuantityParser.FormatSi(kp, PermeabilityUnit)
-            : "no donor concentration");
+        const string NotSteady = "none: no steady line (see note)";
+        Add("steady flux J_ss", metrics => metrics.IsSteady ? format.Flux(metrics.SteadyFluxKgPerSquareMeterSecond) : NotSteady);
+        Add("lag time", metrics => metrics.IsSteady ? format.Time(metrics.LagTimeSeconds) : NotSteady);
+        Add("permeability coefficient k_p = J_ss / C_donor", metrics => !metrics.IsSteady
+            ? NotSteady
+            : metrics.PermeabilityCoefficientMetersPerSecond is { } kp
+                ? QuantityParser.FormatSi(kp, PermeabilityUnit)
+                : "no donor concentration");
         Add("steady part (points at or after 3 lag times)", metrics => string.Create(
             CultureInfo.InvariantCulture,
             $"{format.Time(metrics.FromSeconds)} to {format.Time(metrics.ToSeconds)}, {metrics.PointsUsed} points, R^2 {metrics.RSquared:F4}"));

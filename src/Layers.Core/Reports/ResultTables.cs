@@ -49,12 +49,15 @@ public static class ResultTables
         var rows = new List<IReadOnlyList<string>>();
         void Add(string what, string value) => rows.Add([what, value]);
         var final = result.FinalState;
-        Add("final state", final.Kind switch
+        Add("final state", FinalStateText.Describe(final));
+        if (final.MassLeftAfterSamplingPerArea is { } left)
         {
-            FinalStateKind.ClosedEquilibrium => "equilibrium of the closed system",
-            FinalStateKind.BathEquilibrium => "equilibrium with the bath",
-            _ => "steady permeation between the baths",
-        });
+            var initial = simulation.Stack.InitialMassPerArea
+                + new[] { simulation.Left, simulation.Right }.OfType<CompartmentFace>().Sum(compartment => compartment.InitialMassPerArea);
+            var after = final.LastSampleSeconds is { } last ? $" after the last sample at {format.Time(last)}" : string.Empty;
+            Add("mass left in the system" + after, $"{format.MassPerArea(left)} of {format.MassPerArea(initial)} at the start");
+        }
+
         foreach (var (side, face) in Media(simulation))
         {
             var concentration = side == Side.Left ? final.LeftConcentrationKgPerCubicMeter : final.RightConcentrationKgPerCubicMeter;

@@ -66,10 +66,14 @@ internal static class SummaryJsonDiffusionCell
             return;
         }
 
+        // Where the run reaches no steady line, the fitted slope and intercept are no steady flux or lag time: null,
+        // with the reason beside them.
         json.WriteStartObject(key);
-        json.WriteNumber("steadyFluxKgPerSquareMeterSecond", metrics.SteadyFluxKgPerSquareMeterSecond);
-        json.WriteNumber("lagTimeSeconds", metrics.LagTimeSeconds);
-        SummaryJson.WriteNullable(json, "permeabilityCoefficientMetersPerSecond", metrics.PermeabilityCoefficientMetersPerSecond);
+        json.WriteBoolean("steadyLineReached", metrics.IsSteady);
+        json.WriteString("noSteadyLineReason", metrics.NoSteadyLineReason);
+        SummaryJson.WriteNullable(json, "steadyFluxKgPerSquareMeterSecond", metrics.IsSteady ? metrics.SteadyFluxKgPerSquareMeterSecond : null);
+        SummaryJson.WriteNullable(json, "lagTimeSeconds", metrics.IsSteady ? metrics.LagTimeSeconds : null);
+        SummaryJson.WriteNullable(json, "permeabilityCoefficientMetersPerSecond", metrics.IsSteady ? metrics.PermeabilityCoefficientMetersPerSecond : null);
         SummaryJson.WriteNullable(json, "donorConcentrationKgPerCubicMeter", metrics.DonorConcentrationKgPerCubicMeter);
         json.WriteNumber("pointsUsed", metrics.PointsUsed);
         json.WriteNumber("steadyPartFromSeconds", metrics.FromSeconds);

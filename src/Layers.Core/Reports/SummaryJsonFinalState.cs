@@ -11,6 +11,9 @@ internal static class SummaryJsonFinalState
         var final = result.FinalState;
         json.WriteStartObject("finalState");
         json.WriteString("kind", JsonNamingPolicy.CamelCase.ConvertName(final.Kind.ToString()));
+        json.WriteString("description", FinalStateText.Describe(final));
+        SummaryJson.WriteNullable(json, "massLeftAfterSamplingPerAreaKgPerSquareMeter", final.MassLeftAfterSamplingPerArea);
+        SummaryJson.WriteNullable(json, "lastSampleSeconds", final.LastSampleSeconds);
         json.WriteStartArray("layers");
         for (var i = 0; i < final.LayerConcentrationsKgPerCubicMeter.Count; i++)
         {

@@ -47,7 +47,10 @@ public sealed record SinkCheck(
     public bool Exceeded => FirstExceededSeconds is not null;
 }
 
-/// <summary>Steady flux, lag time and permeability coefficient from a cumulative amount per area Q(t).</summary>
+/// <summary>
+/// Steady flux, lag time and permeability coefficient from a cumulative amount per area Q(t); valid as such only when
+/// <see cref="IsSteady"/>.
+/// </summary>
 /// <param name="Source">"simulated" or "measured".</param>
 /// <param name="SteadyFluxKgPerSquareMeterSecond">Slope of the straight line through the steady part, kg/(m2 s).</param>
 /// <param name="LagTimeSeconds">Time-axis intercept of that line, s.</param>
@@ -68,7 +71,18 @@ public sealed record PermeationMetrics(
     double FromSeconds,
     double ToSeconds,
     double RSquared,
-    double CumulativeAtEndPerArea);
+    double CumulativeAtEndPerArea)
+{
+    /// <summary>
+    /// Why the fitted line is not a steady flux (a depleting donor, a curved Q(t), a negative lag time), or null when
+    /// it is. When set, the flux, lag time and k_p above are those of the fitted line only and are not reported as
+    /// results.
+    /// </summary>
+    public string? NoSteadyLineReason { get; init; }
+
+    /// <summary>True when the run reached a steady line by the criteria of <c>SteadyLine</c>.</summary>
+    public bool IsSteady => NoSteadyLineReason is null;
+}
 
 /// <summary>How much the product delivers per day and how long it holds a target rate.</summary>
 /// <param name="PerDayPerArea">Amount received per area in each whole day of the duration, kg/m2.</param>

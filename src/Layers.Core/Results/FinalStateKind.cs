@@ -9,6 +9,12 @@ public enum FinalStateKind
     /// <summary>One bath, or two baths at the same u: everything equilibrates with the bath.</summary>
     BathEquilibrium,
 
+    /// <summary>
+    /// No bath, and a compartment with first-order removal: the removal never stops, so everything ends in it and
+    /// nothing is left in the system; the progress toward this state is the fraction of the initial mass removed.
+    /// </summary>
+    AllRemoved,
+
     /// <summary>Two baths at different u: a steady flux through the stack.</summary>
     SteadyPermeation,
 }

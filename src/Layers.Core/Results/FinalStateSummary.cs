@@ -1,6 +1,10 @@
 namespace Layers.Core.Results;
 
-/// <summary>The state the system tends to and how fast it gets there.</summary>
+/// <summary>
+/// The state the system tends to and how fast it gets there. A sampled closed system tends to the equilibrium of the
+/// mass left after its last sample (<see cref="MassLeftAfterSamplingPerArea"/>); a system that loses to first-order
+/// removal with no bath ends with everything removed (<see cref="FinalStateKind.AllRemoved"/>).
+/// </summary>
 /// <param name="Kind">Equilibrium or steady permeation.</param>
 /// <param name="LayerConcentrationsKgPerCubicMeter">
 /// For each layer, its concentration in the final state at its left and right edge (equal for an equilibrium), kg/m3.
@@ -19,4 +23,14 @@ public sealed record FinalStateSummary(
     ThresholdTimes System,
     ThresholdTimes? LeftCompartment,
     ThresholdTimes? RightCompartment,
-    double HorizonSeconds);
+    double HorizonSeconds)
+{
+    /// <summary>
+    /// For a sampled closed system, the mass per contact area left in it after the last sample, kg/m2, which its final
+    /// equilibrium holds; null when the final state is built from the initial mass or is not a closed equilibrium.
+    /// </summary>
+    public double? MassLeftAfterSamplingPerArea { get; init; }
+
+    /// <summary>Time of the last sample after which <see cref="MassLeftAfterSamplingPerArea"/> is left, s; else null.</summary>
+    public double? LastSampleSeconds { get; init; }
+}

@@ -70,15 +70,20 @@ internal static class DiffusionCellAnalysis
                 CompartmentFace compartment => compartment.InitialConcentrationKgPerCubicMeter,
                 _ => (double?)null,
             };
+            // What the donor starts with: unlimited behind a bath; else all the drug in the system at the start but
+            // what the receiving medium itself holds.
+            double? donorContent = simulation.Left is BathFace
+                ? null
+                : simulation.Stack.InitialMassPerArea + ((simulation.Left as CompartmentFace)?.InitialMassPerArea ?? 0);
             var times = series.Select(sample => sample.TimeSeconds).ToArray();
             var received = series.Select(sample => sample.Right!.TransferredIntoMediumPerArea).ToArray();
             // A matrix loaded above its solubility depletes: its Q(t) has no steady part to fit.
             simulated = simulation.Stack.Layers.Any(layer => layer.InitialUndissolvedPerArea > 0)
                 ? null
-                : SteadyLine.Fit("simulated", times, received, donor);
+                : SteadyLine.Fit("simulated", times, received, donor, donorContent);
             if (test.Measured is { } data)
             {
-                measured = SteadyLine.Fit("measured", data.TimesSeconds, data.CumulativePerArea, donor);
+                measured = SteadyLine.Fit("measured", data.TimesSeconds, data.CumulativePerArea, donor, donorContent);
             }
 
             delivery = Delivery.Of(test, times, received);

@@ -7,7 +7,9 @@ namespace Layers.Core.Simulation;
 
 /// <summary>
 /// The final state of a case at every node (for the approach measures), from the analytic references: the
-/// closed-system equilibrium or the series-resistance steady state.
+/// closed-system equilibrium or the series-resistance steady state. What sampling and first-order removal take out is
+/// accounted for: a sampled closed system settles to the equilibrium of the mass left after its last sample, and a
+/// system that loses to first-order removal with no bath to refill it ends with everything in the removal.
 /// </summary>
 internal sealed class FinalStateTarget
 {
@@ -28,6 +30,9 @@ internal sealed class FinalStateTarget
 
     public double? ClosedValue { get; }
 
+    /// <summary>Mass per area the closed-system equilibrium holds when it is that of the mass left after the last sample, kg/m2; else null.</summary>
+    public double? MassLeftAfterSamplingPerArea { get; private init; }
+
     /// <summary>The case whose partition coefficients <see cref="Steady"/> and <see cref="ClosedValue"/> are in, when not the run's own.</summary>
     private SimulationCase? PartitionCase { get; init; }
 
@@ -35,36 +40,54 @@ internal sealed class FinalStateTarget
     /// The final state of a staged run: that of its last stage, whose partition coefficients (and D) hold from the
     /// end of the run on, with the node values in the case's own u = c/K, as observers read states.
     /// </summary>
-    public static FinalStateTarget ForStages(SimulationCase simulation, DiffusionSystem system, IReadOnlyList<StageSystem> stages)
+    /// <param name="simulation">The case.</param>
+    /// <param name="system">Its assembled system.</param>
+    /// <param name="stages">Its stages.</param>
+    /// <param name="massLeftAfterSamplingPerArea">
+    /// For a sampled closed system, the mass per area left in it after the last sample, kg/m2, from a run up to it;
+    /// null for the equilibrium of the initial mass.
+    /// </param>
+    public static FinalStateTarget ForStages(
+        SimulationCase simulation, DiffusionSystem system, IReadOnlyList<StageSystem> stages, double? massLeftAfterSamplingPerArea = null)
     {
         var last = stages[^1];
         if (last.ToStage is not { } factors)
         {
-            return Of(simulation, system);
+            return Of(simulation, system, massLeftAfterSamplingPerArea);
         }
 
-        var target = Of(last.Case, last.System);
+        var target = Of(last.Case, last.System, massLeftAfterSamplingPerArea);
         var values = new double[target.NodeValues.Length];
         for (var n = 0; n < values.Length; n++)
         {
             values[n] = target.NodeValues[n] / factors[n];
         }
 
-        return new FinalStateTarget(target.Kind, values, target.Steady, target.ClosedValue) { PartitionCase = last.Case };
+        return new FinalStateTarget(target.Kind, values, target.Steady, target.ClosedValue)
+        {
+            PartitionCase = last.Case,
+            MassLeftAfterSamplingPerArea = target.MassLeftAfterSamplingPerArea,
+        };
     }
 
-    public static FinalStateTarget Of(SimulationCase simulation, DiffusionSystem system)
+    /// <summary>The final state of a case run in one stage; see <see cref="ForStages"/> for the mass left after sampling.</summary>
+    public static FinalStateTarget Of(SimulationCase simulation, DiffusionSystem system, double? massLeftAfterSamplingPerArea = null)
     {
         var values = new double[system.NodeCount];
         var original = simulation;
         simulation = RemovalAsSink(simulation);
         if (simulation.IsClosed)
         {
-            var closed = ClosedSystemEquilibrium.Of(simulation);
+            var closed = massLeftAfterSamplingPerArea is { } left
+                ? ClosedSystemEquilibrium.Of(simulation, left)
+                : ClosedSystemEquilibrium.Of(simulation);
             var equilibrium = closed.ContinuousVariable;
             Array.Fill(values, equilibrium);
             AddUndissolved(simulation, system, closed, values);
-            return new FinalStateTarget(FinalStateKind.ClosedEquilibrium, values, null, equilibrium);
+            return new FinalStateTarget(FinalStateKind.ClosedEquilibrium, values, null, equilibrium)
+            {
+                MassLeftAfterSamplingPerArea = massLeftAfterSamplingPerArea,
+            };
         }
 
         var steady = SteadyStateStack.Of(simulation);
@@ -78,7 +101,10 @@ internal sealed class FinalStateTarget
         }
 
         SetRemovingCompartment(original, system, steady, values);
-        var kind = steady.FluxKgPerSquareMeterSecond == 0 ? FinalStateKind.BathEquilibrium : FinalStateKind.SteadyPermeation;
+        // With no bath in the case itself, the only "bath" is the removal: it takes everything in the end.
+        var kind = original.IsClosed
+            ? FinalStateKind.AllRemoved
+            : steady.FluxKgPerSquareMeterSecond == 0 ? FinalStateKind.BathEquilibrium : FinalStateKind.SteadyPermeation;
         return new FinalStateTarget(kind, values, steady, null);
     }
 

@@ -98,7 +98,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         }
     }
 
-    public FinalStateSummary Summary(double horizonSeconds) => new(
+    public FinalStateSummary Summary(double horizonSeconds, double? lastSampleSeconds = null) => new(
         _final.Kind,
         Enumerable.Range(0, _case.Stack.Count).Select(layer => _final.LayerEdges(_case, layer)).ToArray(),
         _final.MediumConcentration(_case.Left, Side.Left),
@@ -106,7 +106,11 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         Times(_systemTracker)!,
         Times(_leftTracker),
         Times(_rightTracker),
-        horizonSeconds);
+        horizonSeconds)
+    {
+        MassLeftAfterSamplingPerArea = _final.MassLeftAfterSamplingPerArea,
+        LastSampleSeconds = _final.MassLeftAfterSamplingPerArea is null ? null : lastSampleSeconds,
+    };
 
     /// <summary>
     /// A system that starts at its final state has no fraction of the way (NaN); for the times to 50/90/99 % and the lag

@@ -18,7 +18,8 @@ public static class Simulator
     /// <summary>Solves a validated case.</summary>
     public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
     {
-        var (grid, system, initial, final, sampling, recorder, stages) = Assemble(simulation);
+        var massLeft = MassLeftAfterSampling(simulation, cancellation);
+        var (grid, system, initial, final, sampling, recorder, stages) = Assemble(simulation, massLeft);
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
         var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(simulation, system, stages, initial);
@@ -41,7 +42,7 @@ public static class Simulator
             Grid = grid,
             TimeSeries = recorder.Samples,
             Reports = recorder.Reports,
-            FinalState = recorder.Summary(horizon),
+            FinalState = recorder.Summary(horizon, sampling.TimesSeconds.Count > 0 ? sampling.TimesSeconds[^1] : null),
             // With first-order removal the receiving "bath" is the removal itself, whose intake is not the amount
             // permeated; the diffusion-cell metrics report that case instead.
             Permeation = final.Kind == FinalStateKind.SteadyPermeation && simulation.Left is not CompartmentFace && simulation.Right is not CompartmentFace
@@ -78,12 +79,43 @@ public static class Simulator
         return (recorder.Samples, statistics);
     }
 
-    private static (Grid Grid, DiffusionSystem System, double[] Initial, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(SimulationCase simulation)
+    /// <summary>
+    /// The mass per area left in a sampled closed system after its last sample, kg/m2: the initial mass less what the
+    /// samples took, from a run to the duration (every sample lies within it). Null when no compartment is sampled,
+    /// when a bath or first-order removal fixes the final state instead, or when that run does not complete.
+    /// </summary>
+    /// <remarks>
+    /// After the last sample nothing more leaves a closed system, so it settles to the equilibrium of this mass. The
+    /// mass depends on the run (each sample takes v C at its time), so it is found by solving to the duration first;
+    /// the main run then measures its progress against that equilibrium from t = 0 on. Both runs take the same steps
+    /// up to the duration, so they take the same samples.
+    /// </remarks>
+    private static double? MassLeftAfterSampling(SimulationCase simulation, CancellationToken cancellation)
+    {
+        var faces = new[] { simulation.Left, simulation.Right };
+        if (!simulation.IsClosed
+            || faces.OfType<CompartmentFace>().All(compartment => compartment.Sampling is null)
+            || faces.OfType<CompartmentFace>().Any(compartment => compartment.RemovalRatePerSecond > 0))
+        {
+            return null;
+        }
+
+        var (grid, system, initial, _, sampling, recorder, stages) = Assemble(simulation);
+        var statistics = StagedIntegration.Run(
+            stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
+            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Solver, recorder, sampling, cancellation).Statistics;
+        return statistics.StopReason == StopReason.Completed
+            ? system.TotalMass(initial) - sampling.RemovedPerArea(Side.Left) - sampling.RemovedPerArea(Side.Right)
+            : null;
+    }
+
+    private static (Grid Grid, DiffusionSystem System, double[] Initial, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(
+        SimulationCase simulation, double? massLeftAfterSamplingPerArea = null)
     {
         var grid = GridBuilder.Build(simulation);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
         var stages = StageSystem.For(simulation, grid);
-        var final = FinalStateTarget.ForStages(simulation, system, stages);
+        var final = FinalStateTarget.ForStages(simulation, system, stages, massLeftAfterSamplingPerArea);
         var sampling = new SamplingEvents(simulation, system);
         var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
         return (grid, system, initial, final, sampling, recorder, stages);
