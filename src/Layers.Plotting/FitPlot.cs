@@ -7,8 +7,9 @@ using OxyPlot.Series;
 namespace Layers.Plotting;
 
 /// <summary>
-/// fit.png: the measurements (with bars of one standard deviation where given) and the fitted model against time,
-/// and under them, on their own axis, the residuals (measured - model), so that a trend the model misses shows.
+/// fit.png: the measurements (with bars of plus and minus one standard deviation where given) and the fitted model
+/// against time, and under them, on their own axis, the residuals (measured - model), so that a trend the model misses
+/// shows. An estimate the data do not determine is marked as the console marks it, with what they do determine.
 /// </summary>
 public static class FitPlot
 {
@@ -29,8 +30,9 @@ public static class FitPlot
         var data = fit.Request.Data;
         var time = DisplayText.TimeAxisUnit(Math.Max(fit.FittedCase.DurationSeconds, data.TimesSeconds[^1]));
         var value = data.ValueUnit;
-        var estimates = string.Join("; ", fit.Estimates.Select(estimate => $"{estimate.Parameter.Label} = {estimate.Parameter.Written(estimate.Value)}"));
-        var model = PlotFrame.Create(fit.FittedCase.Title, [$"Fit to {Path.GetFileName(data.FileName)}: {estimates}"], options);
+        var estimates = string.Join("; ", fit.Estimates.Select(estimate =>
+            $"{estimate.Parameter.Label} = {estimate.Parameter.Written(estimate.Value)}{(estimate.Identifiable ? string.Empty : " (not identifiable)")}"));
+        var model = PlotFrame.Create(fit.FittedCase.Title, [$"Fit to {Path.GetFileName(data.FileName)}: {estimates}", .. Determined(fit)], options);
         var timeAxis = PlotFrame.Linear(AxisPosition.Bottom, $"Time ({DisplayText.Unit(time)})");
         timeAxis.Minimum = 0;
         model.Axes.Add(timeAxis);
@@ -55,7 +57,7 @@ public static class FitPlot
         var curve = new LineSeries { Title = "fitted model", Color = PlotStyle.SeriesColor(0), StrokeThickness = PlotStyle.SeriesThickness };
         curve.Points.AddRange(fit.Curve.Select(point => new DataPoint(time.FromSi(point.TimeSeconds), value.FromSi(point.Value))));
         model.Series.Add(curve);
-        model.Series.Add(Points("measured", fit.Points.Select(point => (point.TimeSeconds, point.Measured, point.Deviation)), time, value, axisKey: null));
+        model.Series.Add(Points(data.Deviations is null ? "measured" : "measured (\u00B11 sd)", fit.Points.Select(point => (point.TimeSeconds, point.Measured, point.Deviation)), time, value, axisKey: null));
         model.Series.Add(Points(null, fit.Points.Select(point => (point.TimeSeconds, point.Residual, point.Deviation)), time, value, ResidualAxisKey));
         model.Annotations.Add(new LineAnnotation
         {
@@ -95,9 +97,19 @@ public static class FitPlot
             time.FromSi(point.TimeSeconds),
             value.FromSi(point.Value),
             0,
-            point.Deviation is { } deviation ? deviation / value.FactorToSi : 0)));
+            // OxyPlot draws ErrorY half above and half below the point (ScatterErrorSeries.Render), so a bar of
+            // plus and minus one standard deviation is given as twice it.
+            point.Deviation is { } deviation ? 2 * deviation / value.FactorToSi : 0)));
         return series;
     }
+
+    // What the data do determine where an input is not identifiable, worded as the console words it.
+    private static IEnumerable<string> Determined(FitResult fit)
+        => fit.Findings
+            .Where(finding => finding.NotIdentifiable)
+            .Select(finding => "not identifiable: " + finding.Message + (finding.Combination is { } combination
+                ? FormattableString.Invariant($"; {combination.Text} = {combination.Value:G4} {combination.Unit} ({fit.Request.Confidence * 100:0.#} % interval {combination.Lower:G4} to {combination.Upper:G4})")
+                : string.Empty));
 
     private static string Capitalised(string text) => text.Length == 0 ? "Measured value" : char.ToUpperInvariant(text[0]) + text[1..];
 }

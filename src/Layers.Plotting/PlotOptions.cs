@@ -22,7 +22,9 @@ public sealed record PlotOptions(
 
     /// <summary>
     /// A limit on the mass transferred per contact area, kg/m2 (e.g. a specific migration limit expressed per area),
-    /// drawn as a dashed horizontal line on the transfer plot; null for none.
+    /// drawn as a dashed horizontal line on the transfer plot, with the times read off the plotted output times; null
+    /// for none, in which case a food-contact result's specific migration limit is drawn, with the time the solver
+    /// located.
     /// </summary>
     public double? LimitMassPerArea { get; init; }
 

@@ -14,7 +14,8 @@ namespace Layers.Plotting;
 /// (two compartments, a compartment that only gives mass, or one that loses mass to sampling or first-order removal,
 /// whose content is no longer what it received) the compartments' concentrations get a panel of their own under the
 /// amounts.
-/// An optional limit is drawn as a dashed line with its label and the time each receiving medium reaches it.
+/// An optional limit is drawn as a dashed line with its label and the time each receiving medium reaches it; without
+/// one, a food-contact result's specific migration limit is drawn, with the time the solver found the food reaches it.
 /// </summary>
 public static class TransferPlot
 {
@@ -33,6 +34,12 @@ public static class TransferPlot
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
+        var migration = options.LimitMassPerArea is null ? MigrationLimit.Of(result) : null;
+        if (migration is not null)
+        {
+            options = options with { LimitMassPerArea = migration.MassPerArea, LimitLabel = MigrationLimit.Label };
+        }
+
         var simulation = result.Case;
         var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
         var concentrationUnit = DisplayText.ConcentrationUnit(simulation.Display);
@@ -45,7 +52,7 @@ public static class TransferPlot
         }
 
         var model = PlotFrame.Create(
-            simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options), options);
+            simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options, migration), options);
         model.Axes.Add(time.Axis);
         var compartments = media.Where(medium => medium.Face is CompartmentFace).ToList();
         var secondScale = compartments.Count == 1 && !compartments[0].Flipped && KeepsWhatItReceives((CompartmentFace)compartments[0].Face);
@@ -77,6 +84,11 @@ public static class TransferPlot
             AddLimit(model, options, massUnit.FromSi(limit), options.LimitLabel, massUnit);
         }
 
+        if (migration is { ReachedSeconds: { } reached } && time.Covers(reached, simulation.DurationSeconds))
+        {
+            AddCrossing(model, time.Unit.FromSi(reached), massUnit.FromSi(migration.MassPerArea));
+        }
+
         return model;
     }
 
@@ -86,6 +98,24 @@ public static class TransferPlot
     /// </summary>
     private static bool KeepsWhatItReceives(CompartmentFace compartment)
         => compartment.Sampling is null && compartment.RemovalRatePerSecond <= 0;
+
+    // The solver's crossing time on the limit line; between output times the plotted curve is a straight chord, so
+    // near a steep start it may cross the line elsewhere: the marker and the subtitle give the solver's time.
+    private static void AddCrossing(PlotModel model, double time, double level)
+    {
+        model.Annotations.Add(new PointAnnotation
+        {
+            X = time,
+            Y = level,
+            YAxisKey = MassAxisKey,
+            Shape = MarkerType.Diamond,
+            Size = PlotStyle.MarkerSize + 1,
+            Fill = PlotStyle.Limit,
+            Stroke = OxyColors.White,
+            StrokeThickness = 1.2,
+            Layer = AnnotationLayer.AboveSeries,
+        });
+    }
 
     private static List<Medium> Media(
         SimulationResult result, double firstSeconds, UnitDefinition timeUnit, UnitDefinition massUnit)
@@ -295,7 +325,7 @@ public static class TransferPlot
     private static string Shown(double kgPerCubicMeter, (UnitDefinition Unit, double Divisor) scale)
         => DisplayText.Quantity(scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor), scale.Unit);
 
-    private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options)
+    private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options, MigrationLimit? migration)
     {
         var massUnit = units.MassPerArea;
         yield return "Mass transferred per contact area into each face medium";
@@ -316,15 +346,16 @@ public static class TransferPlot
 
         if (options.LimitMassPerArea is { } limit)
         {
-            yield return LimitText(media, limit, options.LimitLabel, units);
+            yield return LimitText(media, limit, options.LimitLabel, units, migration);
         }
     }
 
-    private static string LimitText(List<Medium> media, double limit, string label, Units units)
+    private static string LimitText(List<Medium> media, double limit, string label, Units units, MigrationLimit? migration)
     {
-        // A limit applies to what a medium receives: a donor's loss is not compared with it.
-        var crossings = media.Where(medium => !medium.Flipped)
-            .Select(medium => (medium.Name, Time: Crossing(medium, limit)))
+        // A limit applies to what a medium receives: a donor's loss is not compared with it. The specific migration
+        // limit applies to the food only, at the time the solver located.
+        var crossings = media.Where(medium => migration is null ? !medium.Flipped : medium.Side == migration.FoodSide)
+            .Select(medium => (medium.Name, Time: migration is null ? Crossing(medium, limit) : migration.ReachedSeconds))
             .Where(crossing => crossing.Time is not null)
             .Select(crossing => $"{crossing.Name} reaches it at {DisplayText.Time(crossing.Time!.Value)}")
             .ToList();

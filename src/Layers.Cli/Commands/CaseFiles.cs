@@ -1,5 +1,4 @@
 using System.Text;
-using Layers.Core.Domain;
 using Layers.Core.Reports;
 using Layers.Core.Results;
 using Layers.Plotting;
@@ -18,7 +17,7 @@ internal static class CaseFiles
     public static Dictionary<string, byte[]> Build(SimulationResult result, RunSettings settings, CancellationToken cancellation)
     {
         var pictures = settings.Plots
-            ? PlotSet.Render(result, WithMigrationLimit(settings.PlotOptions, result), cancellation)
+            ? PlotSet.Render(result, settings.PlotOptions, cancellation)
             : new Dictionary<string, byte[]>();
         var files = new Dictionary<string, byte[]>();
         void Add(string name, Func<string> text)
@@ -38,23 +37,5 @@ internal static class CaseFiles
         }
 
         return files;
-    }
-
-    /// <summary>
-    /// The specific migration limit drawn on the transfer plot, as the mass per contact area that brings the food
-    /// from its initial content to the limit: (limit - initial fraction) x density x volume per area.
-    /// </summary>
-    private static PlotOptions WithMigrationLimit(PlotOptions options, SimulationResult result)
-    {
-        if (options.LimitMassPerArea is not null
-            || result.FoodContact is not { SpecificMigrationLimit: { } limit } food
-            || result.Case.Face(food.FoodSide) is not CompartmentFace compartment)
-        {
-            return options;
-        }
-
-        var initialFraction = compartment.InitialConcentrationKgPerCubicMeter / food.FoodDensityKgPerCubicMeter;
-        var perArea = (limit - initialFraction) * food.FoodDensityKgPerCubicMeter * compartment.VolumePerAreaMeters;
-        return perArea > 0 ? options with { LimitMassPerArea = perArea, LimitLabel = "specific migration limit" } : options;
     }
 }

@@ -74,7 +74,7 @@ internal static class DesignCommand
 
             output.WriteLine($"results: {folder}");
             output.WriteLine();
-            output.WriteLine(outcome.RunAtAnswer is { } run ? CautionText.For(run) : CautionText.Paragraph);
+            output.WriteLine(DesignReport.Caution(outcome));
         }
 
         return outcome.Status == StudyStatus.Done ? ExitCodes.Success : ExitCodes.NoTrustworthyAnswer;

@@ -158,9 +158,14 @@ internal static class FitCommand
                 : string.Empty));
         }
 
+        foreach (var note in CaseCautions.UnverifiedConstants(fit.FittedCase))
+        {
+            output.WriteLine(note);
+        }
+
         output.WriteLine($"results: {folder}");
         output.WriteLine();
-        output.WriteLine(CautionText.Paragraph + " " + CautionText.FittedInputs);
+        output.WriteLine(CaseCautions.Paragraph(fit.FittedCase, CautionText.FittedInputs));
     }
 
     private sealed record Settings(

@@ -179,7 +179,7 @@ internal static class RunCommand
             output.WriteLine($"{simulation.Title} ({casePath})");
             output.WriteLine($"  stack: {StackText.Describe(simulation)}");
             ConsoleTables.Write(output, [ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result), .. FoodContactTables.For(result), .. DiffusionCellTables.For(result)]);
-            foreach (var warning in EstimateNotes.For(simulation).Concat(DiffusionCellTables.Warnings(result)))
+            foreach (var warning in CaseCautions.UnverifiedConstants(simulation).Concat(DiffusionCellTables.Warnings(result)))
             {
                 output.WriteLine(warning);
             }

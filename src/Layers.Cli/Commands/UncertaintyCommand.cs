@@ -88,9 +88,14 @@ internal static class UncertaintyCommand
                 output.WriteLine($"  {line}");
             }
 
+            foreach (var note in CaseCautions.UnverifiedConstants(outcome.BaseCase))
+            {
+                output.WriteLine(note);
+            }
+
             output.WriteLine($"results: {folder}");
             output.WriteLine();
-            output.WriteLine(CautionText.Paragraph);
+            output.WriteLine(CaseCautions.Paragraph(outcome.BaseCase));
         }
 
         return ExitCodes.Success;

@@ -51,8 +51,20 @@ public static class DesignReport
             }
 
             json.WriteEndArray();
-            json.WriteString("caution", outcome.RunAtAnswer is { } run ? CautionText.For(run) : CautionText.Paragraph);
+            json.WriteString("caution", Caution(outcome));
         });
+    }
+
+    /// <summary>
+    /// The caution of the case solved at the answer, as <c>layers run</c> gives it (with the food-contact caution on a
+    /// food-contact case), or the general one when there is no answer.
+    /// </summary>
+    public static string Caution(DesignOutcome outcome)
+    {
+        ArgumentNullException.ThrowIfNull(outcome);
+        return outcome.RunAtAnswer is not { } run
+            ? CautionText.Paragraph
+            : run.FoodContact is null ? CautionText.For(run) : CautionText.For(run) + " " + FoodContactTables.Caution;
     }
 
     /// <summary>The answer in one line for the console, or the reason there is none.</summary>

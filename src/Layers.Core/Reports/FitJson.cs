@@ -48,6 +48,14 @@ public static class FitJson
                 _ => "iterationLimit",
             });
             json.WriteEndObject();
+            json.WriteString("caution", CaseCautions.Paragraph(fit.FittedCase, CautionText.FittedInputs));
+            json.WriteStartArray("notes");
+            foreach (var note in CaseCautions.UnverifiedConstants(fit.FittedCase))
+            {
+                json.WriteStringValue(note);
+            }
+
+            json.WriteEndArray();
             json.WriteEndObject();
         }
 

@@ -47,7 +47,7 @@ public static class HtmlReport
         {
             html.Append("<p class=\"caution\">").Append(Encode(FoodContactTables.Caution)).Append("</p>\n");
         }
-        foreach (var warning in EstimateNotes.For(simulation).Concat(DiffusionCellTables.Warnings(result)))
+        foreach (var warning in CaseCautions.UnverifiedConstants(simulation).Concat(DiffusionCellTables.Warnings(result)))
         {
             html.Append("<p class=\"caution\">").Append(Encode(warning)).Append("</p>\n");
         }

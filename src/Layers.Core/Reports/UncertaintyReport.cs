@@ -68,7 +68,14 @@ public static class UncertaintyReport
 
             json.WriteEndArray();
             WriteExceedance(json, outcome.Exceedance);
-            json.WriteString("caution", CautionText.Paragraph);
+            json.WriteString("caution", CaseCautions.Paragraph(outcome.BaseCase));
+            json.WriteStartArray("notes");
+            foreach (var note in CaseCautions.UnverifiedConstants(outcome.BaseCase))
+            {
+                json.WriteStringValue(note);
+            }
+
+            json.WriteEndArray();
         });
     }
 
