@@ -13,7 +13,7 @@ public static class CaseLimits
     /// <summary>
     /// Most report times (<c>$.reportTimes</c>): each writes a full profile of every cell into profiles.csv.
     /// </summary>
-    public const int MaxReportTimes = 100;
+    public const int MaxReportTimes = 1000;
 
     /// <summary>
     /// Most extra output times (<c>$.extraOutputTimes</c>) and sampling times (<c>sampling.times</c>): each adds one
