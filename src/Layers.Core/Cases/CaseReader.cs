@@ -1,11 +1,9 @@
 using System.Globalization;
 using System.Text;
 using System.Text.Json;
-using Layers.Core.Discretization;
 using Layers.Core.Files;
 using Layers.Core.Domain;
 using Layers.Core.Simulation;
-using Layers.Core.TimeStepping;
 using Layers.Core.Units;
 
 namespace Layers.Core.Cases;
@@ -136,7 +134,7 @@ public static class CaseReader
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var (grid, solver) = ReadNumerics(root, context);
         var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));
-        FoodContact.FoodContactSettings? foodSettings = null;
+        FoodContactSettings? foodSettings = null;
         if (food is not null)
         {
             (foodSettings, layers) = FoodContactReader.Resolve(food, root, layers, left, right, context);

@@ -26,8 +26,8 @@ public static class GridBuilder
         var leftOpen = simulation.Left is not ClosedFace;
         var rightOpen = simulation.Right is not ClosedFace;
         var earliestReport = simulation.ReportTimesSeconds.Where(time => time > 0).DefaultIfEmpty(simulation.DurationSeconds).Min();
-        var earliest = DiffusionLengthMesh.EarliestResolvedPerReportTime * earliestReport;
-        var shares = DiffusionLengthMesh.Shares(stack, leftOpen, rightOpen, simulation.DurationSeconds);
+        var earliest = DiffusionLengthCells.EarliestResolvedPerReportTime * earliestReport;
+        var shares = DiffusionLengthCells.Shares(stack, leftOpen, rightOpen, simulation.DurationSeconds);
         return Assemble(stack, layer => mesh.Widths(
             stack.Layers[layer].ThicknessMeters,
             stack.Layers[layer].DiffusivitySquareMetersPerSecond,

@@ -54,7 +54,7 @@ public sealed record Layer(
     public string DiffusivityOrigin { get; init; } = DiffusivityOrigins.Given;
 
     /// <summary>How D and K were estimated (Potts-Guy), or null when the case gave them.</summary>
-    public Permeation.SkinEstimate? Estimate { get; init; }
+    public SkinEstimate? Estimate { get; init; }
 
     /// <summary>Diffusive resistance of the whole layer in the u = c/K variable, h / (D K), s/m.</summary>
     public double ResistanceSecondsPerMeter => ThicknessMeters / (DiffusivitySquareMetersPerSecond * PartitionCoefficient);

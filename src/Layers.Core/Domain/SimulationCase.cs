@@ -1,7 +1,3 @@
-using Layers.Core.Discretization;
-using Layers.Core.FoodContact;
-using Layers.Core.TimeStepping;
-
 namespace Layers.Core.Domain;
 
 /// <summary>

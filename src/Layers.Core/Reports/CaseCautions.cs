@@ -1,5 +1,4 @@
 using Layers.Core.Domain;
-using Layers.Core.FoodContact;
 
 namespace Layers.Core.Reports;
 

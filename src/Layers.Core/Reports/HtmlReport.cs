@@ -75,7 +75,7 @@ public static class HtmlReport
         yield return "Compartments are perfectly mixed apart from any film resistance given; baths hold a fixed concentration.";
         if (result.FoodContact is not null)
         {
-            foreach (var assumption in Layers.Core.FoodContact.FoodContactResult.Assumptions)
+            foreach (var assumption in FoodContactResult.Assumptions)
             {
                 yield return $"Food contact: {assumption}.";
             }

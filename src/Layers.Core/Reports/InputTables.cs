@@ -42,7 +42,7 @@ public static class InputTables
         ArgumentNullException.ThrowIfNull(simulation);
         ArgumentNullException.ThrowIfNull(layer);
         var estimated = layer.Estimate is not null
-            || simulation.FoodContact?.Diffusivities.GetValueOrDefault(layer.Name) is FoodContact.EstimatedDiffusivity;
+            || simulation.FoodContact?.Diffusivities.GetValueOrDefault(layer.Name) is EstimatedDiffusivity;
         return estimated ? "estimated" : layer.DiffusivityOrigin;
     }
 

@@ -1,6 +1,5 @@
 using System.Text.Json;
 using Layers.Core.Domain;
-using Layers.Core.FoodContact;
 using Layers.Core.Results;
 
 namespace Layers.Core.Reports;

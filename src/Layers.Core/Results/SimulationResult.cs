@@ -1,6 +1,5 @@
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
-using Layers.Core.FoodContact;
 using Layers.Core.TimeStepping;
 
 namespace Layers.Core.Results;

@@ -1,5 +1,5 @@
 using Layers.Core.Discretization;
-using Layers.Core.TimeStepping;
+using Layers.Core.Domain;
 
 namespace Layers.Core.Simulation;
 

@@ -1,7 +1,6 @@
 using Layers.Core.Analytics;
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
-using Layers.Core.FoodContact;
 using Layers.Core.Results;
 using Layers.Core.TimeStepping;
 

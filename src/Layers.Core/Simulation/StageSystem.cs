@@ -1,6 +1,5 @@
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
-using Layers.Core.FoodContact;
 
 namespace Layers.Core.Simulation;
 

@@ -1,3 +1,4 @@
+using Layers.Core.Domain;
 using Layers.Core.TimeStepping;
 
 namespace Layers.Core.Simulation;

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using Layers.Core.Discretization;
+using Layers.Core.Domain;
 
 namespace Layers.Core.TimeStepping;
 

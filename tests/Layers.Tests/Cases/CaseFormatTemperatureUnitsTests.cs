@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using Layers.Core.Cases;
+using Layers.Core.Domain;
 using Layers.Core.FoodContact;
 using Layers.Tests.TestSupport;
 

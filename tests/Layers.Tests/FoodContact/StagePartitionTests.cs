@@ -1,4 +1,5 @@
 using Layers.Core.Analytics;
+using Layers.Core.Domain;
 using Layers.Core.FoodContact;
 using Layers.Core.Simulation;
 using Layers.Tests.TestSupport;

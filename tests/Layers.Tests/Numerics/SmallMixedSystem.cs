@@ -1,4 +1,5 @@
 using Layers.Core.Discretization;
+using Layers.Core.Domain;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Numerics;

@@ -1,5 +1,6 @@
 using Layers.Core.Analytics;
 using Layers.Core.Discretization;
+using Layers.Core.Domain;
 using Layers.Core.Simulation;
 using Layers.Core.TimeStepping;
 using Layers.Tests.TestSupport;

@@ -1,4 +1,4 @@
-namespace Layers.Core.FoodContact;
+namespace Layers.Core.Domain;
 
 /// <summary>
 /// Worst-case partition coefficients between polymer and food, K_P,F = c_polymer / c_food at equilibrium, used

@@ -1,10 +1,11 @@
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
-using Layers.Core.Simulation;
+using Layers.Core.FoodContact;
+using Layers.Core.Results;
 using Layers.Core.TimeStepping;
 using MathNet.Numerics.RootFinding;
 
-namespace Layers.Core.FoodContact;
+namespace Layers.Core.Simulation;
 
 /// <summary>
 /// Turns a run with food-contact settings into the engineer's figures: concentration in the food, verdict against

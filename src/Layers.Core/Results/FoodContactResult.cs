@@ -1,6 +1,6 @@
 using Layers.Core.Domain;
 
-namespace Layers.Core.FoodContact;
+namespace Layers.Core.Results;
 
 /// <summary>The food-contact figures of a run, in SI units (concentrations in the food as mass fractions, kg/kg).</summary>
 public sealed record FoodContactResult

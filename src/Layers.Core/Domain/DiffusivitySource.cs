@@ -1,6 +1,7 @@
 using System.Globalization;
+using Layers.Core.FoodContact;
 
-namespace Layers.Core.FoodContact;
+namespace Layers.Core.Domain;
 
 /// <summary>
 /// Where a layer's diffusion coefficient comes from and how it depends on temperature. Reports print
@@ -36,7 +37,7 @@ public sealed record GivenDiffusivity(double DiffusivitySquareMetersPerSecond) :
     public override string Describe() => $"{Origin}; the same at every temperature";
 
     /// <summary>What the case says of the value: <c>given</c>, <c>measured</c> or <c>fitted</c>.</summary>
-    public string Origin { get; init; } = Domain.DiffusivityOrigins.Given;
+    public string Origin { get; init; } = DiffusivityOrigins.Given;
 }
 
 /// <summary>A diffusion coefficient given at a reference temperature with an activation energy.</summary>
@@ -59,7 +60,7 @@ public sealed record ArrheniusDiffusivity(
         $"{Origin} at {ReferenceKelvin - 273.15:0.##} degC, Arrhenius with Ea = {ActivationEnergyJoulesPerMole / 1e3:0.##} kJ/mol");
 
     /// <summary>What the case says of the value at the reference temperature: <c>given</c>, <c>measured</c> or <c>fitted</c>.</summary>
-    public string Origin { get; init; } = Domain.DiffusivityOrigins.Given;
+    public string Origin { get; init; } = DiffusivityOrigins.Given;
 }
 
 /// <summary>The upper-bound estimate of <see cref="UpperBoundDiffusivity"/> for a polymer and a migrant.</summary>

@@ -1,9 +1,8 @@
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
-using Layers.Core.Simulation;
 using Layers.Core.TimeStepping;
 
-namespace Layers.Core.FoodContact;
+namespace Layers.Core.Simulation;
 
 /// <summary>
 /// Watches the food's concentration (mass fraction) step by step during the run: its value at every stage end,

@@ -1,4 +1,4 @@
-namespace Layers.Core.FoodContact;
+namespace Layers.Core.Domain;
 
 /// <summary>One stage of a time-temperature history: a duration at a constant temperature.</summary>
 /// <param name="Name">Name for reports (e.g. "hot fill").</param>

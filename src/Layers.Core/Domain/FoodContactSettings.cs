@@ -1,6 +1,6 @@
-using Layers.Core.Domain;
+using Layers.Core.FoodContact;
 
-namespace Layers.Core.FoodContact;
+namespace Layers.Core.Domain;
 
 /// <summary>
 /// The food-contact part of a case, in SI units: the time-temperature history, where each layer's D comes from,

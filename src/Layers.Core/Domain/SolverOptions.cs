@@ -1,4 +1,4 @@
-namespace Layers.Core.TimeStepping;
+namespace Layers.Core.Domain;
 
 /// <summary>Time-stepping settings, each with its default and admissible range.</summary>
 public sealed record SolverOptions

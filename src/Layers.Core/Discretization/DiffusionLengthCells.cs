@@ -3,21 +3,10 @@ using Layers.Core.Domain;
 namespace Layers.Core.Discretization;
 
 /// <summary>
-/// A mesh whose cells are sized by what each layer's profile can do in the run rather than by its thickness: the
-/// cells at the edges of a layer where something crosses (interfaces, open faces) are a fraction f of the layer's
-/// diffusion length sqrt(D t) at the earliest time to resolve, and grow by 1 + f toward the middle (a width
-/// proportional to the distance from the edge, as the self-similar early profile needs at every later time), up to
-/// the layer's thickness over its minimum cell count. A layer that diffusion crosses many times over the run gets
-/// few cells; a slow, thick layer gets small cells at its edges and a few wide ones where nothing arrives.
+/// Places the cells of a <see cref="DiffusionLengthMesh"/>: each layer's share of what the run can get wrong, and the
+/// cell widths across one layer, smallest at the edges where something crosses and growing toward the middle.
 /// </summary>
-/// <param name="WidthPerDiffusionLength">
-/// Cell width over the distance from the nearer edge (or over the early diffusion length, whichever is larger) in the
-/// layer that can exchange the most; coarser in proportion to 1/sqrt(share) in a layer that exchanges a smaller share.
-/// </param>
-/// <param name="MinimumCellsPerLayer">Fewest cells in a layer; also caps the widest cell at thickness / this.</param>
-public sealed record DiffusionLengthMesh(
-    double WidthPerDiffusionLength,
-    int MinimumCellsPerLayer)
+public static class DiffusionLengthCells
 {
     /// <summary>
     /// The earliest time resolved, as a fraction of the earliest report time: an error made while the edge cells are
@@ -71,19 +60,20 @@ public sealed record DiffusionLengthMesh(
     /// geometrically from there. An edge on a closed face needs no small cells: no flux crosses it, so no steep
     /// gradient forms there.
     /// </summary>
+    /// <param name="mesh">The mesh settings.</param>
     /// <param name="thicknessMeters">The layer's thickness, m.</param>
     /// <param name="diffusivitySquareMetersPerSecond">The layer's diffusion coefficient, m2/s.</param>
     /// <param name="share">The layer's share from <see cref="Shares"/>.</param>
     /// <param name="earliestSeconds">The earliest time whose profile the edge cells resolve, s.</param>
     /// <param name="resolveStart">Whether the edge at the start of the layer gets small cells.</param>
     /// <param name="resolveEnd">Whether the edge at the end of the layer gets small cells.</param>
-    public double[] Widths(double thicknessMeters, double diffusivitySquareMetersPerSecond, double share, double earliestSeconds, bool resolveStart, bool resolveEnd)
+    public static double[] Widths(this DiffusionLengthMesh mesh, double thicknessMeters, double diffusivitySquareMetersPerSecond, double share, double earliestSeconds, bool resolveStart, bool resolveEnd)
     {
-        var fraction = Math.Min(CoarsestWidthPerDiffusionLength, WidthPerDiffusionLength / Math.Sqrt(Math.Max(share, 1e-12)));
-        var widest = thicknessMeters / MinimumCellsPerLayer;
+        var fraction = Math.Min(CoarsestWidthPerDiffusionLength, mesh.WidthPerDiffusionLength / Math.Sqrt(Math.Max(share, 1e-12)));
+        var widest = thicknessMeters / mesh.MinimumCellsPerLayer;
         if (!resolveStart && !resolveEnd)
         {
-            return Enumerable.Repeat(widest, MinimumCellsPerLayer).ToArray();
+            return Enumerable.Repeat(widest, mesh.MinimumCellsPerLayer).ToArray();
         }
 
         // The floor keeps the count finite (logarithmic in it) for extreme inputs.

@@ -1,4 +1,4 @@
-namespace Layers.Core.Discretization;
+namespace Layers.Core.Domain;
 
 /// <summary>Mesh settings. Defaults reach 0.1 % relative error on the verification cases.</summary>
 public sealed record GridOptions
@@ -21,8 +21,8 @@ public sealed record GridOptions
     /// <summary>
     /// The earliest time whose profiles the mesh must resolve at the edges of every layer, s, or null (default) for
     /// the plain grading. When set, the cells at both edges of a layer are made no wider than
-    /// <see cref="GridBuilder.EdgeWidthPerDiffusionLength"/> times the diffusion length sqrt(D t) of that layer at this
-    /// time, by raising the grading ratio up to <see cref="GridBuilder.SteepestGradingRatio"/> (the width-ratio cap
+    /// <c>Discretization.GridBuilder.EdgeWidthPerDiffusionLength</c> times the diffusion length sqrt(D t) of that layer at this
+    /// time, by raising the grading ratio up to <c>Discretization.GridBuilder.SteepestGradingRatio</c> (the width-ratio cap
     /// then does not apply): a slow layer next to a fast one, or a layer with a large partition coefficient that takes
     /// up much from its neighbour, gets its cells where its steep early profile lies.
     /// </summary>

@@ -1,0 +1,19 @@
+namespace Layers.Core.Domain;
+
+/// <summary>
+/// A mesh whose cells are sized by what each layer's profile can do in the run rather than by its thickness: the
+/// cells at the edges of a layer where something crosses (interfaces, open faces) are a fraction f of the layer's
+/// diffusion length sqrt(D t) at the earliest time to resolve, and grow by 1 + f toward the middle (a width
+/// proportional to the distance from the edge, as the self-similar early profile needs at every later time), up to
+/// the layer's thickness over its minimum cell count. A layer that diffusion crosses many times over the run gets
+/// few cells; a slow, thick layer gets small cells at its edges and a few wide ones where nothing arrives.
+/// The settings only; Discretization/DiffusionLengthCells places the cells by them.
+/// </summary>
+/// <param name="WidthPerDiffusionLength">
+/// Cell width over the distance from the nearer edge (or over the early diffusion length, whichever is larger) in the
+/// layer that can exchange the most; coarser in proportion to 1/sqrt(share) in a layer that exchanges a smaller share.
+/// </param>
+/// <param name="MinimumCellsPerLayer">Fewest cells in a layer; also caps the widest cell at thickness / this.</param>
+public sealed record DiffusionLengthMesh(
+    double WidthPerDiffusionLength,
+    int MinimumCellsPerLayer);
