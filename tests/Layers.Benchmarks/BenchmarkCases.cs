@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Studies;
 
 namespace Layers.Benchmarks;
 
@@ -15,7 +16,7 @@ public static class BenchmarkCases
     public static SimulationCase Load(string name)
     {
         var path = Path.Combine(AppContext.BaseDirectory, "cases", name + ".json");
-        var read = CaseReader.ReadFile(path);
+        var read = CaseDocument.ReadFile(path);
         return read.Case ?? throw new InvalidOperationException(read.FormatErrors());
     }
 
@@ -36,7 +37,7 @@ public static class BenchmarkCases
         document.Remove("numerics");
         numerics["accuracy"] = double.Parse(accuracy, CultureInfo.InvariantCulture);
         document["numerics"] = numerics;
-        var read = CaseReader.ReadText(document.ToJsonString(), path);
+        var read = CaseDocument.ReadText(document.ToJsonString(), path);
         return read.Case ?? throw new InvalidOperationException(read.FormatErrors());
     }
 }

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using Layers.Core.Cases;
+using Layers.Core.Studies;
 
 namespace Layers.Cli.Commands;
 
@@ -29,7 +30,7 @@ internal static class CaseArgument
     /// <summary>Reads a case; on failure prints every error to <paramref name="error"/> and returns null.</summary>
     public static CaseReadResult? ReadOrReport(string path, TextWriter error, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
     {
-        var result = CaseReader.ReadFile(path, access);
+        var result = CaseDocument.ReadFile(path, access);
         if (result.IsValid)
         {
             return result;

@@ -3,6 +3,7 @@ using Layers.Core.Cases;
 using Layers.Core.Reports;
 using Layers.Core.Results;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 
 namespace Layers.Core.Batch;
 
@@ -93,7 +94,7 @@ public static class BatchRunner
             return Row(item, BatchStatus.Invalid, Describe(item.Errors, item.File));
         }
 
-        var read = CaseReader.ReadText(item.Json, item.File, access);
+        var read = CaseDocument.ReadText(item.Json, item.File, access);
         if (read.Case is not { } simulation)
         {
             return Row(item, BatchStatus.Invalid, Describe(read.Errors, item.File));

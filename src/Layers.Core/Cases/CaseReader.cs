@@ -35,14 +35,15 @@ public static class CaseReader
     /// <summary>Reads a case file from disk (<see cref="InputFile"/>: a regular UTF-8 file within the size limit).</summary>
     /// <param name="path">The case file.</param>
     /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
-    public static CaseReadResult ReadFile(string path, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
+    /// <param name="studySections">Checks the study sections of the document, if it declares any; see <see cref="ReadText"/>.</param>
+    public static CaseReadResult ReadFile(string path, CaseFileAccess access = CaseFileAccess.InsideCaseFolder, StudySectionCheck? studySections = null)
     {
         if (ReadDocument(path, out var error) is not { } text)
         {
             return new CaseReadResult(path, null, [error!]);
         }
 
-        return ReadText(text, path, access);
+        return ReadText(text, path, access, studySections);
     }
 
     /// <summary>The text of a case file, or null with the error that says why it cannot be read.</summary>
@@ -57,7 +58,12 @@ public static class CaseReader
     /// <param name="json">The case document.</param>
     /// <param name="fileName">The case file: named in messages, gives the default title, and is where the files the case names are looked for.</param>
     /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
-    public static CaseReadResult ReadText(string json, string fileName, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
+    /// <param name="studySections">
+    /// Checks the study sections (<c>design</c>, <c>uncertainty</c>) of a document that declares one, once the case
+    /// itself is valid; null leaves them unchecked. Studies sit above case reading, so they hand their check in:
+    /// Studies.CaseDocument reads a case file with it.
+    /// </param>
+    public static CaseReadResult ReadText(string json, string fileName, CaseFileAccess access = CaseFileAccess.InsideCaseFolder, StudySectionCheck? studySections = null)
     {
         JsonDocument document;
         try
@@ -87,12 +93,12 @@ public static class CaseReader
                 errors.AddRange(SweepExpander.Expand(json, fileName).Errors);
             }
 
-            if (errors.Count == 0 && DeclaresStudy(document.RootElement))
+            if (errors.Count == 0 && studySections is not null && DeclaresStudy(document.RootElement))
             {
                 // Likewise the study sections: read as one case the file is its base case, and `layers check`
                 // reports the mistakes of its design or uncertainty study. Only then is the document parsed again
                 // (as a mutable tree), which a plain case in a large batch need not pay for.
-                errors.AddRange(Studies.StudySections.Check(json, fileName, simulation!));
+                errors.AddRange(studySections(json, fileName, simulation!));
             }
 
             if (errors.Count == 0)

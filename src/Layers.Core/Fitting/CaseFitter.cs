@@ -40,7 +40,7 @@ public static class CaseFitter
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(errors);
         var before = errors.Count;
-        var read = CaseReader.ReadFile(request.CasePath);
+        var read = CaseDocument.ReadFile(request.CasePath);
         if (read.Case is not { } simulation)
         {
             errors.Add(read.FormatErrors());

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Batch;
@@ -32,8 +33,8 @@ public sealed class SweepExpanderTests
         Assert.Null(middle["sweep"]);
         Assert.All(expansion.Variants, variant => Assert.Matches("^[A-Za-z0-9._+-]+$", variant.Name));
         // Every sub-case is a valid case on its own.
-        Assert.All(expansion.Variants, variant => Assert.True(CaseReader.ReadText(variant.Json, "film.json").IsValid));
-        Assert.Equal(1e-9 * 1e-4, CaseReader.ReadText(expansion.Variants[1].Json, "film.json").Case!.Stack.Layers[0].DiffusivitySquareMetersPerSecond, 1e-22);
+        Assert.All(expansion.Variants, variant => Assert.True(CaseDocument.ReadText(variant.Json, "film.json").IsValid));
+        Assert.Equal(1e-9 * 1e-4, CaseDocument.ReadText(expansion.Variants[1].Json, "film.json").Case!.Stack.Layers[0].DiffusivitySquareMetersPerSecond, 1e-22);
     }
 
     [Fact]
@@ -76,7 +77,7 @@ public sealed class SweepExpanderTests
     {
         var expansion = SweepExpander.Expand(Sweep("""[ { "path": "$.layers[0].thickness", "values": ["-1 um"] } ]"""), "s.json");
 
-        var read = CaseReader.ReadText(Assert.Single(expansion.Variants).Json, "s.json");
+        var read = CaseDocument.ReadText(Assert.Single(expansion.Variants).Json, "s.json");
 
         Assert.Equal("$.layers[0].thickness", Assert.Single(read.Errors).JsonPath);
         Assert.Equal("s.01_thickness--1um", expansion.Variants[0].Name.ToString(CultureInfo.InvariantCulture));
@@ -132,7 +133,7 @@ public sealed class SweepDuplicateKeyTests
     [Fact]
     public void Check_of_a_sweep_with_a_repeated_key_reports_it_once()
     {
-        var read = CaseReader.ReadText(CaseJson.With(BatchCases.ThicknessSweep("1 um"), ("$.sweep.result", "\"lagTime\"")).Replace("\"title\"", "\"title\": \"x\", \"title\"", StringComparison.Ordinal), "d.json");
+        var read = CaseDocument.ReadText(CaseJson.With(BatchCases.ThicknessSweep("1 um"), ("$.sweep.result", "\"lagTime\"")).Replace("\"title\"", "\"title\": \"x\", \"title\"", StringComparison.Ordinal), "d.json");
 
         Assert.Equal(["$.title"], read.Errors.Select(error => error.JsonPath));
     }

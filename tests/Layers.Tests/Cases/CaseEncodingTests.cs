@@ -1,5 +1,6 @@
 using System.Text;
 using Layers.Core.Cases;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.CaseReading;
@@ -20,7 +21,7 @@ public sealed class CaseEncodingTests
         var path = temp.Combine("latin.json");
         File.WriteAllBytes(path, bytes);
 
-        var read = CaseReader.ReadFile(path);
+        var read = CaseDocument.ReadFile(path);
 
         var error = Assert.Single(read.Errors);
         Assert.Equal("$", error.JsonPath);
@@ -34,7 +35,7 @@ public sealed class CaseEncodingTests
         using var temp = new TempFolder();
         var path = temp.WriteFile("utf8.json", CaseJson.With(CaseJson.Minimal, ("$.title", "\"Café\"")));
 
-        var read = CaseReader.ReadFile(path);
+        var read = CaseDocument.ReadFile(path);
 
         Assert.True(read.IsValid, read.FormatErrors());
         Assert.Equal("Café", read.Case!.Title);

@@ -2,6 +2,7 @@ using System.Diagnostics;
 using Layers.Cli;
 using Layers.Core.Cases;
 using Layers.Core.Files;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.CaseReading;
@@ -36,7 +37,7 @@ public sealed class CaseFilePathTests
         temp.WriteFile("outside.csv", GoodData);
         var caseFile = temp.WriteFile(Path.Combine("cases", "case.json"), CaseNaming(written));
 
-        var error = MeasuredError(CaseReader.ReadFile(caseFile));
+        var error = MeasuredError(CaseDocument.ReadFile(caseFile));
 
         Assert.Equal($"'{written}' is outside the folder of case.json; a file named there must be in that folder or below it (the command line's --allow-outside-files lifts this)", error.Message);
     }
@@ -48,7 +49,7 @@ public sealed class CaseFilePathTests
         var outside = temp.WriteFile("passwd", $"root:x:0:0:{Secret}:/root:/bin/bash\n");
         var caseFile = temp.WriteFile(Path.Combine("cases", "case.json"), CaseNaming(outside));
 
-        var read = CaseReader.ReadFile(caseFile);
+        var read = CaseDocument.ReadFile(caseFile);
 
         Assert.Contains("is outside the folder of case.json", MeasuredError(read).Message, StringComparison.Ordinal);
         Assert.DoesNotContain(Secret, read.FormatErrors(), StringComparison.Ordinal);
@@ -61,7 +62,7 @@ public sealed class CaseFilePathTests
         temp.WriteFile(Path.Combine("cases", "data", "q.csv"), GoodData);
         var caseFile = temp.WriteFile(Path.Combine("cases", "case.json"), CaseNaming("data/q.csv"));
 
-        var read = CaseReader.ReadFile(caseFile);
+        var read = CaseDocument.ReadFile(caseFile);
 
         Assert.True(read.IsValid, read.FormatErrors());
         Assert.Equal(4, read.Case!.PermeationTest!.Measured!.TimesSeconds.Count);
@@ -74,7 +75,7 @@ public sealed class CaseFilePathTests
         temp.WriteFile("outside.csv", GoodData);
         var caseFile = temp.WriteFile(Path.Combine("cases", "case.json"), CaseNaming("../outside.csv"));
 
-        var read = CaseReader.ReadFile(caseFile, CaseFileAccess.Anywhere);
+        var read = CaseDocument.ReadFile(caseFile, CaseFileAccess.Anywhere);
 
         Assert.True(read.IsValid, read.FormatErrors());
     }
@@ -87,7 +88,7 @@ public sealed class CaseFilePathTests
         var caseFile = temp.WriteFile(Path.Combine("cases", "case.json"), CaseNaming("link.csv"));
         File.CreateSymbolicLink(temp.Combine("cases", "link.csv"), outside);
 
-        var error = MeasuredError(CaseReader.ReadFile(caseFile));
+        var error = MeasuredError(CaseDocument.ReadFile(caseFile));
 
         Assert.StartsWith("'link.csv' is outside the folder of case.json", error.Message, StringComparison.Ordinal);
     }
@@ -109,7 +110,7 @@ public sealed class CaseFilePathTests
 
         // Opening a FIFO for reading blocks until a writer comes, which none will: a task that has not finished in
         // a minute has blocked.
-        var reading = Task.Run(() => CaseReader.ReadFile(caseFile));
+        var reading = Task.Run(() => CaseDocument.ReadFile(caseFile));
         var first = await Task.WhenAny(reading, Task.Delay(TimeSpan.FromMinutes(1)));
         Assert.True(first == reading, "reading the case blocked on the FIFO");
 
@@ -127,7 +128,7 @@ public sealed class CaseFilePathTests
         using var temp = new TempFolder();
         var caseFile = temp.WriteFile("case.json", CaseNaming("/dev/zero"));
 
-        var error = MeasuredError(CaseReader.ReadFile(caseFile, CaseFileAccess.Anywhere));
+        var error = MeasuredError(CaseDocument.ReadFile(caseFile, CaseFileAccess.Anywhere));
 
         Assert.Equal("'/dev/zero': not a regular file but a device; only regular files are read", error.Message);
     }
@@ -160,7 +161,7 @@ public sealed class CaseFilePathTests
         temp.WriteFile("q.csv", content);
         var caseFile = temp.WriteFile("case.json", CaseNaming("q.csv"));
 
-        var message = MeasuredError(CaseReader.ReadFile(caseFile)).Message;
+        var message = MeasuredError(CaseDocument.ReadFile(caseFile)).Message;
 
         Assert.DoesNotContain(neverShown, message, StringComparison.Ordinal);
         Assert.StartsWith("'q.csv' line ", message, StringComparison.Ordinal);

@@ -3,6 +3,7 @@ using System.Text.RegularExpressions;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
 using Layers.Core.FoodContact;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.CaseReading;
@@ -61,7 +62,7 @@ public sealed partial class CaseFormatTemperatureUnitsTests
             foreach (var energyUnit in Row("Molar energy").Units)
             {
                 var json = Case.Replace("TEMPERATURE", Temperatures[unit], StringComparison.Ordinal).Replace("ENERGY", Energies[energyUnit], StringComparison.Ordinal);
-                var read = CaseReader.ReadText(json, "food.json");
+                var read = CaseDocument.ReadText(json, "food.json");
                 Assert.True(read.IsValid, $"{unit}, {energyUnit}: {read.FormatErrors()}");
 
                 var food = read.Case!.FoodContact!;

@@ -1,4 +1,5 @@
 using Layers.Core.Cases;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.CaseReading;
@@ -27,7 +28,7 @@ public sealed class CaseLimitsTests
         var layers = string.Join(", ", Enumerable.Range(0, count).Select(i =>
             $$"""{ "name": "l{{i}}", "thickness": "1 um", "diffusionCoefficient": "1e-8 cm2/s", "partitionCoefficient": 1 }"""));
 
-        var read = CaseReader.ReadText(CaseJson.With(OneLayer, ("$.layers", $"[{layers}]")), "many.json");
+        var read = CaseDocument.ReadText(CaseJson.With(OneLayer, ("$.layers", $"[{layers}]")), "many.json");
 
         Assert.Equal(valid, read.IsValid);
         if (!valid)
@@ -47,7 +48,7 @@ public sealed class CaseLimitsTests
     {
         var times = string.Join(", ", Enumerable.Range(1, count).Select(second => $"\"{second} s\""));
 
-        var read = CaseReader.ReadText(CaseJson.With(OneLayer, (path, $"[{times}]")), "times.json");
+        var read = CaseDocument.ReadText(CaseJson.With(OneLayer, (path, $"[{times}]")), "times.json");
 
         Assert.Equal(valid, read.IsValid);
         if (!valid)

@@ -1,4 +1,5 @@
 using Layers.Core.Cases;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.CaseReading;
@@ -144,7 +145,7 @@ public sealed class CaseReaderErrorListTests
         using var folder = new TempFolder();
         var path = folder.Combine("no-such-case.json");
 
-        var result = CaseReader.ReadFile(path);
+        var result = CaseDocument.ReadFile(path);
 
         Assert.False(result.IsValid);
         Assert.Null(result.Case);
@@ -159,7 +160,7 @@ public sealed class CaseReaderErrorListTests
     {
         using var folder = new TempFolder();
 
-        var result = CaseReader.ReadFile(folder.Path);
+        var result = CaseDocument.ReadFile(folder.Path);
 
         var error = Assert.Single(result.Errors);
         Assert.Equal("$", error.JsonPath);

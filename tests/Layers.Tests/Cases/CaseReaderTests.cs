@@ -1,5 +1,6 @@
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 // Not "Layers.Tests.Cases": that namespace would hide the TestSupport.Cases helper from the other test folders.
@@ -301,8 +302,8 @@ public sealed class CaseReaderTests
         using var folder = new TempFolder();
         var path = folder.WriteFile("film-a.json", TwoLayerFilm);
 
-        var fromFile = CaseReader.ReadFile(path);
-        var fromText = CaseReader.ReadText(TwoLayerFilm, path);
+        var fromFile = CaseDocument.ReadFile(path);
+        var fromText = CaseDocument.ReadText(TwoLayerFilm, path);
 
         Assert.True(fromFile.IsValid, fromFile.FormatErrors());
         Assert.Equal(path, fromFile.FileName);

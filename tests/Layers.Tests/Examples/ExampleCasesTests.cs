@@ -1,5 +1,6 @@
 using Layers.Core.Cases;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Examples;
@@ -26,7 +27,7 @@ public sealed class ExampleCasesTests
     [MemberData(nameof(ExampleCases))]
     public void Example_case_reads_valid_and_runs_to_completion_conserving_mass(string relativePath)
     {
-        var read = CaseReader.ReadFile(RepoRoot.File(relativePath));
+        var read = CaseDocument.ReadFile(RepoRoot.File(relativePath));
         Assert.True(read.IsValid, read.FormatErrors());
 
         var result = Simulator.Run(read.Case!);
@@ -47,7 +48,7 @@ public sealed class ExampleCasesTests
         var expected = File.ReadAllLines(expectedFile).Where(line => line.Length > 0).ToList();
         Assert.NotEmpty(expected);
 
-        var read = CaseReader.ReadFile(path);
+        var read = CaseDocument.ReadFile(path);
 
         Assert.False(read.IsValid, $"{relativePath} reads as valid");
         Assert.Equal(expected, read.Errors.Select(error => error.Format(Path.GetFileName(path))));

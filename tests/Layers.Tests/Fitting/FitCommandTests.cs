@@ -1,6 +1,7 @@
 using System.Text.Json;
 using Layers.Cli;
 using Layers.Core.Fitting;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Fitting;
@@ -24,7 +25,7 @@ public sealed class FitCommandTests
         Assert.Contains("Estimated inputs hold for this model", outcome.Output);
 
         // The fitted case is a valid case that carries the estimates (the same rules as any case file).
-        var fitted = Layers.Core.Cases.CaseReader.ReadFile(Path.Combine(folder, "fitted-case.json"));
+        var fitted = CaseDocument.ReadFile(Path.Combine(folder, "fitted-case.json"));
         Assert.True(fitted.IsValid, fitted.FormatErrors());
         Assert.Equal("fitted", fitted.Case!.Stack.Layers[0].DiffusivityOrigin);
 

@@ -1,5 +1,6 @@
 using Layers.Core.Cases;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Plotting;
 using Layers.Tests.TestSupport;
 using OxyPlot.Series;
@@ -16,7 +17,7 @@ public sealed class CumulativeAmountPlotTests
     [Fact]
     public void Demo_shows_model_samples_measurements_and_both_steady_lines_through_their_lag_times()
     {
-        var read = CaseReader.ReadFile(RepoRoot.File("cases", "skin-diffusion-cell-sampling.json"));
+        var read = CaseDocument.ReadFile(RepoRoot.File("cases", "skin-diffusion-cell-sampling.json"));
         var result = Simulator.Run(read.Case!);
 
         var model = CumulativeAmountPlot.Create(result, new PlotOptions());
@@ -37,7 +38,7 @@ public sealed class CumulativeAmountPlotTests
     [Fact]
     public void Cases_without_permeation_metrics_get_no_cumulative_plot()
     {
-        var read = CaseReader.ReadFile(RepoRoot.File("cases", "laminate-fatty-food.json"));
+        var read = CaseDocument.ReadFile(RepoRoot.File("cases", "laminate-fatty-food.json"));
 
         Assert.False(CumulativeAmountPlot.Applies(Simulator.Run(read.Case!)));
     }

@@ -3,6 +3,7 @@ using Layers.Core.Analytics;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
 using Layers.Core.Permeation;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Pharma;
@@ -61,7 +62,7 @@ public sealed class PermeationMetricsTests
 
         File.WriteAllLines(Path.Combine(folder.Path, "q.csv"), lines);
         var json = CaseJson.MinimalWith(("$.right", """{ "kind": "bath" }"""), ("$.permeationTest", """{ "measured": "q.csv", "donorConcentration": "3 kg/m3" }"""));
-        var read = CaseReader.ReadText(json, Path.Combine(folder.Path, "case.json"));
+        var read = CaseDocument.ReadText(json, Path.Combine(folder.Path, "case.json"));
         Assert.True(read.IsValid, read.FormatErrors());
 
         var measured = read.Case!.PermeationTest!.Measured!;
@@ -81,7 +82,7 @@ public sealed class PermeationMetricsTests
         File.WriteAllText(Path.Combine(folder.Path, "q.csv"), text);
         var json = CaseJson.MinimalWith(("$.permeationTest", """{ "measured": "q.csv" }"""));
 
-        var read = CaseReader.ReadText(json, Path.Combine(folder.Path, "case.json"));
+        var read = CaseDocument.ReadText(json, Path.Combine(folder.Path, "case.json"));
 
         var line = Assert.Single(CaseJson.ErrorLines(read));
         Assert.StartsWith($"$.permeationTest.measured: {expected}", line, StringComparison.Ordinal);

@@ -1,6 +1,7 @@
 using Layers.Core.Cases;
 using Layers.Core.Permeation;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Pharma;
@@ -34,7 +35,7 @@ public sealed class PottsGuyTests
               "duration": "10 d"
             }
             """;
-        var read = CaseReader.ReadText(json, "sc.json");
+        var read = CaseDocument.ReadText(json, "sc.json");
         Assert.True(read.IsValid, read.FormatErrors());
         var layer = read.Case!.Stack.Layers[0];
 

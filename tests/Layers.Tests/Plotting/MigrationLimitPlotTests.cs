@@ -2,6 +2,7 @@ using System.Text.Json;
 using Layers.Core.Cases;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Plotting;
 using OxyPlot.Annotations;
 
@@ -30,7 +31,7 @@ public sealed class MigrationLimitPlotTests
     [InlineData(false)]
     public void Transfer_plot_gives_the_time_the_limit_is_reached_that_summary_json_gives(bool logarithmicTime)
     {
-        var read = CaseReader.ReadText(Case, "food.json");
+        var read = CaseDocument.ReadText(Case, "food.json");
         Assert.True(read.IsValid, read.FormatErrors());
         var result = Simulator.Run(read.Case!);
         using var summary = JsonDocument.Parse(SummaryJson.Write(result, "food.json"));

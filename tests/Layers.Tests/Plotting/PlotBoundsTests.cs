@@ -1,5 +1,6 @@
 using Layers.Core.Cases;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Plotting;
 using OxyPlot;
 using OxyPlot.Annotations;
@@ -54,7 +55,7 @@ public sealed class PlotBoundsTests
     {
         // Invented: a tiny compartment beside a thick sink layer with K = 1e8, so that the compartment's fraction of
         // the way to equilibrium runs to huge values (the case of the report in issue 16, shortened).
-        var read = CaseReader.ReadText(
+        var read = CaseDocument.ReadText(
             """
             {
               "title": "Fraction far off the plot",
@@ -84,7 +85,7 @@ public sealed class PlotBoundsTests
     public void A_profile_with_many_report_times_draws_twelve_spread_evenly_and_says_so()
     {
         var times = string.Join(", ", Enumerable.Range(1, 40).Select(hour => $"\"{hour} h\""));
-        var read = CaseReader.ReadText(
+        var read = CaseDocument.ReadText(
             $$"""
             {
               "title": "Forty report times",
@@ -114,7 +115,7 @@ public sealed class PlotBoundsTests
     {
         var layers = string.Join(", ", Enumerable.Range(0, 30).Select(i =>
             $$"""{ "name": "l{{i}}", "thickness": "10 um", "diffusionCoefficient": "1e-9 cm2/s", "partitionCoefficient": 1, "initialConcentration": "{{(i == 0 ? 1 : 0)}} mg/mL" }"""));
-        var read = CaseReader.ReadText(
+        var read = CaseDocument.ReadText(
             $$"""
             { "title": "Thirty layers", "layers": [{{layers}}], "left": { "kind": "closed" }, "right": { "kind": "closed" }, "duration": "1 h" }
             """,
@@ -135,7 +136,7 @@ public sealed class PlotBoundsTests
     {
         var layers = string.Join(", ", Enumerable.Range(0, 60).Select(i =>
             $$"""{ "name": "coating number {{i}}", "thickness": "10 um", "diffusionCoefficient": "1e-9 cm2/s", "partitionCoefficient": 1, "initialConcentration": "{{(i == 0 ? 1 : 0)}} mg/mL" }"""));
-        var read = CaseReader.ReadText(
+        var read = CaseDocument.ReadText(
             $$"""
             { "title": "Sixty layers", "layers": [{{layers}}], "left": { "kind": "closed" }, "right": { "kind": "closed" }, "duration": "1 h" }
             """,

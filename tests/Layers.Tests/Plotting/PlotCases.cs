@@ -2,6 +2,7 @@ using Layers.Core.Cases;
 using Layers.Core.Domain;
 using Layers.Core.Results;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Core.Units;
 
 namespace Layers.Tests.Plotting;
@@ -14,7 +15,7 @@ public sealed class PlotCases
 {
     private readonly Lazy<SimulationResult> _demo = new(() =>
     {
-        var read = CaseReader.ReadFile(Path.Combine(RepoRoot(), "cases", "laminate-fatty-food.json"));
+        var read = CaseDocument.ReadFile(Path.Combine(RepoRoot(), "cases", "laminate-fatty-food.json"));
         Assert.True(read.IsValid, read.FormatErrors());
         return Simulator.Run(read.Case!);
     });

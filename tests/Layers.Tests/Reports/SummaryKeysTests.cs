@@ -3,6 +3,7 @@ using System.Text.RegularExpressions;
 using Layers.Core.Cases;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Reports;
@@ -25,7 +26,7 @@ public sealed partial class SummaryKeysTests
         var written = new SortedSet<string>(StringComparer.Ordinal);
         foreach (var demo in Demos.Where(demo => File.Exists(RepoRoot.File("cases", demo + ".json"))))
         {
-            var read = CaseReader.ReadFile(RepoRoot.File("cases", demo + ".json"));
+            var read = CaseDocument.ReadFile(RepoRoot.File("cases", demo + ".json"));
             var json = SummaryJson.Write(Simulator.Run(read.Case!), demo + ".json");
             using var document = JsonDocument.Parse(json);
             Collect(document.RootElement, string.Empty, written);

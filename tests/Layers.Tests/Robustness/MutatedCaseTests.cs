@@ -3,6 +3,7 @@ using System.Text;
 using Layers.Core.Cases;
 using Layers.Core.Reports;
 using Layers.Core.Simulation;
+using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Robustness;
@@ -41,7 +42,7 @@ public sealed class MutatedCaseTests
         {
             var damaged = Damage(original, random);
 
-            var result = CaseReader.ReadText(damaged, demo);
+            var result = CaseDocument.ReadText(damaged, demo);
 
             Assert.True(result.IsValid || result.Errors.Count > 0);
             Assert.All(result.Errors, error =>
@@ -57,7 +58,7 @@ public sealed class MutatedCaseTests
     public void The_summary_records_the_SHA_256_of_the_case_file()
     {
         var path = RepoRoot.File("cases", "membrane-time-lag.json");
-        var read = CaseReader.ReadFile(path);
+        var read = CaseDocument.ReadFile(path);
 
         var summary = SummaryJson.Write(Simulator.Run(read.Case!), path);
 

@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using Json.Schema;
+using Layers.Core.Studies;
 
 namespace Layers.Tests.Schema;
 
@@ -225,7 +226,7 @@ public class SchemaTests
         {
             var json = File.ReadAllText(path);
             Assert.True(Evaluate(json).IsValid, Describe(Path.GetRelativePath(_repoRoot.Value, path), JsonNode.Parse(json), _schema.Value));
-            var read = Layers.Core.Cases.CaseReader.ReadText(json, path);
+            var read = CaseDocument.ReadText(json, path);
             Assert.True(read.IsValid, read.FormatErrors());
         });
     }

@@ -44,7 +44,7 @@ internal static class StudyCases
     private static (JsonObject, SimulationCase, T) Study<T>(string json, Func<JsonObject, string, SimulationCase, List<CaseError>, T?> read)
         where T : class
     {
-        var file = CaseReader.ReadText(json, "study.json");
+        var file = CaseDocument.ReadText(json, "study.json");
         Assert.True(file.IsValid, file.FormatErrors());
         var document = CaseVariation.Parse(json)!;
         var errors = new List<CaseError>();
@@ -55,5 +55,5 @@ internal static class StudyCases
 
     /// <summary>The messages of reading a document as "path: message".</summary>
     public static IReadOnlyList<string> Errors(string json) =>
-        CaseReader.ReadText(json, "study.json").Errors.Select(error => $"{error.JsonPath}: {error.Message}").ToList();
+        CaseDocument.ReadText(json, "study.json").Errors.Select(error => $"{error.JsonPath}: {error.Message}").ToList();
 }

@@ -3,6 +3,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using System.Text.RegularExpressions;
 using Layers.Core.Cases;
+using Layers.Core.Studies;
 
 namespace Layers.Tests.TestSupport;
 
@@ -43,7 +44,7 @@ internal static partial class CaseJson
     public static string MinimalWith(params (string Path, string? Value)[] edits) => With(Minimal, edits);
 
     /// <summary>Reads a document as the file <c>case.json</c>.</summary>
-    public static CaseReadResult Read(string json, string fileName = "case.json") => CaseReader.ReadText(json, fileName);
+    public static CaseReadResult Read(string json, string fileName = "case.json") => CaseDocument.ReadText(json, fileName);
 
     /// <summary>The errors as "path: message" lines.</summary>
     public static IReadOnlyList<string> ErrorLines(CaseReadResult result) =>

@@ -1,0 +1,23 @@
+using Layers.Core.Cases;
+
+namespace Layers.Core.Studies;
+
+/// <summary>
+/// Reads a whole case file: the case (<see cref="CaseReader"/>), its sweep, and the study it may declare, so that a
+/// mistake in any part is reported when the file is read. This is how the tool reads a case file it is given.
+/// </summary>
+public static class CaseDocument
+{
+    /// <summary>Reads a case file from disk, study sections included.</summary>
+    /// <param name="path">The case file.</param>
+    /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
+    public static CaseReadResult ReadFile(string path, CaseFileAccess access = CaseFileAccess.InsideCaseFolder) =>
+        CaseReader.ReadFile(path, access, StudySections.Check);
+
+    /// <summary>Reads a case from JSON text, study sections included.</summary>
+    /// <param name="json">The case document.</param>
+    /// <param name="fileName">The case file: named in messages, gives the default title, and is where the files the case names are looked for.</param>
+    /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
+    public static CaseReadResult ReadText(string json, string fileName, CaseFileAccess access = CaseFileAccess.InsideCaseFolder) =>
+        CaseReader.ReadText(json, fileName, access, StudySections.Check);
+}
