@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Results;
 using Layers.Core.Units;
 
 namespace Layers.Core.Studies;
@@ -15,7 +16,7 @@ internal static class StudyValues
     /// </summary>
     public static ResultMeasure? Measure(JsonNode? node, string at, SimulationCase baseCase, List<CaseError> errors)
     {
-        var expected = string.Join(", ", ResultMeasure.Names.Keys);
+        var expected = string.Join(", ", NamedResults.ByName.Keys);
         string? name = null;
         JsonNode? time = null;
         if (node is JsonValue value && value.TryGetValue<string>(out var text))
@@ -29,7 +30,7 @@ internal static class StudyValues
             time = member["at"];
         }
 
-        if (name is null || !ResultMeasure.Names.TryGetValue(name, out var kind))
+        if (name is null || !NamedResults.ByName.TryGetValue(name, out var kind))
         {
             errors.Add(new CaseError(at, $"must be one of {expected}, or {{ \"name\": ..., \"at\": \"10 d\" }}; got {node?.ToJsonString() ?? "nothing"}"));
             return null;

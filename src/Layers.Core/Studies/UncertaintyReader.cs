@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Results;
 using Layers.Core.Units;
 
 namespace Layers.Core.Studies;
@@ -230,7 +231,7 @@ public static class UncertaintyReader
         if (study["limit"] is null)
         {
             return baseCase.FoodContact?.SpecificMigrationLimit is { } limit
-                ? new StudyLimit(new ResultMeasure(MeasureKind.FoodConcentration), limit, UnitTable.Get("mg/kg"), "$.foodContact.specificMigrationLimit")
+                ? new StudyLimit(new ResultMeasure(NamedResult.FoodConcentration), limit, UnitTable.Get("mg/kg"), "$.foodContact.specificMigrationLimit")
                 : null;
         }
 
