@@ -117,6 +117,14 @@ internal static class StudyValues
         return null;
     }
 
+    /// <summary>One of the members of <typeparamref name="T"/> written as its camel-case name; the first member when absent.</summary>
+    public static T? Choice<T>(JsonObject holder, string key, string at, List<CaseError> errors)
+        where T : struct, Enum
+    {
+        var byName = Enum.GetValues<T>().ToDictionary(value => JsonNamingPolicy.CamelCase.ConvertName(value.ToString()), value => value, StringComparer.Ordinal);
+        return Word(holder, key, at, [.. byName.Keys], errors) is { } word ? byName[word] : null;
+    }
+
     /// <summary>Adds an error for every member not in <paramref name="keys"/>.</summary>
     public static void Unknown(JsonObject holder, string at, IReadOnlyList<string> keys, List<CaseError> errors)
     {
