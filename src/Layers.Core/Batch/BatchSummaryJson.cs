@@ -65,7 +65,11 @@ public static class BatchSummaryJson
                 entry.GetProperty("results") is { ValueKind: JsonValueKind.Object } results ? ReadResults(results) : null)
             {
                 Limit = entry.TryGetProperty("limit", out var limit) && limit.ValueKind == JsonValueKind.Object
-                    ? new LimitCheck(limit.GetProperty("quantity").GetString()!, limit.GetProperty("limit").GetDouble(), limit.GetProperty("value").GetDouble())
+                    ? new LimitCheck(
+                        LimitCheck.ParseQuantity(limit.GetProperty("quantity").GetString()!)
+                            ?? throw new JsonException($"unknown limit quantity '{limit.GetProperty("quantity").GetString()}'"),
+                        limit.GetProperty("limit").GetDouble(),
+                        limit.GetProperty("value").GetDouble())
                     : null,
             });
         }

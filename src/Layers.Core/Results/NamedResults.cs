@@ -51,7 +51,7 @@ public static class NamedResults
         NamedResult.RightReceived => "received by the right medium at the end",
         NamedResult.LeftConcentration => "concentration in the left medium at the end",
         NamedResult.RightConcentration => "concentration in the right medium at the end",
-        NamedResult.FoodConcentration => "concentration in the food at the end",
+        NamedResult.FoodConcentration => "food concentration at the end",
         NamedResult.SteadyFlux => "steady flux",
         NamedResult.LagTime => "lag time",
         NamedResult.TimeTo90Percent => "time to 90 % of the final state",
