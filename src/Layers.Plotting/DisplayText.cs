@@ -58,22 +58,6 @@ internal static class DisplayText
     public static UnitDefinition MassPerAreaUnit(DisplayUnits display) =>
         display.MassPerArea.Dimension == Dimension.MassPerArea ? display.MassPerArea : UnitTable.Get("kg/m2");
 
-    /// <summary>Unit for depths: micrometres for stacks thinner than 2 mm (films), millimetres otherwise.</summary>
-    public static UnitDefinition DepthUnit(double totalThicknessMeters) =>
-        UnitTable.Get(totalThicknessMeters < 2e-3 ? "um" : "mm");
-
-    /// <summary>
-    /// Unit for a time axis covering the given duration: s up to 2 min, min up to 2 h, h up to 3 d, d beyond.
-    /// </summary>
-    public static UnitDefinition TimeAxisUnit(double durationSeconds) =>
-        UnitTable.Get(durationSeconds switch
-        {
-            <= 120 => "s",
-            <= 2 * 3600 => "min",
-            <= 3 * 86400 => "h",
-            _ => "d",
-        });
-
     /// <summary>A time in the largest unit of which it is at least one, three significant digits: "2 h", "1.5 d".</summary>
     public static string Time(double seconds)
     {

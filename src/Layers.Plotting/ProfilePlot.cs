@@ -39,7 +39,7 @@ public static class ProfilePlot
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
         var simulation = result.Case;
-        var depthUnit = DisplayText.DepthUnit(simulation.Stack.TotalThicknessMeters);
+        var depthUnit = DisplayUnitRules.Depth(simulation.Stack.TotalThicknessMeters);
         var concentrationUnit = DisplayText.ConcentrationUnit(simulation.Display);
         var bands = Bands(simulation, depthUnit);
         var curves = Curves(result, bands, depthUnit, concentrationUnit);

@@ -1,5 +1,7 @@
 using Layers.Core.Domain;
+using Layers.Core.Results;
 using Layers.Core.Studies;
+using Layers.Core.Units;
 using OxyPlot;
 using OxyPlot.Axes;
 using OxyPlot.Series;
@@ -21,18 +23,18 @@ public static class SpreadPlot
         ArgumentNullException.ThrowIfNull(outcome);
         ArgumentNullException.ThrowIfNull(options);
         var simulation = outcome.BaseCase;
-        var preferred = simulation.FoodContact?.FoodSide == Side.Left || simulation.Right is ClosedFace ? "leftReceived" : "rightReceived";
-        if (outcome.Series.FirstOrDefault(series => series.Name == preferred) is not { } spread)
+        var preferred = simulation.FoodContact?.FoodSide == Side.Left || simulation.Right is ClosedFace ? NamedResult.LeftReceived : NamedResult.RightReceived;
+        if (outcome.Series.FirstOrDefault(series => series.Result == preferred) is not { } spread)
         {
             return null;
         }
 
         var settings = outcome.Settings;
         var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
-        var timeUnit = DisplayText.TimeAxisUnit(simulation.DurationSeconds);
+        var timeUnit = DisplayUnitRules.Time(simulation.DurationSeconds);
         var model = PlotFrame.Create(
             simulation.Title,
-            [$"{preferred}: percentiles over {settings.Samples} samples of " + string.Join("; ", settings.Inputs.Select(input => input.Describe()))],
+            [$"{NamedResults.Name(preferred)}: percentiles over {settings.Samples} samples of " + string.Join("; ", settings.Inputs.Select(input => input.Describe()))],
             options);
         var timeTitle = $"Time ({DisplayText.Unit(timeUnit)})" + (options.LogTimeAxis ? ", logarithmic scale" : string.Empty);
         model.Axes.Add(PlotFrame.Axis(options.LogTimeAxis, AxisPosition.Bottom, timeTitle));

@@ -1,5 +1,5 @@
 using Layers.Core.Batch;
-using Layers.Core.Cases;
+using Layers.Core.Results;
 using OxyPlot;
 using OxyPlot.Axes;
 using OxyPlot.Series;
@@ -33,7 +33,8 @@ public static class SweepPlot
         }
 
         var first = points[0].Row.Parameters[0];
-        var (resultName, resultUnit) = Describe(sweep.Result);
+        var resultName = NamedResults.Words(sweep.Result);
+        var resultUnit = DisplayText.Unit(NamedResults.SiUnit(sweep.Result));
         var xTitle = first.Unit.Length > 0 ? $"{first.Label} ({DisplayText.Unit(first.Unit)})" : first.Label;
         var model = PlotFrame.Create(
             $"Sweep {sweep.Name}: {resultName} against {first.Label}",
@@ -67,13 +68,4 @@ public static class SweepPlot
 
     private static bool Spans(IReadOnlyList<double> values) =>
         values.All(value => value > 0) && values.Max() / values.Min() >= LogSpan;
-
-    private static (string Name, string Unit) Describe(SweepResult result) => result switch
-    {
-        SweepResult.LeftReceived => ("received by the left medium at the end", "kg/m\u00B2"),
-        SweepResult.RightReceived => ("received by the right medium at the end", "kg/m\u00B2"),
-        SweepResult.SteadyFlux => ("steady flux", "kg/(m\u00B2 s)"),
-        SweepResult.LagTime => ("lag time", "s"),
-        _ => ("time to 90 % of the final state", "s"),
-    };
 }

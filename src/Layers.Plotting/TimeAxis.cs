@@ -27,7 +27,7 @@ internal sealed class TimeAxis
     public static TimeAxis Create(SimulationResult result, bool logarithmic)
     {
         var duration = result.Case.DurationSeconds;
-        var unit = DisplayText.TimeAxisUnit(duration);
+        var unit = DisplayUnitRules.Time(duration);
         var title = $"Time ({DisplayText.Unit(unit)})" + (logarithmic ? ", logarithmic scale" : string.Empty);
         var first = logarithmic
             ? result.TimeSeries.Select(sample => sample.TimeSeconds).Where(t => t > 0).DefaultIfEmpty(duration / 1000).Min()

@@ -1,6 +1,7 @@
 using System.Globalization;
 using Layers.Core.Batch;
 using Layers.Core.Reports;
+using Layers.Core.Results;
 
 namespace Layers.Cli.Commands;
 
@@ -20,13 +21,13 @@ internal static class BatchTable
         [
             row.Name,
             BatchColumns.StatusName(row.Status),
-            Number(row.Results?.LeftReceivedKgPerSquareMeter),
-            Number(row.Results?.RightReceivedKgPerSquareMeter),
-            Number(row.Results?.SteadyFluxKgPerSquareMeterSecond),
-            Number(row.Results?.LagTimeSeconds),
-            Number(row.Results?.TimeTo90PercentSeconds),
+            .. NamedResults.InBatchSummary.Select(result => Number(row.Results?.Pick(result))),
         ]).ToList();
-        string[] headers = ["case", "status", "left received [kg/m2]", "right received [kg/m2]", "steady flux [kg/(m2 s)]", "lag time [s]", "90 % time [s]"];
+        string[] headers =
+        [
+            "case", "status",
+            .. NamedResults.InBatchSummary.Select(result => $"{NamedResults.Heading(result)} [{NamedResults.SiUnit(result).Symbol}]"),
+        ];
         // Result columns that no case fills (no bath, no permeation ...) only take width from the others.
         var kept = Enumerable.Range(0, headers.Length).Where(column => column < 2 || table.Any(row => row[column].Length > 0)).ToList();
         return new TextTable(

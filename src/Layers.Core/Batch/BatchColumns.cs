@@ -1,5 +1,6 @@
 using System.Globalization;
 using Layers.Core.Reports;
+using Layers.Core.Results;
 
 namespace Layers.Core.Batch;
 
@@ -12,9 +13,8 @@ public static class BatchColumns
     /// <summary>Column names of summary.csv.</summary>
     public static IReadOnlyList<string> Names { get; } =
     [
-        "case", "file", "parameters", "status", "finalState", "leftReceivedKgPerSquareMeter", "rightReceivedKgPerSquareMeter",
-        "steadyFluxKgPerSquareMeterSecond", "lagTimeSeconds", "timeTo90PercentSeconds", "worstMassBalanceError",
-        "limit", "limitVerdict", "message",
+        "case", "file", "parameters", "status", "finalState", .. NamedResults.InBatchSummary.Select(result => NamedResults.SummaryKey(result)!),
+        "worstMassBalanceError", "limit", "limitVerdict", "message",
     ];
 
     /// <summary>
@@ -23,11 +23,8 @@ public static class BatchColumns
     /// </summary>
     public static bool HoldsNumbers(int column) => NumberColumns.Contains(Names[column]);
 
-    private static HashSet<string> NumberColumns { get; } = new(StringComparer.Ordinal)
-    {
-        "leftReceivedKgPerSquareMeter", "rightReceivedKgPerSquareMeter", "steadyFluxKgPerSquareMeterSecond", "lagTimeSeconds",
-        "timeTo90PercentSeconds", "worstMassBalanceError",
-    };
+    private static HashSet<string> NumberColumns { get; } =
+        new([.. NamedResults.InBatchSummary.Select(result => NamedResults.SummaryKey(result)!), "worstMassBalanceError"], StringComparer.Ordinal);
 
     /// <summary>The cells of a row, in the order of <see cref="Names"/>; numbers in invariant culture, G10.</summary>
     public static IReadOnlyList<string> Cells(BatchRow row)
@@ -36,9 +33,8 @@ public static class BatchColumns
         return
         [
             row.Name, row.File, Parameters(row), StatusName(row.Status), results?.FinalState ?? string.Empty,
-            Number(results?.LeftReceivedKgPerSquareMeter), Number(results?.RightReceivedKgPerSquareMeter),
-            Number(results?.SteadyFluxKgPerSquareMeterSecond), Number(results?.LagTimeSeconds),
-            Number(results?.TimeTo90PercentSeconds), Number(results?.WorstMassBalanceError),
+            .. NamedResults.InBatchSummary.Select(result => Number(results?.Pick(result))),
+            Number(results?.WorstMassBalanceError),
             row.Limit is { } limit ? $"{limit.Quantity} <= {CsvText.Number(limit.LimitSi)}" : string.Empty,
             row.Limit is { } check ? (check.Exceeded ? "exceeded" : "within") : string.Empty,
             row.Message,

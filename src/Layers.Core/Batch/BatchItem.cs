@@ -1,4 +1,5 @@
 using Layers.Core.Cases;
+using Layers.Core.Results;
 
 namespace Layers.Core.Batch;
 
@@ -20,7 +21,7 @@ public sealed record BatchItem(
 /// <param name="File">The sweep file.</param>
 /// <param name="Result">The key result to plot against the first parameter.</param>
 /// <param name="CaseNames">The names of its sub-cases, in expansion order.</param>
-public sealed record SweepGroup(string Name, string File, SweepResult Result, IReadOnlyList<string> CaseNames);
+public sealed record SweepGroup(string Name, string File, NamedResult Result, IReadOnlyList<string> CaseNames);
 
 /// <summary>Everything a batch will run, ordered by name.</summary>
 /// <param name="Items">The cases, ordered by name then file.</param>

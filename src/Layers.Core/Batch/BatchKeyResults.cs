@@ -35,13 +35,14 @@ public sealed record BatchKeyResults(
             result.WorstMassBalanceError);
     }
 
-    /// <summary>The value named by a sweep's <c>result</c>.</summary>
-    public double? Pick(Cases.SweepResult which) => which switch
+    /// <summary>The value of a named result, or null for one the batch summary does not list.</summary>
+    public double? Pick(NamedResult which) => which switch
     {
-        Cases.SweepResult.LeftReceived => LeftReceivedKgPerSquareMeter,
-        Cases.SweepResult.RightReceived => RightReceivedKgPerSquareMeter,
-        Cases.SweepResult.SteadyFlux => SteadyFluxKgPerSquareMeterSecond,
-        Cases.SweepResult.LagTime => LagTimeSeconds,
-        _ => TimeTo90PercentSeconds,
+        NamedResult.LeftReceived => LeftReceivedKgPerSquareMeter,
+        NamedResult.RightReceived => RightReceivedKgPerSquareMeter,
+        NamedResult.SteadyFlux => SteadyFluxKgPerSquareMeterSecond,
+        NamedResult.LagTime => LagTimeSeconds,
+        NamedResult.TimeTo90Percent => TimeTo90PercentSeconds,
+        NamedResult.LeftConcentration or NamedResult.RightConcentration or NamedResult.FoodConcentration or NamedResult.TimeToLimit => null,
     };
 }

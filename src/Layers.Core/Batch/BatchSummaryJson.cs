@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Json;
 using Layers.Core.Cases;
 using Layers.Core.Reports;
+using Layers.Core.Results;
 
 namespace Layers.Core.Batch;
 
@@ -64,7 +65,11 @@ public static class BatchSummaryJson
                 entry.GetProperty("results") is { ValueKind: JsonValueKind.Object } results ? ReadResults(results) : null)
             {
                 Limit = entry.TryGetProperty("limit", out var limit) && limit.ValueKind == JsonValueKind.Object
-                    ? new LimitCheck(limit.GetProperty("quantity").GetString()!, limit.GetProperty("limit").GetDouble(), limit.GetProperty("value").GetDouble())
+                    ? new LimitCheck(
+                        LimitCheck.ParseQuantity(limit.GetProperty("quantity").GetString()!)
+                            ?? throw new JsonException($"unknown limit quantity '{limit.GetProperty("quantity").GetString()}'"),
+                        limit.GetProperty("limit").GetDouble(),
+                        limit.GetProperty("value").GetDouble())
                     : null,
             });
         }
@@ -93,11 +98,11 @@ public static class BatchSummaryJson
         {
             json.WriteStartObject("results");
             json.WriteString("finalState", results.FinalState);
-            SummaryJson.WriteNullable(json, "leftReceivedKgPerSquareMeter", results.LeftReceivedKgPerSquareMeter);
-            SummaryJson.WriteNullable(json, "rightReceivedKgPerSquareMeter", results.RightReceivedKgPerSquareMeter);
-            SummaryJson.WriteNullable(json, "steadyFluxKgPerSquareMeterSecond", results.SteadyFluxKgPerSquareMeterSecond);
-            SummaryJson.WriteNullable(json, "lagTimeSeconds", results.LagTimeSeconds);
-            SummaryJson.WriteNullable(json, "timeTo90PercentSeconds", results.TimeTo90PercentSeconds);
+            foreach (var result in NamedResults.InBatchSummary)
+            {
+                SummaryJson.WriteNullable(json, NamedResults.SummaryKey(result)!, results.Pick(result));
+            }
+
             json.WriteNumber("worstMassBalanceError", results.WorstMassBalanceError);
             json.WriteEndObject();
         }
@@ -124,14 +129,14 @@ public static class BatchSummaryJson
 
     private static BatchKeyResults ReadResults(JsonElement results)
     {
-        double? Optional(string key) => results.GetProperty(key) is { ValueKind: JsonValueKind.Number } value ? value.GetDouble() : null;
+        double? Optional(NamedResult result) => results.GetProperty(NamedResults.SummaryKey(result)!) is { ValueKind: JsonValueKind.Number } value ? value.GetDouble() : null;
         return new BatchKeyResults(
             results.GetProperty("finalState").GetString()!,
-            Optional("leftReceivedKgPerSquareMeter"),
-            Optional("rightReceivedKgPerSquareMeter"),
-            Optional("steadyFluxKgPerSquareMeterSecond"),
-            Optional("lagTimeSeconds"),
-            Optional("timeTo90PercentSeconds"),
+            Optional(NamedResult.LeftReceived),
+            Optional(NamedResult.RightReceived),
+            Optional(NamedResult.SteadyFlux),
+            Optional(NamedResult.LagTime),
+            Optional(NamedResult.TimeTo90Percent),
             results.GetProperty("worstMassBalanceError").GetDouble());
     }
 }

@@ -7,8 +7,8 @@ namespace Layers.Core.Cases;
 /// Chooses the units results are shown in. Without a <c>display</c> object the trade's habits decide: a case
 /// written like a food-contact case (a compartment given by mass, or concentrations as mass fractions) is shown in
 /// mg/kg, mg/dm2 and mg/dm2/d; any other case like a permeation case, in ug/mL, ug/cm2 and ug/cm2/h (common
-/// practice, no source). Times use the largest unit that keeps the duration at two or more (s, min, h, d, y up to
-/// 3 d in hours); depths are um below 2 mm of total thickness, else mm. Each choice can be overridden.
+/// practice, no source). Times and depths follow <see cref="DisplayUnitRules"/>, as the plots do. Each choice can be
+/// overridden.
 /// </summary>
 internal static class DisplayReader
 {
@@ -19,8 +19,8 @@ internal static class DisplayReader
         var foodStyle = context.SawMassFraction || context.SawCompartmentByMass;
         var defaults = new DisplayUnits
         {
-            Time = UnitTable.Get(TimeSymbol(durationSeconds)),
-            Depth = UnitTable.Get(totalThicknessMeters < 2e-3 ? "um" : "mm"),
+            Time = DisplayUnitRules.Time(durationSeconds),
+            Depth = DisplayUnitRules.Depth(totalThicknessMeters),
             Concentration = UnitTable.Get(foodStyle ? "mg/L" : "ug/mL"),
             MediumMassFraction = foodStyle ? UnitTable.Get("mg/kg") : null,
             MassPerArea = UnitTable.Get(foodStyle ? "mg/dm2" : "ug/cm2"),
@@ -48,15 +48,6 @@ internal static class DisplayReader
             Flux = Unit(display, "flux", [Dimension.MassFlux]) ?? defaults.Flux,
         };
     }
-
-    private static string TimeSymbol(double seconds) => seconds switch
-    {
-        < 120 => "s",
-        < 2 * 3600 => "min",
-        <= 3 * 86400 => "h",
-        < 2 * 365.25 * 86400 => "d",
-        _ => "y",
-    };
 
     private static UnitDefinition? Unit(JsonFields display, string key, IReadOnlyCollection<Dimension> expected)
     {

@@ -3,6 +3,7 @@ using System.Text;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using System.Text.RegularExpressions;
+using Layers.Core.Results;
 
 namespace Layers.Core.Cases;
 
@@ -19,14 +20,12 @@ public static partial class SweepExpander
 
     private static readonly string[] SweepKeys = ["parameters", "result"];
 
-    private static readonly Dictionary<string, SweepResult> ResultNames = new(StringComparer.Ordinal)
-    {
-        ["leftReceived"] = SweepResult.LeftReceived,
-        ["rightReceived"] = SweepResult.RightReceived,
-        ["steadyFlux"] = SweepResult.SteadyFlux,
-        ["lagTime"] = SweepResult.LagTime,
-        ["timeTo90Percent"] = SweepResult.TimeTo90Percent,
-    };
+    // A sweep plots a result that every sub-case's row of the batch summary holds, so it accepts exactly those.
+    private static readonly Dictionary<string, NamedResult> ResultNames =
+        NamedResults.InBatchSummary.ToDictionary(NamedResults.Name, result => result, StringComparer.Ordinal);
+
+    /// <summary>The names <c>$.sweep.result</c> accepts: those of the results a batch summary lists.</summary>
+    public static IReadOnlyCollection<string> ResultNamesAccepted => ResultNames.Keys;
 
     /// <summary>True when <paramref name="json"/> is a JSON object with a top-level <c>sweep</c> member.</summary>
     public static bool Declares(string json)
@@ -112,7 +111,7 @@ public static partial class SweepExpander
 
     private static SweepExpansion Failed(CaseError error) => new([], null, [error]);
 
-    private static SweepResult? ReadResult(JsonObject sweep, List<CaseError> errors)
+    private static NamedResult? ReadResult(JsonObject sweep, List<CaseError> errors)
     {
         var expected = string.Join(", ", ResultNames.Keys);
         if (sweep["result"] is null)

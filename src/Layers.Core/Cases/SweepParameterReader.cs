@@ -94,13 +94,17 @@ internal static partial class SweepParameterReader
             errors.Add(new CaseError($"{at}.count", FormattableString.Invariant($"must be a whole number from 2 to {MaximumCount}")));
         }
 
-        var spacing = parameter["spacing"] is null ? "linear" : (parameter["spacing"] as JsonValue)?.TryGetValue<string>(out var s) == true ? s : "?";
-        if (spacing is not ("linear" or "log"))
+        SweepSpacing? spacing = parameter["spacing"] is null
+            ? SweepSpacing.Linear
+            : (parameter["spacing"] as JsonValue)?.TryGetValue<string>(out var s) == true
+                ? Enum.GetValues<SweepSpacing>().Where(value => JsonNamingPolicy.CamelCase.ConvertName(value.ToString()) == s).Select(value => (SweepSpacing?)value).FirstOrDefault()
+                : null;
+        if (spacing is null)
         {
             errors.Add(new CaseError($"{at}.spacing", "must be \"linear\" or \"log\""));
         }
 
-        if (from is not { } start || to is not { } end || count is not { } points || spacing is not ("linear" or "log"))
+        if (from is not { } start || to is not { } end || count is not { } points || spacing is null)
         {
             return null;
         }
@@ -111,7 +115,7 @@ internal static partial class SweepParameterReader
             return null;
         }
 
-        var log = spacing == "log";
+        var log = spacing == SweepSpacing.Log;
         if (log && (start.Number <= 0 || end.Number <= 0))
         {
             errors.Add(new CaseError(at, "log spacing needs from and to > 0"));

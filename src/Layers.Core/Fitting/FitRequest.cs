@@ -1,4 +1,5 @@
 using Layers.Core.Domain;
+using Layers.Core.Results;
 
 namespace Layers.Core.Fitting;
 
@@ -22,5 +23,14 @@ public sealed record FitRequest(string CasePath, MeasuredSeries Data, Side Face,
         CostTolerance = 1e-8,
         MaximumStep = 1,
         DifferenceStep = 1e-3,
+    };
+
+    /// <summary>The named result the measurements are: the amount received by, or the concentration in, the measured face's medium.</summary>
+    public NamedResult Measured => (Data.Quantity, Face) switch
+    {
+        (MeasuredQuantity.Concentration, Side.Left) => NamedResult.LeftConcentration,
+        (MeasuredQuantity.Concentration, Side.Right) => NamedResult.RightConcentration,
+        (MeasuredQuantity.AmountPerArea, Side.Left) => NamedResult.LeftReceived,
+        (MeasuredQuantity.AmountPerArea, Side.Right) => NamedResult.RightReceived,
     };
 }

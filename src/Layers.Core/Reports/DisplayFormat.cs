@@ -26,9 +26,9 @@ internal sealed class DisplayFormat(DisplayUnits units)
             ? QuantityParser.FormatSi(kgPerCubicMeter / density, fraction)
             : Concentration(kgPerCubicMeter);
 
-    public string TimeValue(double seconds) => Value(units.Time.FromSi(seconds));
+    public string TimeValue(double seconds) => Number(units.Time.FromSi(seconds));
 
-    public string MassPerAreaValue(double kgPerSquareMeter) => Value(units.MassPerArea.FromSi(kgPerSquareMeter));
+    public string MassPerAreaValue(double kgPerSquareMeter) => Number(units.MassPerArea.FromSi(kgPerSquareMeter));
 
     public string MediumConcentration(double kgPerCubicMeter, FaceCondition face)
         => MediumConcentration(kgPerCubicMeter, (face as CompartmentFace)?.DensityKgPerCubicMeter);
@@ -41,9 +41,8 @@ internal sealed class DisplayFormat(DisplayUnits units)
             ? fraction.Symbol
             : units.Concentration.Symbol;
 
-    public static string Value(double value) => value.ToString("G4", CultureInfo.InvariantCulture);
-
     public static string Percent(double fraction) => (100 * fraction).ToString("F1", CultureInfo.InvariantCulture) + " %";
 
+    /// <summary>A number as the console tables show it: four significant digits, invariant culture.</summary>
     public static string Number(double value) => value.ToString("G4", CultureInfo.InvariantCulture);
 }

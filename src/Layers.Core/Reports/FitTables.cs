@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using Layers.Core.Fitting;
+using Layers.Core.Results;
 
 namespace Layers.Core.Reports;
 
@@ -103,5 +104,5 @@ public static class FitTables
         ]);
     }
 
-    private static string SiUnit(FitResult fit) => fit.Request.Data.Quantity == MeasuredQuantity.Concentration ? "kg/m3" : "kg/m2";
+    private static string SiUnit(FitResult fit) => NamedResults.SiUnit(fit.Request.Measured).Symbol;
 }

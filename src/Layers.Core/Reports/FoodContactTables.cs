@@ -44,7 +44,7 @@ public static class FoodContactTables
             foreach (var layer in simulation.Stack.Layers)
             {
                 var (value, origin) = stage.DiffusivityOf(layer.Name, settings.Diffusivities[layer.Name]);
-                rows.Add([$"{stage.Name}, {format.Time(stage.DurationSeconds)} at {Celsius(stage.TemperatureKelvin)}", layer.Name, Number(value * 1e4), origin]);
+                rows.Add([$"{stage.Name}, {format.Time(stage.DurationSeconds)} at {Celsius(stage.TemperatureKelvin)}", layer.Name, DisplayFormat.Number(value * 1e4), origin]);
             }
         }
 
@@ -54,7 +54,7 @@ public static class FoodContactTables
             var food = (CompartmentFace)simulation.Face(settings.FoodSide);
             var media = simulation.Stack.Layers.Select(layer => (layer.Name, layer.PartitionCoefficient)).Append((food.Name, food.PartitionCoefficient)).ToArray();
             var partitions = settings.Stages
-                .Select(stage => (IReadOnlyList<string>)[stage.Name, .. media.Select(medium => Number(stage.PartitionOf(medium.Name, medium.PartitionCoefficient)))])
+                .Select(stage => (IReadOnlyList<string>)[stage.Name, .. media.Select(medium => DisplayFormat.Number(stage.PartitionOf(medium.Name, medium.PartitionCoefficient)))])
                 .ToList();
             tables.Add(new TextTable("Partition coefficients by stage (volume basis)", ["stage", .. media.Select(medium => medium.Name)], partitions));
         }
@@ -67,7 +67,7 @@ public static class FoodContactTables
         var format = new DisplayFormat(result.Case.Display);
         var rows = new List<IReadOnlyList<string>>();
         void Add(string what, string value) => rows.Add([what, value]);
-        Add("food", $"{food.FoodName} ({(food.FoodSide == Side.Left ? "left" : "right")} face), {Number(food.AreaPerFoodMassSquareMetersPerKilogram * 100)} dm2 per kg"
+        Add("food", $"{food.FoodName} ({(food.FoodSide == Side.Left ? "left" : "right")} face), {DisplayFormat.Number(food.AreaPerFoodMassSquareMetersPerKilogram * 100)} dm2 per kg"
             + (food.FoodDensityAssumed ? ", density taken as 1 kg/L" : string.Empty));
         Add("in the food at the end", $"{MgPerKg(food.FinalConcentration)}, {MgPerDm2(food.FinalMigrationPerArea)}");
         if (food.SpecificMigrationLimit is { } limit)
@@ -115,11 +115,9 @@ public static class FoodContactTables
         return new TextTable("Food contact", ["quantity", "value"], rows);
     }
 
-    private static string MgPerKg(double massFraction) => $"{Number(massFraction * 1e6)} mg/kg";
+    private static string MgPerKg(double massFraction) => $"{DisplayFormat.Number(massFraction * 1e6)} mg/kg";
 
-    private static string MgPerDm2(double kgPerSquareMeter) => $"{Number(kgPerSquareMeter * 1e4)} mg/dm2";
+    private static string MgPerDm2(double kgPerSquareMeter) => $"{DisplayFormat.Number(kgPerSquareMeter * 1e4)} mg/dm2";
 
     private static string Celsius(double kelvin) => string.Create(CultureInfo.InvariantCulture, $"{kelvin - 273.15:0.##} degC");
-
-    private static string Number(double value) => DisplayFormat.Number(value);
 }

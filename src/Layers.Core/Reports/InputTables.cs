@@ -18,12 +18,12 @@ public static class InputTables
         var rows = simulation.Stack.Layers.Select(layer => (IReadOnlyList<string>)
         [
             layer.Name,
-            DisplayFormat.Value(simulation.Display.Depth.FromSi(layer.ThicknessMeters)),
-            DisplayFormat.Value(UnitTable.Get("cm2/s").FromSi(layer.DiffusivitySquareMetersPerSecond)),
-            DisplayFormat.Value(layer.PartitionCoefficient),
-            DisplayFormat.Value(simulation.Display.Concentration.FromSi(layer.InitialConcentrationKgPerCubicMeter)),
+            DisplayFormat.Number(simulation.Display.Depth.FromSi(layer.ThicknessMeters)),
+            DisplayFormat.Number(UnitTable.Get("cm2/s").FromSi(layer.DiffusivitySquareMetersPerSecond)),
+            DisplayFormat.Number(layer.PartitionCoefficient),
+            DisplayFormat.Number(simulation.Display.Concentration.FromSi(layer.InitialConcentrationKgPerCubicMeter)),
             format.Time(layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond),
-            DisplayFormat.Value(UnitTable.Get("cm/h").FromSi(1 / layer.ResistanceSecondsPerMeter)),
+            DisplayFormat.Number(UnitTable.Get("cm/h").FromSi(1 / layer.ResistanceSecondsPerMeter)),
             OriginOf(simulation, layer),
         ]).ToArray();
         return new TextTable(

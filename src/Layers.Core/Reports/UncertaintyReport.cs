@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using System.Text.Json;
+using Layers.Core.Results;
 using Layers.Core.Studies;
 
 namespace Layers.Core.Reports;
@@ -145,7 +146,7 @@ public static class UncertaintyReport
             $"{settings.Samples} samples ({JsonNamingPolicy.CamelCase.ConvertName(settings.Sampling.ToString())}, seed {settings.Seed}) of " +
                 string.Join("; ", settings.Inputs.Select(input => input.Describe())),
         };
-        foreach (var series in outcome.Series.Where(series => series.SiUnit == "kg/m2"))
+        foreach (var series in outcome.Series.Where(series => NamedResults.Dimension(series.Result) == Units.Dimension.MassPerArea))
         {
             lines.Add($"{series.Name} ({percents}):");
             foreach (var time in outcome.BaseCase.ReportTimesSeconds)
@@ -160,7 +161,7 @@ public static class UncertaintyReport
 
         foreach (var result in outcome.Results)
         {
-            var show = result.Result.Dimension == Units.Dimension.Time ? (Func<double, string>)format.Time : value => DisplayFormat.Value(value) + " " + result.Result.SiUnit;
+            var show = result.Result.Dimension == Units.Dimension.Time ? (Func<double, string>)format.Time : value => DisplayFormat.Number(value) + " " + result.Result.SiUnit;
             lines.Add($"{result.Result.Describe()} ({percents}): {string.Join(" / ", result.Percentiles.Select(value => double.IsPositiveInfinity(value) ? "not reached" : show(value)))}");
         }
 

@@ -74,7 +74,7 @@ public static class DesignReader
         StudyValues.Unknown(input, at, InputKeys, errors);
         var from = SweepParameterReader.Endpoint(input["from"], $"{at}.from", errors);
         var to = SweepParameterReader.Endpoint(input["to"], $"{at}.to", errors);
-        var scale = input["scale"] is null ? null : StudyValues.Word(input, "scale", at, ["log", "linear"], errors);
+        var scale = input["scale"] is null ? null : StudyValues.Choice<SearchScale>(input, "scale", at, errors);
         var varied = from is { } unitSource ? CaseVariation.ReadInput(root, input, at, unitSource.Unit, errors) : null;
         if (errors.Count > before || varied is null || from is not { } start || to is not { } end)
         {
@@ -94,14 +94,14 @@ public static class DesignReader
         }
 
         var positive = start.Number > 0 && end.Number > 0;
-        if (scale == "log" && !positive)
+        if (scale == SearchScale.Log && !positive)
         {
             errors.Add(new CaseError($"{at}.scale", "a log scale needs from and to > 0"));
             return null;
         }
 
         var ratio = Math.Max(start.Number, end.Number) / Math.Min(start.Number, end.Number);
-        var log = scale == "log" || (scale is null && positive && ratio >= LogScaleRatio);
+        var log = scale == SearchScale.Log || (scale is null && positive && ratio >= LogScaleRatio);
         CaseVariation.CheckValue(root, fileName, varied, start.Number, $"{at}.from", errors);
         CaseVariation.CheckValue(root, fileName, varied, end.Number, $"{at}.to", errors);
         return errors.Count > before ? null : (varied, start.Number, end.Number, log);

@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Text.Json;
 using Layers.Core.Domain;
 using Layers.Core.Results;
 using Layers.Core.Units;
@@ -14,38 +13,19 @@ namespace Layers.Core.Studies;
 /// <param name="Kind">Which result.</param>
 /// <param name="AtSeconds">The time at which a time-dependent result is read, s; null for the end of the duration.</param>
 /// <param name="AtText">That time as written; empty when not given.</param>
-public sealed record ResultMeasure(MeasureKind Kind, double? AtSeconds = null, string AtText = "")
+public sealed record ResultMeasure(NamedResult Kind, double? AtSeconds = null, string AtText = "")
 {
-    /// <summary>The case-file names of the results.</summary>
-    public static IReadOnlyDictionary<string, MeasureKind> Names { get; } =
-        Enum.GetValues<MeasureKind>().ToDictionary(kind => JsonNamingPolicy.CamelCase.ConvertName(kind.ToString()), kind => kind, StringComparer.Ordinal);
-
     /// <summary>The case-file name, e.g. <c>rightReceived</c>.</summary>
-    public string Name => JsonNamingPolicy.CamelCase.ConvertName(Kind.ToString());
+    public string Name => NamedResults.Name(Kind);
 
     /// <summary>True for the results that are read at a time (and accept <c>at</c>).</summary>
-    public bool IsAtTime => Kind is MeasureKind.LeftReceived or MeasureKind.RightReceived or MeasureKind.LeftConcentration
-        or MeasureKind.RightConcentration or MeasureKind.FoodConcentration;
+    public bool IsAtTime => NamedResults.IsReadAtTime(Kind);
 
     /// <summary>The dimension of the result, for parsing targets and limits.</summary>
-    public Dimension Dimension => Kind switch
-    {
-        MeasureKind.LeftReceived or MeasureKind.RightReceived => Dimension.MassPerArea,
-        MeasureKind.LeftConcentration or MeasureKind.RightConcentration => Dimension.MassConcentration,
-        MeasureKind.FoodConcentration => Dimension.MassFraction,
-        MeasureKind.SteadyFlux => Dimension.MassFlux,
-        _ => Dimension.Time,
-    };
+    public Dimension Dimension => NamedResults.Dimension(Kind);
 
     /// <summary>The SI unit of the result, as in summary files.</summary>
-    public string SiUnit => Dimension switch
-    {
-        Dimension.MassPerArea => "kg/m2",
-        Dimension.MassConcentration => "kg/m3",
-        Dimension.MassFraction => "kg/kg",
-        Dimension.MassFlux => "kg/m2/s",
-        _ => "s",
-    };
+    public string SiUnit => NamedResults.SiUnit(Kind).Symbol;
 
     /// <summary>The name with its time, e.g. "rightReceived at 10 d".</summary>
     public string Describe() => AtText.Length > 0 ? $"{Name} at {AtText}" : Name;
@@ -60,15 +40,15 @@ public sealed record ResultMeasure(MeasureKind Kind, double? AtSeconds = null, s
         var at = AtSeconds ?? result.Case.DurationSeconds;
         return Kind switch
         {
-            MeasureKind.LeftReceived => Face(result, Side.Left, at)?.TransferredIntoMediumPerArea,
-            MeasureKind.RightReceived => Face(result, Side.Right, at)?.TransferredIntoMediumPerArea,
-            MeasureKind.LeftConcentration => Face(result, Side.Left, at)?.ConcentrationKgPerCubicMeter,
-            MeasureKind.RightConcentration => Face(result, Side.Right, at)?.ConcentrationKgPerCubicMeter,
-            MeasureKind.FoodConcentration => Food(result, at),
-            MeasureKind.SteadyFlux => result.Permeation?.SteadyFluxKgPerSquareMeterSecond,
-            MeasureKind.LagTime => result.Permeation?.LagTimeSeconds,
-            MeasureKind.TimeTo90Percent => result.FinalState.System.NinetyPercent,
-            _ => result.FoodContact?.LimitReachedSeconds,
+            NamedResult.LeftReceived => Face(result, Side.Left, at)?.TransferredIntoMediumPerArea,
+            NamedResult.RightReceived => Face(result, Side.Right, at)?.TransferredIntoMediumPerArea,
+            NamedResult.LeftConcentration => Face(result, Side.Left, at)?.ConcentrationKgPerCubicMeter,
+            NamedResult.RightConcentration => Face(result, Side.Right, at)?.ConcentrationKgPerCubicMeter,
+            NamedResult.FoodConcentration => Food(result, at),
+            NamedResult.SteadyFlux => result.Permeation?.SteadyFluxKgPerSquareMeterSecond,
+            NamedResult.LagTime => result.Permeation?.LagTimeSeconds,
+            NamedResult.TimeTo90Percent => result.FinalState.System.NinetyPercent,
+            NamedResult.TimeToLimit => result.FoodContact?.LimitReachedSeconds,
         };
     }
 
@@ -86,16 +66,20 @@ public sealed record ResultMeasure(MeasureKind Kind, double? AtSeconds = null, s
 
         return Kind switch
         {
-            MeasureKind.LeftReceived or MeasureKind.LeftConcentration when simulation.Left is ClosedFace =>
-                $"{Name} needs a medium on the left; the left face is closed",
-            MeasureKind.RightReceived or MeasureKind.RightConcentration when simulation.Right is ClosedFace =>
-                $"{Name} needs a medium on the right; the right face is closed",
-            MeasureKind.FoodConcentration when simulation.FoodContact is null => $"{Name} needs $.foodContact",
-            MeasureKind.TimeToLimit when simulation.FoodContact?.SpecificMigrationLimit is null =>
-                $"{Name} needs $.foodContact.specificMigrationLimit",
-            MeasureKind.SteadyFlux or MeasureKind.LagTime when simulation.Left is not BathFace || simulation.Right is not BathFace =>
-                $"{Name} needs a bath on each face",
-            _ => null,
+            NamedResult.LeftReceived or NamedResult.LeftConcentration => simulation.Left is ClosedFace
+                ? $"{Name} needs a medium on the left; the left face is closed"
+                : null,
+            NamedResult.RightReceived or NamedResult.RightConcentration => simulation.Right is ClosedFace
+                ? $"{Name} needs a medium on the right; the right face is closed"
+                : null,
+            NamedResult.FoodConcentration => simulation.FoodContact is null ? $"{Name} needs $.foodContact" : null,
+            NamedResult.TimeToLimit => simulation.FoodContact?.SpecificMigrationLimit is null
+                ? $"{Name} needs $.foodContact.specificMigrationLimit"
+                : null,
+            NamedResult.SteadyFlux or NamedResult.LagTime => simulation.Left is not BathFace || simulation.Right is not BathFace
+                ? $"{Name} needs a bath on each face"
+                : null,
+            NamedResult.TimeTo90Percent => null,
         };
     }
 

@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Results;
 using Layers.Core.Units;
 
 namespace Layers.Core.Studies;
@@ -15,7 +16,7 @@ internal static class StudyValues
     /// </summary>
     public static ResultMeasure? Measure(JsonNode? node, string at, SimulationCase baseCase, List<CaseError> errors)
     {
-        var expected = string.Join(", ", ResultMeasure.Names.Keys);
+        var expected = string.Join(", ", NamedResults.ByName.Keys);
         string? name = null;
         JsonNode? time = null;
         if (node is JsonValue value && value.TryGetValue<string>(out var text))
@@ -29,7 +30,7 @@ internal static class StudyValues
             time = member["at"];
         }
 
-        if (name is null || !ResultMeasure.Names.TryGetValue(name, out var kind))
+        if (name is null || !NamedResults.ByName.TryGetValue(name, out var kind))
         {
             errors.Add(new CaseError(at, $"must be one of {expected}, or {{ \"name\": ..., \"at\": \"10 d\" }}; got {node?.ToJsonString() ?? "nothing"}"));
             return null;
@@ -114,6 +115,14 @@ internal static class StudyValues
 
         errors.Add(new CaseError($"{at}.{key}", $"must be one of {string.Join(", ", allowed.Select(item => $"\"{item}\""))}; got {node.ToJsonString()}"));
         return null;
+    }
+
+    /// <summary>One of the members of <typeparamref name="T"/> written as its camel-case name; the first member when absent.</summary>
+    public static T? Choice<T>(JsonObject holder, string key, string at, List<CaseError> errors)
+        where T : struct, Enum
+    {
+        var byName = Enum.GetValues<T>().ToDictionary(value => JsonNamingPolicy.CamelCase.ConvertName(value.ToString()), value => value, StringComparer.Ordinal);
+        return Word(holder, key, at, [.. byName.Keys], errors) is { } word ? byName[word] : null;
     }
 
     /// <summary>Adds an error for every member not in <paramref name="keys"/>.</summary>

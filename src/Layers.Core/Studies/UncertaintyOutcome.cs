@@ -1,5 +1,6 @@
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Results;
 
 namespace Layers.Core.Studies;
 
@@ -14,10 +15,16 @@ public sealed record ResultSpread(ResultMeasure Result, IReadOnlyList<double> Va
 }
 
 /// <summary>Percentiles of a time-dependent result at each time of the study's time grid.</summary>
-/// <param name="Name">The result's case-file name, e.g. <c>rightReceived</c>.</param>
-/// <param name="SiUnit">Its SI unit.</param>
+/// <param name="Result">The result.</param>
 /// <param name="Percentiles">Per time of <see cref="UncertaintyOutcome.TimesSeconds"/>, one value per percentile, SI.</param>
-public sealed record SeriesSpread(string Name, string SiUnit, IReadOnlyList<IReadOnlyList<double>> Percentiles);
+public sealed record SeriesSpread(NamedResult Result, IReadOnlyList<IReadOnlyList<double>> Percentiles)
+{
+    /// <summary>The result's case-file name, e.g. <c>rightReceived</c>.</summary>
+    public string Name => NamedResults.Name(Result);
+
+    /// <summary>Its SI unit.</summary>
+    public string SiUnit => NamedResults.SiUnit(Result).Symbol;
+}
 
 /// <summary>The chance that a result is above a limit.</summary>
 /// <param name="Limit">The limit.</param>

@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
 using Layers.Core.Domain;
+using Layers.Core.Results;
 using Layers.Core.Units;
 
 namespace Layers.Core.Studies;
@@ -13,12 +14,13 @@ public static class UncertaintyReader
     private static readonly string[] Keys = ["inputs", "samples", "seed", "sampling", "percentiles", "results", "limit"];
     private static readonly string[] LimitKeys = ["result", "value"];
 
-    private static readonly Dictionary<string, string[]> Parameters = new(StringComparer.Ordinal)
+    /// <summary>The keys of a distribution's two parameters, in the order they are read.</summary>
+    private static string[] Parameters(DistributionKind kind) => kind switch
     {
-        ["logNormal"] = ["median", "factor"],
-        ["uniform"] = ["min", "max"],
-        ["logUniform"] = ["min", "max"],
-        ["normal"] = ["mean", "standardDeviation"],
+        DistributionKind.LogNormal => ["median", "factor"],
+        DistributionKind.Uniform => ["min", "max"],
+        DistributionKind.LogUniform => ["min", "max"],
+        DistributionKind.Normal => ["mean", "standardDeviation"],
     };
 
     /// <summary>The study, or null with the errors added.</summary>
@@ -47,7 +49,7 @@ public static class UncertaintyReader
             }
         }
 
-        var sampling = StudyValues.Word(study, "sampling", At, ["random", "latinHypercube"], errors);
+        var sampling = StudyValues.Choice<SamplingMethod>(study, "sampling", At, errors);
         var percentiles = ReadPercentiles(study, errors);
         var results = ReadResults(study, baseCase, errors);
         var limit = ReadLimit(study, baseCase, errors);
@@ -61,7 +63,7 @@ public static class UncertaintyReader
             Inputs = inputs,
             Samples = (int)samples!.Value,
             Seed = (int)seed!.Value,
-            Sampling = sampling == "latinHypercube" ? SamplingMethod.LatinHypercube : SamplingMethod.Random,
+            Sampling = sampling!.Value,
             Percentiles = percentiles,
             Results = results,
             Limit = limit,
@@ -102,29 +104,30 @@ public static class UncertaintyReader
         }
 
         var before = errors.Count;
-        var name = StudyValues.Word(entry, "distribution", at, [.. Parameters.Keys], errors);
+        var kind = StudyValues.Choice<DistributionKind>(entry, "distribution", at, errors);
         if (entry["distribution"] is null)
         {
-            errors.Add(new CaseError($"{at}.distribution", $"is required: one of {string.Join(", ", Parameters.Keys)}"));
+            var names = Enum.GetValues<DistributionKind>().Select(value => JsonNamingPolicy.CamelCase.ConvertName(value.ToString()));
+            errors.Add(new CaseError($"{at}.distribution", $"is required: one of {string.Join(", ", names)}"));
             return null;
         }
 
-        if (name is null)
+        if (kind is not { } name)
         {
             return null;
         }
 
-        var keys = Parameters[name];
+        var keys = Parameters(name);
         StudyValues.Unknown(entry, at, ["path", "distribution", .. keys], errors);
         var first = SweepParameterReader.Endpoint(entry[keys[0]], $"{at}.{keys[0]}", errors);
         var input = first is { } unitSource ? CaseVariation.ReadInput(root, entry, at, unitSource.Unit, errors) : null;
-        var second = name == "logNormal" ? Factor(entry, at, errors) : SweepParameterReader.Endpoint(entry[keys[1]], $"{at}.{keys[1]}", errors);
+        var second = name == DistributionKind.LogNormal ? Factor(entry, at, errors) : SweepParameterReader.Endpoint(entry[keys[1]], $"{at}.{keys[1]}", errors);
         if (errors.Count > before || input is null || first is not { } a || second is not { } b)
         {
             return null;
         }
 
-        if (name != "logNormal" && (!string.Equals(a.Unit, b.Unit, StringComparison.Ordinal) || a.IsNumber != b.IsNumber))
+        if (name != DistributionKind.LogNormal && (!string.Equals(a.Unit, b.Unit, StringComparison.Ordinal) || a.IsNumber != b.IsNumber))
         {
             errors.Add(new CaseError($"{at}.{keys[1]}", $"must be written like {keys[0]} ('{a.Written}'), in the same unit; got '{b.Written}'"));
             return null;
@@ -159,15 +162,14 @@ public static class UncertaintyReader
         return null;
     }
 
-    private static Distribution? Build(string name, double a, double b, string at, string[] keys, List<CaseError> errors)
+    private static Distribution? Build(DistributionKind kind, double a, double b, string at, string[] keys, List<CaseError> errors)
     {
-        string? problem = name switch
+        string? problem = kind switch
         {
-            "logNormal" when !(a > 0) => $"{keys[0]} must be > 0",
-            "uniform" when !(b > a) => $"{keys[1]} must be above {keys[0]}",
-            "logUniform" when !(a > 0 && b > a) => $"{keys[0]} must be > 0 and {keys[1]} above it",
-            "normal" when !(b > 0) => $"{keys[1]} must be > 0",
-            _ => null,
+            DistributionKind.LogNormal => a > 0 ? null : $"{keys[0]} must be > 0",
+            DistributionKind.Uniform => b > a ? null : $"{keys[1]} must be above {keys[0]}",
+            DistributionKind.LogUniform => a > 0 && b > a ? null : $"{keys[0]} must be > 0 and {keys[1]} above it",
+            DistributionKind.Normal => b > 0 ? null : $"{keys[1]} must be > 0",
         };
         if (problem is not null)
         {
@@ -175,12 +177,12 @@ public static class UncertaintyReader
             return null;
         }
 
-        return name switch
+        return kind switch
         {
-            "logNormal" => new LogNormalDistribution(a, b),
-            "uniform" => new UniformDistribution(a, b),
-            "logUniform" => new LogUniformDistribution(a, b),
-            _ => new NormalDistribution(a, b),
+            DistributionKind.LogNormal => new LogNormalDistribution(a, b),
+            DistributionKind.Uniform => new UniformDistribution(a, b),
+            DistributionKind.LogUniform => new LogUniformDistribution(a, b),
+            DistributionKind.Normal => new NormalDistribution(a, b),
         };
     }
 
@@ -230,7 +232,7 @@ public static class UncertaintyReader
         if (study["limit"] is null)
         {
             return baseCase.FoodContact?.SpecificMigrationLimit is { } limit
-                ? new StudyLimit(new ResultMeasure(MeasureKind.FoodConcentration), limit, UnitTable.Get("mg/kg"), "$.foodContact.specificMigrationLimit")
+                ? new StudyLimit(new ResultMeasure(NamedResult.FoodConcentration), limit, UnitTable.Get("mg/kg"), "$.foodContact.specificMigrationLimit")
                 : null;
         }
 

@@ -111,8 +111,7 @@ public static class UncertaintyRunner
     private static UncertaintyOutcome Summarise(UncertaintyOutcome outcome, UncertaintySettings settings, IReadOnlyList<ResultMeasure[]> series, SampleValues[] samples)
     {
         var spreads = series.Select((measures, s) => new SeriesSpread(
-            measures[0].Name,
-            measures[0].SiUnit,
+            measures[0].Kind,
             measures.Select((_, t) => (IReadOnlyList<double>)Percentile.Of(samples.Select(sample => sample.Series[s][t]), settings.Percentiles)).ToArray()))
             .ToArray();
         var results = settings.Results.Select((result, r) =>
@@ -154,20 +153,20 @@ public static class UncertaintyRunner
     /// <summary>For each face medium, its amount and concentration at every time (and the food's concentration).</summary>
     private static List<ResultMeasure[]> SeriesOf(SimulationCase baseCase, IReadOnlyList<double> times)
     {
-        var kinds = new List<MeasureKind>();
+        var kinds = new List<NamedResult>();
         if (baseCase.Left is not ClosedFace)
         {
-            kinds.AddRange([MeasureKind.LeftReceived, MeasureKind.LeftConcentration]);
+            kinds.AddRange([NamedResult.LeftReceived, NamedResult.LeftConcentration]);
         }
 
         if (baseCase.Right is not ClosedFace)
         {
-            kinds.AddRange([MeasureKind.RightReceived, MeasureKind.RightConcentration]);
+            kinds.AddRange([NamedResult.RightReceived, NamedResult.RightConcentration]);
         }
 
         if (baseCase.FoodContact is not null)
         {
-            kinds.Add(MeasureKind.FoodConcentration);
+            kinds.Add(NamedResult.FoodConcentration);
         }
 
         return kinds.Select(kind => times.Select(time => new ResultMeasure(kind, time)).ToArray()).ToList();

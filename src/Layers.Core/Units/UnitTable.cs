@@ -135,6 +135,16 @@ public static class UnitTable
             $"Unknown unit '{symbol}'. Accepted units: {AcceptedList()}.", nameof(symbol));
     }
 
+    /// <summary>
+    /// The SI unit of a dimension as this table writes it: its first canonical entry with factor 1 and no offset
+    /// (kg/m2, kg/m2/s, kg/kg, s ...), so results labelled "SI" use the same symbols as everything a case may write.
+    /// </summary>
+    /// <param name="dimension">Any dimension but <see cref="Dimension.Dimensionless"/>, which has no symbol.</param>
+    /// <exception cref="ArgumentOutOfRangeException">The dimension has no unit in the table.</exception>
+    public static UnitDefinition SiUnit(Dimension dimension) =>
+        All.FirstOrDefault(unit => unit.Dimension == dimension && unit.FactorToSi == 1 && unit.OffsetToSi == 0)
+            ?? throw new ArgumentOutOfRangeException(nameof(dimension), dimension, "No SI unit in the table for this dimension.");
+
     /// <summary>The most common canonical symbols of a dimension, most useful first, for messages.</summary>
     /// <param name="dimension">The dimension.</param>
     /// <returns>

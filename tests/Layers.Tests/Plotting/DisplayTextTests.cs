@@ -22,28 +22,6 @@ public sealed class DisplayTextTests
     }
 
     [Theory]
-    [InlineData(65e-6, "um")]
-    [InlineData(1.999e-3, "um")]
-    [InlineData(2e-3, "mm")]
-    [InlineData(0.05, "mm")]
-    public void Depth_is_in_micrometres_below_two_millimetres_and_millimetres_above(double thickness, string unit)
-    {
-        Assert.Equal(unit, DisplayText.DepthUnit(thickness).Symbol);
-    }
-
-    [Theory]
-    [InlineData(60, "s")]
-    [InlineData(600, "min")]
-    [InlineData(7200, "min")]
-    [InlineData(7201, "h")]
-    [InlineData(3 * 86400, "h")]
-    [InlineData(10 * 86400, "d")]
-    public void Time_axes_use_a_unit_that_suits_the_duration(double duration, string unit)
-    {
-        Assert.Equal(unit, DisplayText.TimeAxisUnit(duration).Symbol);
-    }
-
-    [Theory]
     [InlineData(7200, "2\u00A0h")]
     [InlineData(86400, "1\u00A0d")]
     [InlineData(129600, "1.5\u00A0d")]

@@ -1,0 +1,89 @@
+using System.Text.Json;
+using Layers.Core.Units;
+
+namespace Layers.Core.Results;
+
+/// <summary>
+/// The catalogue of <see cref="NamedResult"/>: the name a case file uses, the dimension and SI unit (from
+/// <see cref="UnitTable"/>), whether the result is read at a time, its words in tables and plots, and its column in a
+/// batch summary. The switches have no fallback arm on purpose (the build treats a missing arm as an error).
+/// </summary>
+public static class NamedResults
+{
+    /// <summary>Every named result, in declaration order.</summary>
+    public static IReadOnlyList<NamedResult> All { get; } = Enum.GetValues<NamedResult>();
+
+    /// <summary>The results a batch summary lists (and a sweep can plot), in column order.</summary>
+    public static IReadOnlyList<NamedResult> InBatchSummary { get; } = [.. All.Where(result => SummaryKey(result) is not null)];
+
+    /// <summary>The case-file name of each result, e.g. <c>rightReceived</c>.</summary>
+    public static IReadOnlyDictionary<string, NamedResult> ByName { get; } =
+        All.ToDictionary(Name, result => result, StringComparer.Ordinal);
+
+    /// <summary>The case-file name, e.g. <c>rightReceived</c>.</summary>
+    public static string Name(NamedResult result) => JsonNamingPolicy.CamelCase.ConvertName(result.ToString());
+
+    /// <summary>The dimension of the result, for parsing targets and limits and for its SI unit.</summary>
+    public static Dimension Dimension(NamedResult result) => result switch
+    {
+        NamedResult.LeftReceived or NamedResult.RightReceived => Units.Dimension.MassPerArea,
+        NamedResult.LeftConcentration or NamedResult.RightConcentration => Units.Dimension.MassConcentration,
+        NamedResult.FoodConcentration => Units.Dimension.MassFraction,
+        NamedResult.SteadyFlux => Units.Dimension.MassFlux,
+        NamedResult.LagTime or NamedResult.TimeTo90Percent or NamedResult.TimeToLimit => Units.Dimension.Time,
+    };
+
+    /// <summary>The SI unit of the result as the unit table writes it, e.g. <c>kg/m2</c>.</summary>
+    public static UnitDefinition SiUnit(NamedResult result) => UnitTable.SiUnit(Dimension(result));
+
+    /// <summary>True for the results that are read at a time (and accept <c>at</c>); the others are single events or rates.</summary>
+    public static bool IsReadAtTime(NamedResult result) => result switch
+    {
+        NamedResult.LeftReceived or NamedResult.RightReceived or NamedResult.LeftConcentration
+            or NamedResult.RightConcentration or NamedResult.FoodConcentration => true,
+        NamedResult.SteadyFlux or NamedResult.LagTime or NamedResult.TimeTo90Percent or NamedResult.TimeToLimit => false,
+    };
+
+    /// <summary>The result in words, read at the end of the duration, as a plot title names it.</summary>
+    public static string Words(NamedResult result) => result switch
+    {
+        NamedResult.LeftReceived => "received by the left medium at the end",
+        NamedResult.RightReceived => "received by the right medium at the end",
+        NamedResult.LeftConcentration => "concentration in the left medium at the end",
+        NamedResult.RightConcentration => "concentration in the right medium at the end",
+        NamedResult.FoodConcentration => "food concentration at the end",
+        NamedResult.SteadyFlux => "steady flux",
+        NamedResult.LagTime => "lag time",
+        NamedResult.TimeTo90Percent => "time to 90 % of the final state",
+        NamedResult.TimeToLimit => "time to reach the specific migration limit",
+    };
+
+    /// <summary>A short heading for a console column, e.g. "right received".</summary>
+    public static string Heading(NamedResult result) => result switch
+    {
+        NamedResult.LeftReceived => "left received",
+        NamedResult.RightReceived => "right received",
+        NamedResult.LeftConcentration => "left concentration",
+        NamedResult.RightConcentration => "right concentration",
+        NamedResult.FoodConcentration => "food concentration",
+        NamedResult.SteadyFlux => "steady flux",
+        NamedResult.LagTime => "lag time",
+        NamedResult.TimeTo90Percent => "90 % time",
+        NamedResult.TimeToLimit => "time to limit",
+    };
+
+    /// <summary>
+    /// The key of the result in summary.csv and summary.json of a batch (name and SI unit in one word), or null for the
+    /// results a batch summary does not list.
+    /// </summary>
+    public static string? SummaryKey(NamedResult result) => result switch
+    {
+        NamedResult.LeftReceived => "leftReceivedKgPerSquareMeter",
+        NamedResult.RightReceived => "rightReceivedKgPerSquareMeter",
+        NamedResult.SteadyFlux => "steadyFluxKgPerSquareMeterSecond",
+        NamedResult.LagTime => "lagTimeSeconds",
+        NamedResult.TimeTo90Percent => "timeTo90PercentSeconds",
+        NamedResult.LeftConcentration or NamedResult.RightConcentration or NamedResult.FoodConcentration
+            or NamedResult.TimeToLimit => null,
+    };
+}
