@@ -113,6 +113,18 @@ public sealed class CaseReaderDefaultsTests
     }
 
     [Fact]
+    public void A_case_built_in_code_gets_the_same_numerics_as_a_case_file_that_names_none()
+    {
+        // docs/case-format.md, $.numerics: one default, accuracy 1e-4, whoever builds the case; the mesh is the same
+        // for the same stack (a case built in code used to get 240 shared cells at tolerance 1e-6 instead).
+        var read = ReadValid(CaseJson.Minimal);
+        var built = Cases.Make(read.Left, read.Right, read.DurationSeconds, read.ReportTimesSeconds, layers: [.. read.Stack.Layers]);
+
+        Assert.Equal(read.Numerics, built.Numerics);
+        Assert.Equal(GridBuilder.Build(read).WidthsMeters.ToArray(), GridBuilder.Build(built).WidthsMeters.ToArray());
+    }
+
+    [Fact]
     public void A_cell_count_without_an_accuracy_asks_for_the_shared_count_mesh_with_its_own_defaults()
     {
         var simulation = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "cells": 480 }""")));
