@@ -71,8 +71,7 @@ public sealed record AccuracyProblem(
     {
         var result = Simulator.Run(simulation with
         {
-            Grid = new GridOptions { TotalCells = cells },
-            Solver = new SolverOptions { RelativeTolerance = relativeTolerance },
+            Numerics = NumericsSettings.FixedCells(cells, relativeTolerance),
         });
         if (!result.Completed)
         {
@@ -89,8 +88,7 @@ public sealed record AccuracyProblem(
     public static double[] ToolReceivedAtAccuracy(SimulationCase simulation, double accuracy)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        var (grid, solver) = AccuracyTarget.Settings(accuracy);
-        var (samples, statistics) = Simulator.RunTimeSeries(simulation with { Grid = grid, Solver = solver });
+        var (samples, statistics) = Simulator.RunTimeSeries(simulation with { Numerics = NumericsSettings.ForAccuracy(accuracy) });
         if (statistics.StopReason != StopReason.Completed)
         {
             throw new InvalidOperationException($"{simulation.Title}: the tool stopped early at accuracy {accuracy}: {statistics}");
@@ -101,7 +99,7 @@ public sealed record AccuracyProblem(
 
     /// <summary>The cells of the mesh a <c>numerics.accuracy</c> setting gives this problem.</summary>
     public int CellsAtAccuracy(double accuracy)
-        => GridBuilder.Build(Case with { Grid = AccuracyTarget.Settings(accuracy).Grid }).CellCount;
+        => GridBuilder.Build(Case with { Numerics = NumericsSettings.ForAccuracy(accuracy) }).CellCount;
 
     /// <summary>The error of a run of the tool at a <c>numerics.accuracy</c> setting.</summary>
     public double ToolErrorAtAccuracy(double accuracy) => Error(ToolReceivedAtAccuracy(Case, accuracy));

@@ -25,7 +25,7 @@ public class StackScalingBenchmarks
     public void Setup()
     {
         var loaded = BenchmarkCases.Load("stack-50");
-        _case = loaded with { Grid = new GridOptions { TotalCells = Cells } };
+        _case = loaded with { Numerics = loaded.Numerics with { Grid = new CellCountMesh(Cells) } };
         Console.WriteLine($"// stack-50 at {Cells} cells: {Simulator.Run(_case).Statistics}");
     }
 

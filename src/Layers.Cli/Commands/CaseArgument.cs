@@ -36,8 +36,14 @@ internal static class CaseArgument
             return result;
         }
 
-        error.WriteLine($"{path}: invalid case ({result.Errors.Count} problem{(result.Errors.Count == 1 ? string.Empty : "s")}):");
-        error.WriteLine(result.FormatErrors());
+        ReportInvalid(path, result.Errors, error);
         return null;
+    }
+
+    /// <summary>Prints every error of an invalid case to <paramref name="error"/>, under a line that counts them.</summary>
+    public static void ReportInvalid(string path, IReadOnlyList<CaseError> errors, TextWriter error)
+    {
+        error.WriteLine($"{path}: invalid case ({errors.Count} problem{(errors.Count == 1 ? string.Empty : "s")}):");
+        error.WriteLine(new CaseReadResult(path, null, errors).FormatErrors());
     }
 }

@@ -3,7 +3,6 @@ using Layers.Core.Batch;
 using Layers.Core.Cases;
 using Layers.Core.Reports;
 using Layers.Core.Results;
-using Layers.Core.Simulation;
 using Layers.Plotting;
 
 namespace Layers.Cli.Commands;
@@ -129,47 +128,36 @@ internal static class RunCommand
         var clock = System.Diagnostics.Stopwatch.StartNew();
         var phases = new PhaseClock();
         var casePath = settings.CasePath;
-        var read = CaseArgument.ReadOrReport(casePath, error, settings.Access);
-        phases.Mark("read");
-        if (read?.Case is not { } simulation)
+        var request = new CaseRunRequest(casePath, Path.GetFileNameWithoutExtension(casePath), settings.OutputRoot) { Access = settings.Access };
+        var outcome = CaseRun.Execute(
+            request,
+            (result, token) => buildFiles(result, settings, token),
+            phase => phases.Mark(PhaseName(phase, settings.Plots)),
+            cancellation);
+        switch (outcome.Status)
         {
-            return ExitCodes.InvalidInput;
+            case CaseRunStatus.Succeeded:
+                break;
+            case CaseRunStatus.Invalid:
+                CaseArgument.ReportInvalid(casePath, outcome.Errors, error);
+                return ExitCodes.InvalidInput;
+            case CaseRunStatus.SolverFailed:
+                error.WriteLine($"{casePath}: {outcome.Message}");
+                return ExitCodes.SolverFailed;
+            case CaseRunStatus.OutputFailed:
+                error.WriteLine($"{casePath}: {outcome.Message}");
+                return ExitCodes.OutputFailed;
+            case CaseRunStatus.Cancelled:
+                error.WriteLine($"{casePath}: {outcome.Message}");
+                return ExitCodes.Cancelled;
+            default:
+                throw new InvalidOperationException($"unknown status {outcome.Status}");
         }
 
-        var result = Simulator.Run(simulation, cancellation);
-        phases.Mark("solve");
-        if (result.Statistics.StopReason == Core.TimeStepping.StopReason.Cancelled)
-        {
-            error.WriteLine($"{casePath}: cancelled; no results were written.");
-            return ExitCodes.Cancelled;
-        }
-
-        if (!result.Completed)
-        {
-            error.WriteLine($"{casePath}: {result.FailureReason}; no results were written.");
-            return ExitCodes.SolverFailed;
-        }
-
-        Dictionary<string, byte[]> files;
-        string folder;
-        try
-        {
-            files = buildFiles(result, settings, cancellation);
-            phases.Mark(settings.Plots ? "files and plots" : "files");
-            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(casePath), files, cancellation);
-        }
-        catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
-        {
-            error.WriteLine($"{casePath}: cancelled; no results were written.");
-            return ExitCodes.Cancelled;
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            error.WriteLine($"{casePath}: cannot write results under '{settings.OutputRoot}': {exception.Message}");
-            return ExitCodes.OutputFailed;
-        }
-
-        phases.Mark("write");
+        var result = outcome.Result!;
+        var simulation = result.Case;
+        var files = outcome.Files!;
+        var folder = outcome.Folder!;
         if (settings.Json)
         {
             output.Write(System.Text.Encoding.UTF8.GetString(files[CaseFiles.Summary]));
@@ -205,4 +193,14 @@ internal static class RunCommand
 
         return result.FoodContact?.MeetsLimit == false ? ExitCodes.LimitExceeded : ExitCodes.Success;
     }
+
+    /// <summary>The name of a phase in the <c>--timing</c> line.</summary>
+    private static string PhaseName(CaseRunPhase phase, bool plots) => phase switch
+    {
+        CaseRunPhase.Read => "read",
+        CaseRunPhase.Solve => "solve",
+        CaseRunPhase.BuildFiles => plots ? "files and plots" : "files",
+        CaseRunPhase.Write => "write",
+        _ => throw new ArgumentOutOfRangeException(nameof(phase), phase, "unknown phase"),
+    };
 }

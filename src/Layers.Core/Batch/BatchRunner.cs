@@ -1,9 +1,5 @@
-using System.Diagnostics;
 using Layers.Core.Cases;
-using Layers.Core.Reports;
 using Layers.Core.Results;
-using Layers.Core.Simulation;
-using Layers.Core.Studies;
 
 namespace Layers.Core.Batch;
 
@@ -19,8 +15,8 @@ public interface IBatchProgress
 
 /// <summary>
 /// Runs the cases of a batch in parallel, at most <c>jobs</c> at a time. Each case is read, solved and written on
-/// its own: a bad or failing case becomes a row with its message and never stops the others. Each case folder is
-/// written as a whole (<see cref="CaseOutputFolder"/>). On cancellation the cases running are stopped (in their solve,
+/// its own by the pipeline a single run uses (<see cref="CaseRun"/>): a bad or failing case becomes a row with its
+/// message and never stops the others. Each case folder is written as a whole (<see cref="Reports.CaseOutputFolder"/>). On cancellation the cases running are stopped (in their solve,
 /// or while their files are made or written: nothing of theirs is committed), the ones not started are marked
 /// cancelled, and the cases already written keep their results.
 /// </summary>
@@ -89,45 +85,11 @@ public static class BatchRunner
         CaseFileAccess access,
         CancellationToken cancellation)
     {
-        if (item.Json is null)
-        {
-            return Row(item, BatchStatus.Invalid, Describe(item.Errors, item.File));
-        }
-
-        var read = CaseDocument.ReadText(item.Json, item.File, access);
-        if (read.Case is not { } simulation)
-        {
-            return Row(item, BatchStatus.Invalid, Describe(read.Errors, item.File));
-        }
-
-        var clock = Stopwatch.StartNew();
+        var request = new CaseRunRequest(item.File, item.Name, outputRoot) { Json = item.Json, Errors = item.Errors, Access = access };
+        CaseRunOutcome outcome;
         try
         {
-            var result = Simulator.Run(simulation, cancellation);
-            var seconds = clock.Elapsed.TotalSeconds;
-            if (!result.Completed)
-            {
-                return result.Statistics.StopReason == TimeStepping.StopReason.Cancelled
-                    ? Row(item, BatchStatus.Cancelled, "stopped: the run was cancelled; nothing written")
-                    : Row(item, BatchStatus.Failed, $"{result.FailureReason}; nothing written");
-            }
-
-            // Cancellation after the solve (while plots and files are made or written) commits nothing either.
-            var files = buildFiles(result, item);
-            CaseOutputFolder.Write(outputRoot, item.Name, files, cancellation);
-            return new BatchRow(item.Name, item.File, item.Parameters, BatchStatus.Succeeded, string.Empty, BatchKeyResults.From(result))
-            {
-                SolveSeconds = seconds,
-                Limit = LimitCheck.Of(result),
-            };
-        }
-        catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
-        {
-            return Row(item, BatchStatus.Cancelled, "stopped: the run was cancelled; nothing written");
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            return Row(item, BatchStatus.Failed, $"cannot write results under '{outputRoot}': {exception.Message}");
+            outcome = CaseRun.Execute(request, (result, _) => buildFiles(result, item), phaseEnded: null, cancellation);
         }
 #pragma warning disable CA1031 // One case's unexpected failure (a bug) must not stop the other cases: it becomes its row.
         catch (Exception exception)
@@ -135,11 +97,21 @@ public static class BatchRunner
         {
             return Row(item, BatchStatus.Failed, $"unexpected error: {exception.GetType().Name}: {exception.Message}");
         }
+
+        return outcome.Status switch
+        {
+            CaseRunStatus.Succeeded => new BatchRow(item.Name, item.File, item.Parameters, BatchStatus.Succeeded, string.Empty, BatchKeyResults.From(outcome.Result!))
+            {
+                SolveSeconds = outcome.SolveSeconds,
+                Limit = outcome.Limit,
+            },
+            CaseRunStatus.Invalid => Row(item, BatchStatus.Invalid, outcome.Message),
+            CaseRunStatus.SolverFailed or CaseRunStatus.OutputFailed => Row(item, BatchStatus.Failed, outcome.Message),
+            CaseRunStatus.Cancelled => Row(item, BatchStatus.Cancelled, outcome.Message),
+            _ => throw new InvalidOperationException($"unknown status {outcome.Status}"),
+        };
     }
 
     private static BatchRow Row(BatchItem item, BatchStatus status, string message) =>
         new(item.Name, item.File, item.Parameters, status, message, null);
-
-    private static string Describe(IReadOnlyList<CaseError> errors, string file) =>
-        string.Join("; ", errors.Select(error => error.Format(file)));
 }

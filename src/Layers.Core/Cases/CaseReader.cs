@@ -138,7 +138,7 @@ public static class CaseReader
         var right = FaceReader.Read(root, "right", context);
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context, CaseLimits.MaxReportTimes);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
-        var (grid, solver) = ReadNumerics(root, context);
+        var numerics = ReadNumerics(root, context);
         var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));
         FoodContactSettings? foodSettings = null;
         if (food is not null)
@@ -162,8 +162,7 @@ public static class CaseReader
             DurationSeconds = end,
             ReportTimesSeconds = (IReadOnlyList<double>?)reports ?? TimesReader.DefaultReportFractions.Select(fraction => fraction * end).ToArray(),
             ExtraOutputTimesSeconds = extra?.Order().ToArray() ?? [],
-            Grid = grid,
-            Solver = solver,
+            Numerics = numerics,
             Display = display,
             FoodContact = foodSettings,
             PermeationTest = permeationTest,
@@ -219,52 +218,48 @@ public static class CaseReader
         return name;
     }
 
-    private static (GridOptions Grid, SolverOptions Solver) ReadNumerics(JsonFields root, ReadContext context)
+    private static NumericsSettings ReadNumerics(JsonFields root, ReadContext context)
     {
-        var (grid, solver) = AccuracyTarget.Settings(AccuracyTarget.Default);
+        var settings = NumericsSettings.Default;
         if (root.Member("numerics") is not { } element
             || JsonFields.Open(element, root.PathOf("numerics"), context.Errors, NumericsKeys) is not { } numerics)
         {
-            return (grid, solver);
+            return settings;
         }
 
         // A target accuracy (given, or the default when no cell count is given) picks the mesh and the tolerance;
-        // a cell count without an accuracy asks for the shared-count mesh at its own defaults. Keys given beside
-        // either override their choice.
+        // a cell count asks for the shared-count mesh, at the tolerance of the accuracy when one is given. Keys given
+        // beside either override their choice.
         var cells = numerics.Integer("cells");
         if (numerics.Number("accuracy") is { } accuracy)
         {
-            if (accuracy is >= AccuracyTarget.Finest and <= AccuracyTarget.Coarsest)
+            if (accuracy is >= NumericsSettings.FinestAccuracy and <= NumericsSettings.CoarsestAccuracy)
             {
-                (grid, solver) = AccuracyTarget.Settings(accuracy);
+                settings = NumericsSettings.ForAccuracy(accuracy);
             }
             else
             {
                 numerics.Error("accuracy", FormattableString.Invariant(
-                    $"must be from {AccuracyTarget.Finest:0e0} to {AccuracyTarget.Coarsest:0e0} (a relative accuracy such as 1e-4); got {accuracy}"));
+                    $"must be from {NumericsSettings.FinestAccuracy:0e0} to {NumericsSettings.CoarsestAccuracy:0e0} (a relative accuracy such as 1e-4); got {accuracy}"));
             }
         }
         else if (cells is not null)
         {
-            (grid, solver) = (new GridOptions(), new SolverOptions());
+            settings = settings with { Solver = settings.Solver with { RelativeTolerance = NumericsSettings.CellCountRelativeTolerance } };
         }
 
         var minimumCells = numerics.Integer("minimumCellsPerLayer");
-        grid = grid with
-        {
-            TotalCells = cells ?? grid.TotalCells,
-            MinimumCellsPerLayer = minimumCells ?? grid.MinimumCellsPerLayer,
-            ByDiffusionLength = cells is null
-                ? grid.ByDiffusionLength is { } mesh && minimumCells is { } minimum ? mesh with { MinimumCellsPerLayer = Math.Max(1, minimum) } : grid.ByDiffusionLength
-                : null,
-        };
-        solver = solver with { RelativeTolerance = numerics.Number("relativeTolerance") ?? solver.RelativeTolerance };
-        foreach (var (setting, message) in grid.Problems().Concat(solver.Problems()))
+        GridOptions grid = cells is { } count ? new CellCountMesh(count) : settings.Grid;
+        grid = grid with { MinimumCellsPerLayer = minimumCells ?? grid.MinimumCellsPerLayer };
+        settings = new NumericsSettings(
+            grid,
+            settings.Solver with { RelativeTolerance = numerics.Number("relativeTolerance") ?? settings.Solver.RelativeTolerance });
+        foreach (var (setting, message) in settings.Problems())
         {
             numerics.Error(setting, message);
         }
 
-        return (grid, solver);
+        return settings;
     }
 
     /// <summary>

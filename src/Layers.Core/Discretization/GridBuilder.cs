@@ -3,25 +3,30 @@ using Layers.Core.Domain;
 namespace Layers.Core.Discretization;
 
 /// <summary>
-/// Builds the mesh: cells are shared among layers (half in proportion to thickness, half equally, so a thin but
-/// slow layer is not starved), every layer gets at least the minimum, and inside each layer the widths grow
-/// geometrically from both edges toward the middle.
+/// Builds the mesh of a case from its numerics setting: cells by each layer's diffusion lengths
+/// (<see cref="DiffusionLengthMesh"/>), or an explicit count shared among layers (half in proportion to thickness,
+/// half equally, so a thin but slow layer is not starved), every layer getting at least the minimum, the widths inside
+/// each layer growing geometrically from both edges toward the middle (<see cref="CellCountMesh"/>).
 /// </summary>
 public static class GridBuilder
 {
     /// <summary>
-    /// Builds the mesh of a case: by diffusion lengths when its mesh settings ask for it
-    /// (<see cref="GridOptions.ByDiffusionLength"/>, with the earliest report time and the duration of the case and
-    /// small cells only at the edges where something crosses), else by the shared cell count.
+    /// Builds the mesh of a case as its numerics setting asks: by diffusion lengths (with the earliest report time and
+    /// the duration of the case, small cells only at the edges where something crosses), or by the shared cell count.
     /// </summary>
     public static Grid Build(SimulationCase simulation)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        if (simulation.Grid.ByDiffusionLength is not { } mesh)
+        return simulation.Numerics.Grid switch
         {
-            return Build(simulation.Stack, simulation.Grid);
-        }
+            DiffusionLengthMesh mesh => Build(simulation, mesh),
+            CellCountMesh count => Build(simulation.Stack, count),
+            _ => throw new ArgumentException($"unknown kind of mesh: {simulation.Numerics.Grid.GetType().Name}", nameof(simulation)),
+        };
+    }
 
+    private static Grid Build(SimulationCase simulation, DiffusionLengthMesh mesh)
+    {
         var stack = simulation.Stack;
         var leftOpen = simulation.Left is not ClosedFace;
         var rightOpen = simulation.Right is not ClosedFace;
@@ -38,18 +43,12 @@ public static class GridBuilder
     }
 
     /// <summary>Builds the mesh for a stack by the shared cell count of <paramref name="options"/>.</summary>
-    public static Grid Build(LayerStack stack, GridOptions options)
+    public static Grid Build(LayerStack stack, CellCountMesh options)
     {
         ArgumentNullException.ThrowIfNull(stack);
         ArgumentNullException.ThrowIfNull(options);
         var counts = CellsPerLayer(stack, options);
-        return Assemble(stack, layer =>
-        {
-            var edge = options.ResolvedFromSeconds is { } early
-                ? EdgeWidthPerDiffusionLength * Math.Sqrt(stack.Layers[layer].DiffusivitySquareMetersPerSecond * early)
-                : double.PositiveInfinity;
-            return GradedWidths(stack.Layers[layer].ThicknessMeters, counts[layer], options, edge);
-        });
+        return Assemble(stack, layer => GradedWidths(stack.Layers[layer].ThicknessMeters, counts[layer], options));
     }
 
     private static Grid Assemble(LayerStack stack, Func<int, double[]> widthsOfLayer)
@@ -67,7 +66,7 @@ public static class GridBuilder
     }
 
     /// <summary>Number of cells given to each layer.</summary>
-    public static int[] CellsPerLayer(LayerStack stack, GridOptions options)
+    public static int[] CellsPerLayer(LayerStack stack, CellCountMesh options)
     {
         var total = stack.TotalThicknessMeters;
         var counts = new int[stack.Count];
@@ -80,23 +79,12 @@ public static class GridBuilder
         return counts;
     }
 
-    /// <summary>Widest edge cell, as a fraction of the diffusion length at <see cref="GridOptions.ResolvedFromSeconds"/>.</summary>
-    public const double EdgeWidthPerDiffusionLength = 0.25;
-
-    /// <summary>
-    /// Steepest grading used to reach that edge width (a bound that keeps the grading smooth; common practice, no
-    /// source).
-    /// </summary>
-    public const double SteepestGradingRatio = 1.3;
-
     /// <summary>
     /// Widths of <paramref name="cellCount"/> cells over a thickness, symmetric, smallest at both edges, neighbours
     /// in the grading ratio (reduced if needed so the widest cell is at most the maximum width ratio times the
-    /// narrowest; raised, up to <see cref="SteepestGradingRatio"/>, when the edge cells would be wider than
-    /// <paramref name="edgeWidthMeters"/>). A smooth geometric grading keeps the cell-centred scheme second-order
-    /// accurate.
+    /// narrowest). A smooth geometric grading keeps the cell-centred scheme second-order accurate.
     /// </summary>
-    public static double[] GradedWidths(double thicknessMeters, int cellCount, GridOptions options, double edgeWidthMeters = double.PositiveInfinity)
+    public static double[] GradedWidths(double thicknessMeters, int cellCount, CellCountMesh options)
     {
         ArgumentNullException.ThrowIfNull(options);
         var half = (cellCount + 1) / 2;
@@ -106,32 +94,10 @@ public static class GridBuilder
             ratio = Math.Min(ratio, Math.Pow(options.MaximumWidthRatio, 1.0 / (half - 1)));
         }
 
-        if (half > 1 && EdgeWidth(thicknessMeters, cellCount, ratio) > edgeWidthMeters)
-        {
-            // The edge width falls as the ratio grows; bisect for the ratio that meets it, or take the steepest.
-            var low = ratio;
-            var high = Math.Max(ratio, SteepestGradingRatio);
-            if (EdgeWidth(thicknessMeters, cellCount, high) > edgeWidthMeters)
-            {
-                low = high;
-            }
-
-            for (var i = 0; i < 50 && high - low > 1e-6; i++)
-            {
-                var middle = 0.5 * (low + high);
-                (low, high) = EdgeWidth(thicknessMeters, cellCount, middle) > edgeWidthMeters ? (middle, high) : (low, middle);
-            }
-
-            ratio = high;
-        }
-
         var relative = RelativeWidths(cellCount, ratio);
         var scale = thicknessMeters / relative.Sum();
         return relative.Select(width => width * scale).ToArray();
     }
-
-    private static double EdgeWidth(double thicknessMeters, int cellCount, double ratio)
-        => thicknessMeters / RelativeWidths(cellCount, ratio).Sum();
 
     private static double[] RelativeWidths(int cellCount, double ratio)
     {

@@ -16,4 +16,18 @@ namespace Layers.Core.Domain;
 /// <param name="MinimumCellsPerLayer">Fewest cells in a layer; also caps the widest cell at thickness / this.</param>
 public sealed record DiffusionLengthMesh(
     double WidthPerDiffusionLength,
-    int MinimumCellsPerLayer);
+    int MinimumCellsPerLayer) : GridOptions
+{
+    /// <summary>Fewest cells in a layer; also caps the widest cell at thickness / this. Admissible 4 to 10 000.</summary>
+    public override int MinimumCellsPerLayer { get; init; } = MinimumCellsPerLayer;
+
+    /// <inheritdoc/>
+    public override IEnumerable<(string Setting, string Message)> Problems()
+    {
+        // The width comes from an accuracy, checked where it is read.
+        if (MinimumCellsPerLayer is < 4 or > 10_000)
+        {
+            yield return ("minimumCellsPerLayer", $"must be from 4 to 10000; got {MinimumCellsPerLayer}");
+        }
+    }
+}

@@ -29,11 +29,8 @@ public sealed record SimulationCase
     /// <summary>Extra times at which amounts are written to the time series, s, ascending, within the duration.</summary>
     public IReadOnlyList<double> ExtraOutputTimesSeconds { get; init; } = [];
 
-    /// <summary>Mesh settings.</summary>
-    public GridOptions Grid { get; init; } = new();
-
-    /// <summary>Time-stepping settings.</summary>
-    public SolverOptions Solver { get; init; } = new();
+    /// <summary>Mesh and time-stepping settings; by default those for the accuracy target 1e-4.</summary>
+    public NumericsSettings Numerics { get; init; } = NumericsSettings.Default;
 
     /// <summary>SHA-256 of the case file's text (lowercase hex), recorded with the results; null when built in code.</summary>
     public string? SourceSha256 { get; init; }

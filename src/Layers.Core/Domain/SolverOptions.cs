@@ -4,10 +4,11 @@ namespace Layers.Core.Domain;
 public sealed record SolverOptions
 {
     /// <summary>
-    /// Relative tolerance of the local error per step. Default 1e-6; admissible 1e-10 to 1e-2. The absolute
-    /// tolerance is this value times <see cref="AbsoluteToleranceScale"/> times the largest |u| in the problem.
+    /// Relative tolerance of the local error per step; admissible 1e-10 to 1e-2. The absolute tolerance is this value
+    /// times <see cref="AbsoluteToleranceScale"/> times the largest |u| in the problem. No default here: the numerics
+    /// setting of a case chooses it (<c>Domain.NumericsSettings</c>).
     /// </summary>
-    public double RelativeTolerance { get; init; } = 1e-6;
+    public required double RelativeTolerance { get; init; }
 
     /// <summary>
     /// Absolute tolerance as a fraction of (relative tolerance x largest |u|). Default 1e-3, so that small amounts

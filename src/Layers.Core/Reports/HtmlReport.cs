@@ -82,7 +82,7 @@ public static class HtmlReport
         }
 
         yield return string.Create(CultureInfo.InvariantCulture,
-            $"Numerics: finite volumes ({result.Grid.CellCount} cells, graded toward interfaces), TR-BDF2 time steps ({result.Statistics.AcceptedSteps} accepted, relative tolerance {result.Case.Solver.RelativeTolerance:G2}); worst mass-balance error {result.WorstMassBalanceError:G2}.");
+            $"Numerics: finite volumes ({result.Grid.CellCount} cells, graded toward interfaces), TR-BDF2 time steps ({result.Statistics.AcceptedSteps} accepted, relative tolerance {result.Case.Numerics.Solver.RelativeTolerance:G2}); worst mass-balance error {result.WorstMassBalanceError:G2}.");
     }
 
     private static void AppendTable(StringBuilder html, TextTable table)

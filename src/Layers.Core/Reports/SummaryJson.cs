@@ -156,7 +156,7 @@ public static class SummaryJson
         json.WriteNumber("rejectedSteps", statistics.RejectedSteps);
         json.WriteNumber("smallestStepSeconds", statistics.SmallestStepSeconds);
         json.WriteNumber("largestStepSeconds", statistics.LargestStepSeconds);
-        json.WriteNumber("relativeTolerance", result.Case.Solver.RelativeTolerance);
+        json.WriteNumber("relativeTolerance", result.Case.Numerics.Solver.RelativeTolerance);
         json.WriteString("stopReason", JsonNamingPolicy.CamelCase.ConvertName(statistics.StopReason.ToString()));
         json.WriteEndObject();
     }

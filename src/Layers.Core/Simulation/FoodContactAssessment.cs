@@ -33,9 +33,9 @@ internal static class FoodContactAssessment
         var density = food.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
         var final = watcher.StageEndValues[^1];
         var foodMassPerArea = food.VolumePerAreaMeters * density;
-        var detection = watcher.Crossings[0] is { } seen ? CrossingTime(seen, watcher.Levels[0], stages, watcher, simulation.Solver) : (double?)null;
+        var detection = watcher.Crossings[0] is { } seen ? CrossingTime(seen, watcher.Levels[0], stages, watcher, simulation.Numerics.Solver) : (double?)null;
         var limit = watcher.Levels.Length > 1 && watcher.Crossings[1] is { } over
-            ? CrossingTime(over, watcher.Levels[1], stages, watcher, simulation.Solver)
+            ? CrossingTime(over, watcher.Levels[1], stages, watcher, simulation.Numerics.Solver)
             : (double?)null;
 
         return new FoodContactResult
@@ -67,7 +67,7 @@ internal static class FoodContactAssessment
         IReadOnlyList<StageSystem> stages, double[] start, Grid grid, SimulationCase simulation, FoodConcentrationWatcher watcher, CancellationToken cancellation)
     {
         var outcome = StagedIntegration.Run(
-            stages, start, [], 0, (stage, first) => Simulator.InitialStep(stage.Case, grid, first), simulation.Solver, NullObserver.Instance, cancellation: cancellation);
+            stages, start, [], 0, (stage, first) => Simulator.InitialStep(stage.Case, grid, first), simulation.Numerics.Solver, NullObserver.Instance, cancellation: cancellation);
         return outcome.Statistics.StopReason == StopReason.Completed ? watcher.ValueOf(outcome.FinalState) : double.NaN;
     }
 

@@ -27,7 +27,7 @@ public static class Simulator
         observer = undissolved is null ? observer : new ObserverPair(observer, undissolved);
         var statistics = StagedIntegration.Run(
             stages, initial, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
-            simulation.Solver, observer, sampling, cancellation).Statistics;
+            simulation.Numerics.Solver, observer, sampling, cancellation).Statistics;
         var failure = statistics.StopReason == StopReason.Completed ? string.Empty : $"the solver stopped early ({statistics})";
         if (statistics.StopReason == StopReason.Completed)
         {
@@ -74,7 +74,7 @@ public static class Simulator
         var (grid, _, initial, _, sampling, recorder, stages) = Assemble(simulation);
         var statistics = StagedIntegration.Run(
             stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
-            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Solver, recorder, sampling, cancellation).Statistics;
+            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
         return (recorder.Samples, statistics);
     }
 
@@ -102,7 +102,7 @@ public static class Simulator
         var (grid, system, initial, _, sampling, recorder, stages) = Assemble(simulation);
         var statistics = StagedIntegration.Run(
             stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
-            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Solver, recorder, sampling, cancellation).Statistics;
+            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
         return statistics.StopReason == StopReason.Completed
             ? system.TotalMass(initial) - sampling.RemovedPerArea(Side.Left) - sampling.RemovedPerArea(Side.Right)
             : null;

@@ -22,9 +22,8 @@ public static class PlainReference
     /// </summary>
     /// <param name="totalCells">Target number of cells over the stack.</param>
     /// <param name="layerCount">Number of layers.</param>
-    public static GridOptions UniformGrid(int totalCells, int layerCount) => new()
+    public static CellCountMesh UniformGrid(int totalCells, int layerCount) => new(totalCells)
     {
-        TotalCells = totalCells,
         MinimumCellsPerLayer = Math.Max(4, Math.Min(totalCells / Math.Max(1, layerCount), 10_000)),
         GradingRatio = 1,
     };

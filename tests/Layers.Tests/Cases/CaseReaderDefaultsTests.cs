@@ -1,3 +1,4 @@
+using Layers.Core.Discretization;
 using Layers.Core.Domain;
 using Layers.Tests.TestSupport;
 
@@ -105,9 +106,22 @@ public sealed class CaseReaderDefaultsTests
         // at the edges, at least 4 per layer, step tolerance 1e-4).
         var simulation = ReadValid(CaseJson.Minimal);
 
-        Assert.Equal(0.05, simulation.Grid.ByDiffusionLength!.WidthPerDiffusionLength, 15);
-        Assert.Equal(4, simulation.Grid.ByDiffusionLength.MinimumCellsPerLayer);
-        Assert.Equal(1e-4, simulation.Solver.RelativeTolerance, 15);
+        var mesh = Assert.IsType<DiffusionLengthMesh>(simulation.Numerics.Grid);
+        Assert.Equal(0.05, mesh.WidthPerDiffusionLength, 15);
+        Assert.Equal(4, mesh.MinimumCellsPerLayer);
+        Assert.Equal(1e-4, simulation.Numerics.Solver.RelativeTolerance, 15);
+    }
+
+    [Fact]
+    public void A_case_built_in_code_gets_the_same_numerics_as_a_case_file_that_names_none()
+    {
+        // docs/case-format.md, $.numerics: one default, accuracy 1e-4, whoever builds the case; the mesh is the same
+        // for the same stack (a case built in code used to get 240 shared cells at tolerance 1e-6 instead).
+        var read = ReadValid(CaseJson.Minimal);
+        var built = Cases.Make(read.Left, read.Right, read.DurationSeconds, read.ReportTimesSeconds, layers: [.. read.Stack.Layers]);
+
+        Assert.Equal(read.Numerics, built.Numerics);
+        Assert.Equal(GridBuilder.Build(read).WidthsMeters.ToArray(), GridBuilder.Build(built).WidthsMeters.ToArray());
     }
 
     [Fact]
@@ -115,10 +129,10 @@ public sealed class CaseReaderDefaultsTests
     {
         var simulation = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "cells": 480 }""")));
 
-        Assert.Null(simulation.Grid.ByDiffusionLength);
-        Assert.Equal(480, simulation.Grid.TotalCells);
-        Assert.Equal(12, simulation.Grid.MinimumCellsPerLayer);
-        Assert.Equal(1e-6, simulation.Solver.RelativeTolerance);
+        var mesh = Assert.IsType<CellCountMesh>(simulation.Numerics.Grid);
+        Assert.Equal(480, mesh.TotalCells);
+        Assert.Equal(12, mesh.MinimumCellsPerLayer);
+        Assert.Equal(1e-6, simulation.Numerics.Solver.RelativeTolerance);
     }
 
     [Fact]

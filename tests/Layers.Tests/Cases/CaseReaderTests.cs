@@ -1,4 +1,5 @@
 using Layers.Core.Cases;
+using Layers.Core.Discretization;
 using Layers.Core.Domain;
 using Layers.Core.Studies;
 using Layers.Tests.TestSupport;
@@ -237,9 +238,10 @@ public sealed class CaseReaderTests
 
         var simulation = ReadValid(json);
 
-        Assert.Equal(480, simulation.Grid.TotalCells);
-        Assert.Equal(16, simulation.Grid.MinimumCellsPerLayer);
-        Assert.Equal(1e-7, simulation.Solver.RelativeTolerance);
+        var mesh = Assert.IsType<CellCountMesh>(simulation.Numerics.Grid);
+        Assert.Equal(480, mesh.TotalCells);
+        Assert.Equal(16, mesh.MinimumCellsPerLayer);
+        Assert.Equal(1e-7, simulation.Numerics.Solver.RelativeTolerance);
     }
 
     [Fact]
@@ -253,13 +255,12 @@ public sealed class CaseReaderTests
         var counted = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4, "cells": 50 }""")));
         var atLeast = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-4, "minimumCellsPerLayer": 9 }""")));
 
-        Assert.Equal(0.05, chosen.Grid.ByDiffusionLength!.WidthPerDiffusionLength, 15);
-        Assert.Equal(0.5, coarser.Grid.ByDiffusionLength!.WidthPerDiffusionLength, 15);
-        Assert.Equal(1e-4, chosen.Solver.RelativeTolerance, 15);
-        Assert.Null(counted.Grid.ByDiffusionLength);
-        Assert.Equal(50, counted.Grid.TotalCells);
-        Assert.Equal(1e-4, counted.Solver.RelativeTolerance, 15);
-        Assert.Equal(9, atLeast.Grid.ByDiffusionLength!.MinimumCellsPerLayer);
+        Assert.Equal(0.05, Assert.IsType<DiffusionLengthMesh>(chosen.Numerics.Grid).WidthPerDiffusionLength, 15);
+        Assert.Equal(0.5, Assert.IsType<DiffusionLengthMesh>(coarser.Numerics.Grid).WidthPerDiffusionLength, 15);
+        Assert.Equal(1e-4, chosen.Numerics.Solver.RelativeTolerance, 15);
+        Assert.Equal(50, Assert.IsType<CellCountMesh>(counted.Numerics.Grid).TotalCells);
+        Assert.Equal(1e-4, counted.Numerics.Solver.RelativeTolerance, 15);
+        Assert.Equal(9, Assert.IsType<DiffusionLengthMesh>(atLeast.Numerics.Grid).MinimumCellsPerLayer);
     }
 
     [Theory]

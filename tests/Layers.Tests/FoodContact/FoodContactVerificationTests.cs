@@ -61,7 +61,7 @@ public sealed class FoodContactVerificationTests
     {
         // The film holds 0.92 kg/m3 x 50 um = 4.6e-5 kg/m2, at most 2.76 mg/kg in the food; 2 mg/kg is reached part-way.
         const double diffusivity = 1e-14;
-        var simulation = FoodCases.Film(1, [new TemperatureStage("storage", 30 * Day, 298.15)], new GivenDiffusivity(diffusivity), limit: 2e-6);
+        var simulation = FoodCases.Film(1, [new TemperatureStage("storage", 30 * Day, 298.15)], new GivenDiffusivity(diffusivity), limit: 2e-6) with { Numerics = Cases.FixedFineMesh };
 
         var result = Simulator.Run(simulation).FoodContact!;
 

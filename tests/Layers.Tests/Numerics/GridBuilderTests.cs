@@ -17,7 +17,7 @@ public sealed class GridBuilderTests
     [Fact]
     public void Cells_of_each_layer_sum_to_its_thickness_and_faces_fall_on_interfaces()
     {
-        var grid = GridBuilder.Build(Stack, new GridOptions());
+        var grid = GridBuilder.Build(Stack, new CellCountMesh(240));
 
         for (var layer = 0; layer < Stack.Count; layer++)
         {
@@ -31,7 +31,7 @@ public sealed class GridBuilderTests
     [Fact]
     public void Every_layer_gets_at_least_the_minimum_number_of_cells()
     {
-        var grid = GridBuilder.Build(Stack, new GridOptions { MinimumCellsPerLayer = 9 });
+        var grid = GridBuilder.Build(Stack, new CellCountMesh(240) { MinimumCellsPerLayer = 9 });
 
         Assert.All(Enumerable.Range(0, Stack.Count), layer => Assert.True(grid.CellsIn(layer) >= 9));
     }
@@ -39,7 +39,7 @@ public sealed class GridBuilderTests
     [Fact]
     public void Widths_are_smallest_at_both_edges_and_grow_by_at_most_the_grading_ratio()
     {
-        var widths = GridBuilder.GradedWidths(1, 41, new GridOptions { GradingRatio = 1.1 });
+        var widths = GridBuilder.GradedWidths(1, 41, new CellCountMesh(240) { GradingRatio = 1.1 });
 
         Assert.Equal(widths[0], widths[^1], 15);
         Assert.Equal(widths.Min(), widths[0]);
@@ -50,27 +50,6 @@ public sealed class GridBuilderTests
         }
 
         Assert.True(widths.Max() / widths.Min() <= 20 + 1e-9);
-    }
-
-    [Fact]
-    public void With_an_early_time_to_resolve_the_edge_cells_are_narrower_than_a_quarter_of_the_diffusion_length()
-    {
-        // docs/numerics.md, Mesh: edge cells at most a quarter of sqrt(D t) of their own layer, reached by a steeper
-        // but still smooth grading (neighbours differ by at most the steepest ratio).
-        var stack = new LayerStack([Cases.Layer("slow", 50e-6, 1e-16, k: 1000), Cases.Layer("fast", 30e-6, 1e-12)]);
-        var grid = GridBuilder.Build(stack, new GridOptions { TotalCells = 120, ResolvedFromSeconds = 7200 });
-
-        for (var layer = 0; layer < stack.Count; layer++)
-        {
-            var widths = grid.WidthsMeters.Slice(grid.FirstCell(layer), grid.CellsIn(layer)).ToArray();
-            var limit = 0.25 * Math.Sqrt(stack.Layers[layer].DiffusivitySquareMetersPerSecond * 7200);
-            Assert.True(widths[0] <= limit * (1 + 1e-9), $"layer {layer}: edge {widths[0]} > {limit}");
-            Assert.Equal(widths[0], widths[^1], 15);
-            for (var i = 1; i < widths.Length; i++)
-            {
-                Assert.True(Math.Max(widths[i] / widths[i - 1], widths[i - 1] / widths[i]) <= GridBuilder.SteepestGradingRatio + 1e-9);
-            }
-        }
     }
 
     [Fact]
@@ -102,7 +81,7 @@ public sealed class GridBuilderTests
     public void By_diffusion_length_a_closed_face_gets_no_small_cells_and_open_edges_do()
     {
         var stack = new LayerStack([Cases.Layer("loaded", 50e-6, 8e-14, c0: 1), Cases.Layer("skin", 10e-6, 1e-15)]);
-        var simulation = Cases.Make(Cases.Closed, Cases.Bath(0), 86400, grid: new GridOptions { ByDiffusionLength = new DiffusionLengthMesh(0.05, 4) }, layers: [.. stack.Layers]);
+        var simulation = Cases.Make(Cases.Closed, Cases.Bath(0), 86400, numerics: NumericsSettings.Default with { Grid = new DiffusionLengthMesh(0.05, 4) }, layers: [.. stack.Layers]);
 
         var grid = GridBuilder.Build(simulation);
 

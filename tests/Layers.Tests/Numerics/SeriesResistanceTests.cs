@@ -1,5 +1,6 @@
 using Layers.Core.Discretization;
 using Layers.Core.Domain;
+using Layers.Core.TimeStepping;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Numerics;
@@ -18,9 +19,9 @@ public sealed class SeriesResistanceTests
             Cases.Closed,
             Cases.Closed,
             1,
-            grid: new GridOptions { TotalCells = 8, MinimumCellsPerLayer = 4, GradingRatio = 1 },
+            numerics: new NumericsSettings(new CellCountMesh(8) { MinimumCellsPerLayer = 4, GradingRatio = 1 }, new SolverOptions { RelativeTolerance = 1e-6 }),
             layers: [Cases.Layer("a", 4e-6, 2e-12, k: 0.1), Cases.Layer("b", 8e-6, 1e-13, k: 50)]);
-        var (system, _) = DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation.Stack, simulation.Grid));
+        var (system, _) = DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation));
 
         var interfaceFace = system.Grid.CellsIn(0) - 1;
         var widthA = system.Grid.WidthsMeters[interfaceFace];
@@ -45,7 +46,7 @@ public sealed class SeriesResistanceTests
             new CompartmentFace("c", 1e-3, 1, 1e-4, 1e-4 * 3, null),
             1,
             layers: [Cases.Layer("a", 1e-5, 1e-12, k: 1e4, c0: 3 * 1e4), Cases.Layer("b", 1e-5, 1e-12, k: 1e-4, c0: 3 * 1e-4)]);
-        var (system, initial) = DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation.Stack, simulation.Grid));
+        var (system, initial) = DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation));
         var rate = new double[system.NodeCount];
 
         system.Residual(initial, rate);

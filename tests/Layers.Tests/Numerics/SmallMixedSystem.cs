@@ -16,8 +16,8 @@ internal static class SmallMixedSystem
             Cases.Bath(3, k: 0.2, film: 1e-6),
             Cases.Compartment(1e-3, k: 7),
             100,
-            grid: new GridOptions { TotalCells = 12, MinimumCellsPerLayer = 4 },
+            numerics: new NumericsSettings(new CellCountMesh(12) { MinimumCellsPerLayer = 4 }, new SolverOptions { RelativeTolerance = 1e-6 }),
             layers: [Cases.Layer("a", 1e-5, 1e-12, k: 0.3), Cases.Layer("b", 3e-5, 1e-13, k: 30)]);
-        return DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation.Stack, simulation.Grid)).System;
+        return DiffusionSystemBuilder.Build(simulation, GridBuilder.Build(simulation)).System;
     }
 }

@@ -20,21 +20,20 @@ public sealed class TightToleranceTests
             Cases.Closed,
             Cases.Compartment(1.087e-3 / 0.06),
             10 * 86400,
-            grid: new GridOptions { TotalCells = 2000 },
-            solver: new SolverOptions { RelativeTolerance = 1e-10 },
+            numerics: NumericsSettings.FixedCells(2000, 1e-10),
             layers:
             [
                 Cases.Layer("print layer", 12e-6, 5e-18, 2),
                 Cases.Layer("adhesive", 3e-6, 2e-14, 1.5),
                 Cases.Layer("sealant", 50e-6, 8e-14, 1, 0.92),
             ]);
-        var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
+        var grid = GridBuilder.Build(simulation);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
         using var stop = new CancellationTokenSource();
         var observer = new FirstSteps(50, stop, system, initial);
         var plan = new TimeLoopPlan([simulation.DurationSeconds], simulation.DurationSeconds, simulation.DurationSeconds, 1e-3);
 
-        var statistics = new TransientSolver(system, simulation.Solver).Run(initial, plan, observer, stop.Token);
+        var statistics = new TransientSolver(system, simulation.Numerics.Solver).Run(initial, plan, observer, stop.Token);
 
         // The run is stopped on purpose after 50 accepted steps; before, it ended with StepSizeUnderflow and none.
         Assert.True(statistics.StopReason == StopReason.Cancelled, statistics.ToString());

@@ -19,12 +19,12 @@ public sealed class TimeLoopAllocationTests
         var layers = Enumerable.Range(0, 50)
             .Select(i => Cases.Layer($"layer {i}", (10 + (i % 7)) * 1e-6, i % 2 == 0 ? 1e-12 : 1e-14, 1 + (i % 3), i % 5 == 0 ? 100 : 0))
             .ToArray();
-        var simulation = Cases.Make(Cases.Bath(10), Cases.Compartment(1e-3), 3e5, grid: new GridOptions { TotalCells = 600 }, layers: layers);
-        var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
+        var simulation = Cases.Make(Cases.Bath(10), Cases.Compartment(1e-3), 3e5, numerics: NumericsSettings.FixedCells(600, 1e-6), layers: layers);
+        var grid = GridBuilder.Build(simulation);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
         var outputs = OutputSchedule.For(simulation);
         var plan = new TimeLoopPlan(outputs, simulation.DurationSeconds, 10 * simulation.DurationSeconds, 1e-3);
-        var solver = new TransientSolver(system, simulation.Solver);
+        var solver = new TransientSolver(system, simulation.Numerics.Solver);
 
         // Once to compile every path, then counted.
         solver.Run(initial, plan, new AllocationProbe());

@@ -157,7 +157,7 @@ public sealed class DispersedMatrixTests
     {
         var matrix = new Layer("matrix", Thickness, Diffusivity, 1, loading) { SolubilityKgPerCubicMeter = Solubility };
         // 120 cells rather than the default 240: the front crosses each cell in a few short steps, so this halves the run.
-        return Cases.Make(Cases.Closed, Cases.Bath(0), times[^1], times, new GridOptions { TotalCells = 120 }, layers: matrix) with
+        return Cases.Make(Cases.Closed, Cases.Bath(0), times[^1], times, NumericsSettings.FixedCells(120, 1e-6), layers: matrix) with
         {
             ExtraOutputTimesSeconds = times,
         };

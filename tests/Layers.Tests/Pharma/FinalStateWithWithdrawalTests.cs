@@ -60,7 +60,7 @@ public sealed class FinalStateWithWithdrawalTests
         var rate = Math.Log(2) / halfLife;
         var receptor = new CompartmentFace("receptor", volumePerArea, 1, 1, 1, null) { RemovalRatePerSecond = rate };
         var duration = 2 * halfLife;
-        var simulation = Cases.Make(Cases.Closed, receptor, duration, layers: Cases.Layer("thin fast layer", thickness, 1e-9, 1, 1));
+        var simulation = Cases.Make(Cases.Closed, receptor, duration, numerics: Cases.FixedFineMesh, layers: Cases.Layer("thin fast layer", thickness, 1e-9, 1, 1));
 
         var result = Simulator.Run(simulation);
 

@@ -25,6 +25,7 @@ public sealed class FirstOrderRemovalTests
             Cases.Closed,
             receptor,
             duration,
+            numerics: Cases.FixedFineMesh,
             layers: Cases.Layer("thin fast layer", LayerThickness, 1e-9, 1, 1));
 
         var result = Simulator.Run(simulation);

@@ -100,8 +100,7 @@ public sealed class RandomExtremeStackTests
             left,
             right,
             LogUniform(1, 100 * Year),
-            grid: new GridOptions { TotalCells = 8, MinimumCellsPerLayer = 4 },
-            solver: new SolverOptions { RelativeTolerance = 1e-3 },
+            numerics: new NumericsSettings(new CellCountMesh(8) { MinimumCellsPerLayer = 4 }, new SolverOptions { RelativeTolerance = 1e-3 }),
             layers: layers);
     }
 }

@@ -1,6 +1,4 @@
-using Layers.Core.Discretization;
 using Layers.Core.Domain;
-using Layers.Core.TimeStepping;
 
 namespace Layers.Tests.TestSupport;
 
@@ -15,8 +13,7 @@ internal static class Cases
         FaceCondition right,
         double duration,
         IReadOnlyList<double>? reports = null,
-        GridOptions? grid = null,
-        SolverOptions? solver = null,
+        NumericsSettings? numerics = null,
         params Layer[] layers)
         => new()
         {
@@ -26,9 +23,14 @@ internal static class Cases
             Right = right,
             DurationSeconds = duration,
             ReportTimesSeconds = reports ?? [duration],
-            Grid = grid ?? new GridOptions(),
-            Solver = solver ?? new SolverOptions(),
+            Numerics = numerics ?? NumericsSettings.Default,
         };
+
+    /// <summary>
+    /// A fixed mesh of 240 shared cells at step tolerance 1e-6, for checks tighter than the default accuracy target
+    /// (1e-4 of the largest amount): times derived from the run, and amounts held to 1e-4 of themselves.
+    /// </summary>
+    public static NumericsSettings FixedFineMesh { get; } = NumericsSettings.FixedCells(240, 1e-6);
 
     public static ClosedFace Closed => new();
 

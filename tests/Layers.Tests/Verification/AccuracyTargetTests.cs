@@ -21,14 +21,12 @@ public sealed class AccuracyTargetTests
         const double thickness = 50e-6, diffusivity = 4e-14, c0 = 920, alpha = 1;
         var scale = thickness * thickness / diffusivity;
         double[] reports = [0.01 * scale, 0.05 * scale, 0.2 * scale, 0.5 * scale];
-        var (grid, solver) = AccuracyTarget.Settings(accuracy);
         var simulation = Cases.Make(
             Cases.Closed,
             new CompartmentFace("solution", alpha * thickness, 1, 1, 0, null),
             reports[^1],
             reports,
-            grid,
-            solver,
+            NumericsSettings.ForAccuracy(accuracy),
             Cases.Layer("sheet", thickness, diffusivity, 1, c0));
 
         var result = Simulator.Run(simulation);

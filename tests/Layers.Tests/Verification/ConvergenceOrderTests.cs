@@ -26,8 +26,7 @@ public sealed class ConvergenceOrderTests
                 Cases.Closed,
                 Cases.Closed,
                 time,
-                grid: new GridOptions { TotalCells = 2 * cells, MinimumCellsPerLayer = cells, GradingRatio = 1 },
-                solver: new SolverOptions { RelativeTolerance = 1e-10 },
+                numerics: new NumericsSettings(new CellCountMesh(2 * cells) { MinimumCellsPerLayer = cells, GradingRatio = 1 }, new SolverOptions { RelativeTolerance = 1e-10 }),
                 layers: [Cases.Layer("first", thickness, d1, k, c0), Cases.Layer("second", thickness, d2)]);
             var result = Simulator.Run(simulation);
             return Math.Abs(result.Reports[^1].Sample.LayerMassPerArea[1] - expected);
@@ -45,9 +44,9 @@ public sealed class ConvergenceOrderTests
             Cases.Closed,
             Cases.Compartment(50e-6, k: 0.5),
             1,
-            grid: new GridOptions { TotalCells = 40 },
+            numerics: NumericsSettings.FixedCells(40, 1e-6),
             layers: Cases.Layer("sheet", 50e-6, 1e-13, c0: 100));
-        var grid = GridBuilder.Build(simulation.Stack, simulation.Grid);
+        var grid = GridBuilder.Build(simulation);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
         const double end = 2000;
         var reference = Integrate(system, initial, end, 4096);

@@ -50,7 +50,7 @@ public sealed class LimitedVolumeTests
     public void Times_to_half_and_ninety_percent_of_equilibrium_match_the_series(double alpha)
     {
         var volumePerArea = alpha * Thickness;
-        var simulation = Cases_(volumePerArea, 1, 2 * Thickness * Thickness / Diffusivity);
+        var simulation = Cases_(volumePerArea, 1, 2 * Thickness * Thickness / Diffusivity) with { Numerics = TestSupport.Cases.FixedFineMesh };
 
         var result = Simulator.Run(simulation);
 

@@ -1,4 +1,5 @@
 using Layers.Core.Analytics;
+using Layers.Core.Domain;
 using Layers.Core.Simulation;
 using Layers.Tests.TestSupport;
 
@@ -54,8 +55,7 @@ public sealed class MembraneLagTests
         // earliest report, holds the cumulative amount of Crank eq. 4.24a to the target relative to the largest amount.
         var scale = Thickness * Thickness / Diffusivity;
         double[] reports = [0.1 * scale, 0.3 * scale, scale, 3 * scale];
-        var (grid, solver) = AccuracyTarget.Settings(accuracy);
-        var result = Simulator.Run(Membrane(reports[^1]) with { ReportTimesSeconds = reports, Grid = grid, Solver = solver });
+        var result = Simulator.Run(Membrane(reports[^1]) with { ReportTimesSeconds = reports, Numerics = NumericsSettings.ForAccuracy(accuracy) });
 
         var expected = reports.Select(time => MembraneTimeLag.CumulativeMassPerArea(Diffusivity, Thickness, MembraneOverDonor, Donor, time)).ToArray();
         for (var i = 0; i < reports.Length; i++)
@@ -72,5 +72,6 @@ public sealed class MembraneLagTests
             Cases.Bath(Donor),
             Cases.Bath(0),
             time,
+            numerics: Cases.FixedFineMesh,
             layers: Cases.Layer("membrane", Thickness, Diffusivity, MembraneOverDonor));
 }

@@ -26,6 +26,7 @@ public sealed class SemiInfiniteMediaTests
             Cases.Closed,
             Cases.Closed,
             time,
+            numerics: Cases.FixedFineMesh,
             layers: [Cases.Layer("first", thickness1, d1, k1Over2, c0), Cases.Layer("second", thickness2, d2, 1)]);
 
         var result = Simulator.Run(simulation);
