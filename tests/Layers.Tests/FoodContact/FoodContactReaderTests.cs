@@ -123,6 +123,26 @@ public sealed class FoodContactReaderTests
     }
 
     [Fact]
+    public void A_stage_partition_coefficient_written_for_a_name_shared_by_a_layer_and_the_food_applies_to_both()
+    {
+        // The file cannot tell a layer from a face of the same name, so the value is given to both; after reading,
+        // the two are told apart by index and side (common practice, no source: the case format's own rule).
+        var json = CaseJson.With(
+            Film,
+            ("$.right.name", "\"skin\""),
+            ("$.foodContact.stages[1].partitionCoefficients", """{ "skin": 7 }"""));
+
+        var result = CaseJson.Read(json);
+
+        Assert.True(result.IsValid, result.FormatErrors());
+        var stage = result.Case!.FoodContact!.Stages[1];
+        Assert.Equal(7, stage.LayerPartitionOf(1, caseValue: 1));
+        Assert.Equal(1, stage.LayerPartitionOf(0, caseValue: 1));
+        Assert.Equal(7, stage.FacePartitionOf(Side.Right, caseValue: 1));
+        Assert.Equal(1, stage.FacePartitionOf(Side.Left, caseValue: 1));
+    }
+
+    [Fact]
     public void Stage_partition_coefficients_on_the_mass_basis_are_converted_with_the_densities()
     {
         // K_volume = K_mass x rho_medium / rho_reference (the definition of the two bases; docs/case-format.md).
