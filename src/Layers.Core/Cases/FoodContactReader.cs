@@ -30,7 +30,7 @@ internal static class FoodContactReader
     {
         public string? Food { get; set; }
 
-        public List<(TemperatureStage Stage, string Path, Dictionary<string, string> OverridePaths)> Stages { get; } = [];
+        public List<(TemperatureStage Stage, string Path, Dictionary<string, string> OverridePaths, Dictionary<string, double> Diffusivities)> Stages { get; } = [];
 
         /// <summary>Per stage (same order as <see cref="Stages"/>), the partition coefficients as written, with their paths.</summary>
         public List<Dictionary<string, (double Written, string Path)>> StagePartitions { get; } = [];
@@ -108,7 +108,7 @@ internal static class FoodContactReader
             context.Errors.Add(new CaseError(entry.Path, $"no layer is named '{name}'; the layers are {known}"));
         }
 
-        foreach (var (_, _, overrides) in input.Stages)
+        foreach (var (_, _, overrides, _) in input.Stages)
         {
             foreach (var (name, path) in overrides.Where(pair => !names.Contains(pair.Key)))
             {
@@ -125,17 +125,23 @@ internal static class FoodContactReader
             return (null, layers);
         }
 
-        var sources = convention.ToDictionary(
-            layer => layer.Name,
+        var sources = convention.Select(
             layer => input.Layers.TryGetValue(layer.Name, out var entry) && entry.Source is { } estimated
                 ? estimated
                 : input.Layers.TryGetValue(layer.Name, out var arrhenius) && arrhenius.Arrhenius is { } given
                     ? given with { ReferenceDiffusivity = layer.DiffusivitySquareMetersPerSecond, Origin = layer.DiffusivityOrigin }
-                    : (DiffusivitySource)new GivenDiffusivity(layer.DiffusivitySquareMetersPerSecond) { Origin = layer.DiffusivityOrigin },
-            StringComparer.Ordinal);
-        var stages = input.Stages.Select((entry, index) => entry.Stage with { PartitionOverrides = partitions[index] }).ToArray();
+                    : (DiffusivitySource)new GivenDiffusivity(layer.DiffusivitySquareMetersPerSecond) { Origin = layer.DiffusivityOrigin })
+            .ToArray();
+
+        // Names are turned into layer indices and face sides here, once; everything after reads the typed keys.
+        var stages = input.Stages.Select((entry, index) => entry.Stage with
+        {
+            DiffusivityOverrides = entry.Diffusivities.ToDictionary(pair => IndexOf(convention, pair.Key), pair => pair.Value),
+            LayerPartitionOverrides = partitions[index].Layers,
+            FacePartitionOverrides = partitions[index].Faces,
+        }).ToArray();
         var placed = convention
-            .Select(layer => layer with { DiffusivitySquareMetersPerSecond = stages[0].DiffusivityOf(layer.Name, sources[layer.Name]).Value })
+            .Select((layer, index) => layer with { DiffusivitySquareMetersPerSecond = stages[0].DiffusivityOf(index, sources[index]).Value })
             .ToList();
         return (new FoodContactSettings
         {
@@ -226,7 +232,7 @@ internal static class FoodContactReader
             var partitions = ReadStagePartitions(stage, context);
             if (duration is { } d && temperature is { } t)
             {
-                input.Stages.Add((new TemperatureStage(name, d, t) { DiffusivityOverrides = overrides }, path, paths));
+                input.Stages.Add((new TemperatureStage(name, d, t), path, paths, overrides));
                 input.StagePartitions.Add(partitions);
             }
         }
@@ -266,7 +272,13 @@ internal static class FoodContactReader
     /// The stages' partition coefficients on the volume basis, checked against the layer and face names; a stage
     /// cannot change K while a partition convention sets it.
     /// </summary>
-    private static List<Dictionary<string, double>> StagePartitions(
+    private static int IndexOf(List<Layer> layers, string name) => layers.FindIndex(layer => string.Equals(layer.Name, name, StringComparison.Ordinal));
+
+    /// <summary>
+    /// Per stage, the partition coefficients it gives, by layer index and by face side. A name shared by a layer
+    /// and a face gives its value to both, as the file cannot tell them apart.
+    /// </summary>
+    private static List<(Dictionary<int, double> Layers, Dictionary<Side, double> Faces)> StagePartitions(
         Input input, List<Layer> layers, FaceCondition? left, FaceCondition? right, ReadContext context)
     {
         var media = layers.Select(layer => (layer.Name, layer.DensityKgPerCubicMeter))
@@ -274,7 +286,7 @@ internal static class FoodContactReader
             .GroupBy(medium => medium.Item1, StringComparer.Ordinal)
             .ToDictionary(group => group.Key, group => group.First().Item2, StringComparer.Ordinal);
         var known = string.Join(", ", media.Keys.Select(name => $"'{name}'"));
-        var result = new List<Dictionary<string, double>>();
+        var result = new List<(Dictionary<int, double> Layers, Dictionary<Side, double> Faces)>();
         foreach (var written in input.StagePartitions)
         {
             var stage = new Dictionary<string, double>(StringComparer.Ordinal);
@@ -302,7 +314,11 @@ internal static class FoodContactReader
                 }
             }
 
-            result.Add(stage);
+            result.Add((
+                stage.SelectMany(pair => Enumerable.Range(0, layers.Count).Where(index => layers[index].Name == pair.Key).Select(index => (index, pair.Value)))
+                    .ToDictionary(entry => entry.index, entry => entry.Value),
+                stage.SelectMany(pair => new[] { (Side.Left, left), (Side.Right, right) }.Where(face => Medium(face.Item2)?.Name == pair.Key).Select(face => (face.Item1, pair.Value)))
+                    .ToDictionary(entry => entry.Item1, entry => entry.Value)));
         }
 
         return result;

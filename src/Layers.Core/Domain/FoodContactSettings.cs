@@ -17,8 +17,8 @@ public sealed record FoodContactSettings
     /// <summary>The stages, in order; the case's duration is their sum.</summary>
     public required IReadOnlyList<TemperatureStage> Stages { get; init; }
 
-    /// <summary>Where each layer's D comes from, by layer name (every layer has an entry).</summary>
-    public required IReadOnlyDictionary<string, DiffusivitySource> Diffusivities { get; init; }
+    /// <summary>Where each layer's D comes from, by layer index in the stack (one entry per layer).</summary>
+    public required IReadOnlyList<DiffusivitySource> Diffusivities { get; init; }
 
     /// <summary>The face whose compartment is the food.</summary>
     public required Side FoodSide { get; init; }

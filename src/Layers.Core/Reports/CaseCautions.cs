@@ -44,10 +44,9 @@ public static class CaseCautions
         var notes = new List<string>(EstimateNotes.For(simulation));
         if (simulation.FoodContact is { } food)
         {
-            foreach (var layer in simulation.Stack.Layers)
+            foreach (var (layer, source) in simulation.Stack.Layers.Zip(food.Diffusivities))
             {
-                if (food.Diffusivities.TryGetValue(layer.Name, out var source)
-                    && source is EstimatedDiffusivity { Polymer.Verified: false } estimated)
+                if (source is EstimatedDiffusivity { Polymer.Verified: false } estimated)
                 {
                     notes.Add($"note: {layer.Name}: D is an upper-bound estimate for {estimated.Polymer.Name} from polymer constants that are UNVERIFIED, from memory ({estimated.Polymer.Source})");
                 }

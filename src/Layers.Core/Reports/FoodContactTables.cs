@@ -41,22 +41,27 @@ public static class FoodContactTables
         var rows = new List<IReadOnlyList<string>>();
         foreach (var stage in settings.Stages)
         {
-            foreach (var layer in simulation.Stack.Layers)
+            foreach (var (layer, index) in simulation.Stack.Layers.Select((layer, index) => (layer, index)))
             {
-                var (value, origin) = stage.DiffusivityOf(layer.Name, settings.Diffusivities[layer.Name]);
+                var (value, origin) = stage.DiffusivityOf(index, settings.Diffusivities[index]);
                 rows.Add([$"{stage.Name}, {format.Time(stage.DurationSeconds)} at {Celsius(stage.TemperatureKelvin)}", layer.Name, DisplayFormat.Number(value * 1e4), origin]);
             }
         }
 
         var tables = new List<TextTable> { new("Diffusion coefficients by stage", ["stage", "layer", "D [cm2/s]", "where it comes from"], rows) };
-        if (settings.Stages.Any(stage => stage.PartitionOverrides.Count > 0))
+        if (settings.Stages.Any(stage => stage.HasPartitionOverrides))
         {
             var food = (CompartmentFace)simulation.Face(settings.FoodSide);
-            var media = simulation.Stack.Layers.Select(layer => (layer.Name, layer.PartitionCoefficient)).Append((food.Name, food.PartitionCoefficient)).ToArray();
+            var layers = simulation.Stack.Layers;
             var partitions = settings.Stages
-                .Select(stage => (IReadOnlyList<string>)[stage.Name, .. media.Select(medium => DisplayFormat.Number(stage.PartitionOf(medium.Name, medium.PartitionCoefficient)))])
+                .Select(stage => (IReadOnlyList<string>)
+                [
+                    stage.Name,
+                    .. layers.Select((layer, index) => DisplayFormat.Number(stage.LayerPartitionOf(index, layer.PartitionCoefficient))),
+                    DisplayFormat.Number(stage.FacePartitionOf(settings.FoodSide, food.PartitionCoefficient)),
+                ])
                 .ToList();
-            tables.Add(new TextTable("Partition coefficients by stage (volume basis)", ["stage", .. media.Select(medium => medium.Name)], partitions));
+            tables.Add(new TextTable("Partition coefficients by stage (volume basis)", ["stage", .. layers.Select(layer => layer.Name), food.Name], partitions));
         }
 
         return tables;

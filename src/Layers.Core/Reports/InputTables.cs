@@ -15,7 +15,7 @@ public static class InputTables
     {
         var format = new DisplayFormat(simulation.Display);
         var depth = simulation.Display.Depth.Symbol;
-        var rows = simulation.Stack.Layers.Select(layer => (IReadOnlyList<string>)
+        var rows = simulation.Stack.Layers.Select((layer, index) => (IReadOnlyList<string>)
         [
             layer.Name,
             DisplayFormat.Number(simulation.Display.Depth.FromSi(layer.ThicknessMeters)),
@@ -24,7 +24,7 @@ public static class InputTables
             DisplayFormat.Number(simulation.Display.Concentration.FromSi(layer.InitialConcentrationKgPerCubicMeter)),
             format.Time(layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond),
             DisplayFormat.Number(UnitTable.Get("cm/h").FromSi(1 / layer.ResistanceSecondsPerMeter)),
-            OriginOf(simulation, layer),
+            OriginOf(simulation, index),
         ]).ToArray();
         return new TextTable(
             $"Layers, left to right (K relative to {simulation.ReferenceMedium}, volume basis)",
@@ -37,12 +37,12 @@ public static class InputTables
     /// the details are in the notes and the food-contact tables), else what the case says: <c>given</c>,
     /// <c>measured</c> or <c>fitted</c>.
     /// </summary>
-    public static string OriginOf(SimulationCase simulation, Layer layer)
+    public static string OriginOf(SimulationCase simulation, int layerIndex)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        ArgumentNullException.ThrowIfNull(layer);
+        var layer = simulation.Stack.Layers[layerIndex];
         var estimated = layer.Estimate is not null
-            || simulation.FoodContact?.Diffusivities.GetValueOrDefault(layer.Name) is EstimatedDiffusivity;
+            || simulation.FoodContact?.Diffusivities[layerIndex] is EstimatedDiffusivity;
         return estimated ? "estimated" : layer.DiffusivityOrigin;
     }
 

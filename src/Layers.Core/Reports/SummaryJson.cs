@@ -73,7 +73,7 @@ public static class SummaryJson
             json.WriteString("name", layer.Name);
             json.WriteNumber("thicknessMeters", layer.ThicknessMeters);
             json.WriteNumber("diffusionCoefficientSquareMetersPerSecond", layer.DiffusivitySquareMetersPerSecond);
-            json.WriteString("diffusionCoefficientOrigin", InputTables.OriginOf(result.Case, layer));
+            json.WriteString("diffusionCoefficientOrigin", InputTables.OriginOf(result.Case, i));
             json.WriteNumber("partitionCoefficientVolumeBasis", layer.PartitionCoefficient);
             json.WriteNumber("initialConcentrationKgPerCubicMeter", layer.InitialConcentrationKgPerCubicMeter);
             WriteNullable(json, "solubilityKgPerCubicMeter", layer.SolubilityKgPerCubicMeter);

@@ -71,13 +71,13 @@ internal static class SummaryJsonFoodContact
     {
         var sources = result.Case.FoodContact!.Diffusivities;
         json.WriteStartArray("diffusionSources");
-        foreach (var (layer, origin) in food.DiffusivityOrigins)
+        foreach (var ((layer, origin), source) in food.DiffusivityOrigins.Zip(sources))
         {
             json.WriteStartObject();
             json.WriteString("layer", layer);
-            json.WriteString("kind", sources[layer].KindName);
+            json.WriteString("kind", source.KindName);
             json.WriteString("description", origin);
-            if (sources[layer] is EstimatedDiffusivity estimated)
+            if (source is EstimatedDiffusivity estimated)
             {
                 json.WriteBoolean("constantsVerified", estimated.Polymer.Verified);
             }

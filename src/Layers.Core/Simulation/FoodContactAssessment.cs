@@ -47,7 +47,7 @@ internal static class FoodContactAssessment
             AreaPerFoodMassSquareMetersPerKilogram = food.ContactAreaSquareMeters / (food.VolumeCubicMeters * density),
             Stages = StageReports(simulation, settings, watcher),
             DiffusivityOrigins = simulation.Stack.Layers
-                .Select(layer => (layer.Name, Origin(layer.Name, settings)))
+                .Select((layer, index) => (layer.Name, Origin(index, settings)))
                 .ToArray(),
             FinalConcentration = final,
             FinalMigrationPerArea = (final - (food.InitialConcentrationKgPerCubicMeter / density)) * foodMassPerArea,
@@ -183,16 +183,16 @@ internal static class FoodContactAssessment
         {
             var stage = settings.Stages[index];
             var values = simulation.Stack.Layers
-                .Select(layer =>
+                .Select((layer, layerIndex) =>
                 {
-                    var (value, origin) = stage.DiffusivityOf(layer.Name, settings.Diffusivities[layer.Name]);
+                    var (value, origin) = stage.DiffusivityOf(layerIndex, settings.Diffusivities[layerIndex]);
                     return (layer.Name, value, origin);
                 })
                 .ToArray();
             var food = (CompartmentFace)simulation.Face(settings.FoodSide);
             var partitions = simulation.Stack.Layers
-                .Select(layer => (layer.Name, stage.PartitionOf(layer.Name, layer.PartitionCoefficient)))
-                .Append((food.Name, stage.PartitionOf(food.Name, food.PartitionCoefficient)))
+                .Select((layer, layerIndex) => (layer.Name, stage.LayerPartitionOf(layerIndex, layer.PartitionCoefficient)))
+                .Append((food.Name, stage.FacePartitionOf(settings.FoodSide, food.PartitionCoefficient)))
                 .ToArray();
             reports.Add(new StageReport(stage.Name, start, start + stage.DurationSeconds, stage.TemperatureKelvin, values, watcher.StageEndValues[index])
             {
@@ -204,7 +204,7 @@ internal static class FoodContactAssessment
         return reports;
     }
 
-    private static string Origin(string layer, FoodContactSettings settings)
+    private static string Origin(int layer, FoodContactSettings settings)
     {
         var origin = settings.Diffusivities[layer].Describe();
         var overridden = settings.Stages.Where(stage => stage.DiffusivityOverrides.ContainsKey(layer)).Select(stage => stage.Name).ToArray();
@@ -230,7 +230,7 @@ internal static class FoodContactAssessment
             var layer = layers[index];
             foreach (var stage in settings.Stages)
             {
-                var diffusivity = stage.DiffusivityOf(layer.Name, settings.Diffusivities[layer.Name]).Value;
+                var diffusivity = stage.DiffusivityOf(index, settings.Diffusivities[index]).Value;
                 lags.Add(new BarrierLag(layer.Name, stage.Name, layer.ThicknessMeters * layer.ThicknessMeters / (6 * diffusivity)));
             }
         }

@@ -42,32 +42,19 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
         SimulationCase simulation,
         Grid grid,
         IReadOnlyList<TemperatureStage> stages,
-        IReadOnlyDictionary<string, DiffusivitySource> sources)
+        IReadOnlyList<DiffusivitySource> sources)
     {
         ArgumentNullException.ThrowIfNull(simulation);
         ArgumentNullException.ThrowIfNull(stages);
         var result = new List<StageSystem>();
         var start = 0.0;
-        var own = stages.Any(stage => stage.PartitionOverrides.Count > 0) ? DiffusionSystemBuilder.Build(simulation, grid).System : null;
+        var own = stages.Any(stage => stage.HasPartitionOverrides) ? DiffusionSystemBuilder.Build(simulation, grid).System : null;
         foreach (var stage in stages)
         {
-            var k = stage.PartitionOverrides;
-            var layers = simulation.Stack.Layers
-                .Select(layer => layer with
-                {
-                    DiffusivitySquareMetersPerSecond = stage.DiffusivityOf(layer.Name, sources[layer.Name]).Value,
-                    PartitionCoefficient = k.GetValueOrDefault(layer.Name, layer.PartitionCoefficient),
-                })
-                .ToArray();
-            var stageCase = simulation with
-            {
-                Stack = new LayerStack(layers),
-                Left = WithPartition(simulation.Left, k),
-                Right = WithPartition(simulation.Right, k),
-            };
+            var stageCase = stage.Apply(simulation, sources);
             var end = start + stage.DurationSeconds;
             var system = DiffusionSystemBuilder.Build(stageCase, grid).System;
-            result.Add(new StageSystem(stageCase, system, start, end) { ToStage = k.Count > 0 ? StorageRatio(own!, system) : null });
+            result.Add(new StageSystem(stageCase, system, start, end) { ToStage = stage.HasPartitionOverrides ? StorageRatio(own!, system) : null });
             start = end;
         }
 
@@ -97,13 +84,6 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
             }
         }
     }
-
-    private static FaceCondition WithPartition(FaceCondition face, IReadOnlyDictionary<string, double> k) => face switch
-    {
-        BathFace bath when k.TryGetValue(bath.Name, out var value) => bath with { PartitionCoefficient = value },
-        CompartmentFace compartment when k.TryGetValue(compartment.Name, out var value) => compartment with { PartitionCoefficient = value },
-        _ => face,
-    };
 
     private static double[] StorageRatio(DiffusionSystem own, DiffusionSystem stage)
     {

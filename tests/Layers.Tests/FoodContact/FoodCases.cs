@@ -38,7 +38,7 @@ internal static class FoodCases
             FoodContact = new FoodContactSettings
             {
                 Stages = stages,
-                Diffusivities = new Dictionary<string, DiffusivitySource> { ["film"] = source },
+                Diffusivities = [source],
                 FoodSide = Side.Right,
                 SpecificMigrationLimit = limit,
                 TestCondition = test,

@@ -50,7 +50,7 @@ public sealed class FunctionalBarrierTests
             FoodContact = new FoodContactSettings
             {
                 Stages = [stage],
-                Diffusivities = new Dictionary<string, DiffusivitySource> { ["core"] = new GivenDiffusivity(1e-13), ["barrier"] = new GivenDiffusivity(1e-17) },
+                Diffusivities = [new GivenDiffusivity(1e-13), new GivenDiffusivity(1e-17)],
                 FoodSide = Side.Right,
             },
         };

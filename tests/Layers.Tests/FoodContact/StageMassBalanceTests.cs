@@ -22,7 +22,7 @@ public sealed class StageMassBalanceTests
         var stages = new[]
         {
             new TemperatureStage("fill", 2 * 3600, 343.15),
-            new TemperatureStage("cold", 5 * Day, 278.15) { DiffusivityOverrides = new Dictionary<string, double> { ["skin"] = 1e-17 } },
+            new TemperatureStage("cold", 5 * Day, 278.15) { DiffusivityOverrides = new Dictionary<int, double> { [2] = 1e-17 } },
             new TemperatureStage("storage", 30 * Day, 298.15),
         };
         var arrhenius = new ArrheniusDiffusivity(1e-13, 298.15, 90e3);
@@ -37,7 +37,7 @@ public sealed class StageMassBalanceTests
             FoodContact = new FoodContactSettings
             {
                 Stages = stages,
-                Diffusivities = new Dictionary<string, DiffusivitySource> { ["outer"] = arrhenius, ["core"] = arrhenius, ["skin"] = arrhenius },
+                Diffusivities = [arrhenius, arrhenius, arrhenius],
                 FoodSide = Side.Right,
             },
         };

@@ -64,7 +64,7 @@ public sealed class StagePartitionTests
         var plain = FoodCases.Film(1, [Stage("first", 3 * Day, 1), Stage("second", 7 * Day, 1)], new GivenDiffusivity(Diffusivity));
         var scaled = FoodCases.Film(
             1,
-            [Stage("first", 3 * Day, 1), Stage("second", 7 * Day, 50) with { PartitionOverrides = new Dictionary<string, double> { ["film"] = 50, ["food"] = 50 } }],
+            [Stage("first", 3 * Day, 1), Stage("second", 7 * Day, 50) with { LayerPartitionOverrides = new Dictionary<int, double> { [0] = 50 }, FacePartitionOverrides = new Dictionary<Side, double> { [Side.Right] = 50 } }],
             new GivenDiffusivity(Diffusivity));
 
         var expected = Simulator.Run(plain).FoodContact!;
@@ -75,5 +75,5 @@ public sealed class StagePartitionTests
     }
 
     private static TemperatureStage Stage(string name, double seconds, double filmK)
-        => new(name, seconds, 298.15) { PartitionOverrides = new Dictionary<string, double> { ["film"] = filmK } };
+        => new(name, seconds, 298.15) { LayerPartitionOverrides = new Dictionary<int, double> { [0] = filmK } };
 }
