@@ -24,6 +24,8 @@ public sealed class DiffusionSystem
         Grid grid,
         double[] capacity,
         double[] conductance,
+        double[] halfCellResistance,
+        double[] partitionCoefficient,
         BathCoupling left,
         BathCoupling right,
         int firstCellNode,
@@ -33,6 +35,8 @@ public sealed class DiffusionSystem
         Grid = grid;
         Capacity = capacity;
         Conductance = conductance;
+        HalfCellResistance = halfCellResistance;
+        PartitionCoefficient = partitionCoefficient;
         LeftBath = left;
         RightBath = right;
         FirstCellNode = firstCellNode;
@@ -46,6 +50,18 @@ public sealed class DiffusionSystem
 
     /// <summary>Conductance between node n and node n+1, m/s. Length = node count - 1.</summary>
     public double[] Conductance { get; }
+
+    /// <summary>
+    /// Resistance from the centre of each cell to either of its faces, s/m, by <see cref="SeriesResistance.HalfCell"/>;
+    /// indexed by cell (not node). The conductances are built from these, and a face value is reconstructed with them.
+    /// </summary>
+    public double[] HalfCellResistance { get; }
+
+    /// <summary>
+    /// Partition coefficient K of the medium of each node (a cell's layer, or a compartment's liquid), by node; the one
+    /// place where the state u = c/K is turned back into a concentration (<see cref="ConcentrationOf"/>).
+    /// </summary>
+    public double[] PartitionCoefficient { get; }
 
     /// <summary>Coupling of the first node to a bath on the left (zero conductance when there is none).</summary>
     public BathCoupling LeftBath { get; }
@@ -95,6 +111,21 @@ public sealed class DiffusionSystem
 
         rates[count - 1] = inflow + RightBath.InflowRate(values[count - 1]);
     }
+
+    /// <summary>Concentration c = K u in the medium of a node for a value u of the continuous variable, kg/m3.</summary>
+    public double ConcentrationOf(int node, double u) => PartitionCoefficient[node] * u;
+
+    /// <summary>
+    /// Conductance from node n towards its left: to node n-1, or to the left bath (zero when there is none) for the
+    /// first node, m/s.
+    /// </summary>
+    public double ConductanceToLeft(int n) => n > 0 ? Conductance[n - 1] : LeftBath.Conductance;
+
+    /// <summary>
+    /// Conductance from node n towards its right: to node n+1, or to the right bath (zero when there is none) for the
+    /// last node, m/s.
+    /// </summary>
+    public double ConductanceToRight(int n) => n < NodeCount - 1 ? Conductance[n] : RightBath.Conductance;
 
     /// <summary>The dissolved u = min(w, saturation) of a node whose state is w.</summary>
     public double Dissolved(int node, double state) => Saturation is { } cap ? Math.Min(state, cap[node]) : state;

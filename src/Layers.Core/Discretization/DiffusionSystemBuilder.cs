@@ -14,6 +14,7 @@ public static class DiffusionSystemBuilder
         var first = hasLeftCompartment ? 1 : 0;
         var nodeCount = grid.CellCount + first + (hasRightCompartment ? 1 : 0);
         var capacity = new double[nodeCount];
+        var partition = new double[nodeCount];
         var initial = new double[nodeCount];
         var halfResistance = new double[grid.CellCount];
         var dispersed = stack.Layers.Any(layer => layer.SolubilityKgPerCubicMeter is not null);
@@ -25,6 +26,7 @@ public static class DiffusionSystemBuilder
             var layer = stack.Layers[grid.LayerOfCell[cell]];
             var width = grid.WidthsMeters[cell];
             capacity[first + cell] = width * layer.PartitionCoefficient;
+            partition[first + cell] = layer.PartitionCoefficient;
             initial[first + cell] = layer.InitialContinuousVariable;
             if (saturation is not null)
             {
@@ -44,6 +46,7 @@ public static class DiffusionSystemBuilder
         if (simulation.Left is CompartmentFace leftCompartment)
         {
             capacity[0] = leftCompartment.VolumePerAreaMeters * leftCompartment.PartitionCoefficient;
+            partition[0] = leftCompartment.PartitionCoefficient;
             initial[0] = leftCompartment.InitialConcentrationKgPerCubicMeter / leftCompartment.PartitionCoefficient;
             conductance[0] = 1 / (halfResistance[0] + FilmResistance(leftCompartment));
         }
@@ -52,13 +55,14 @@ public static class DiffusionSystemBuilder
         {
             var last = nodeCount - 1;
             capacity[last] = rightCompartment.VolumePerAreaMeters * rightCompartment.PartitionCoefficient;
+            partition[last] = rightCompartment.PartitionCoefficient;
             initial[last] = rightCompartment.InitialConcentrationKgPerCubicMeter / rightCompartment.PartitionCoefficient;
             conductance[last - 1] = 1 / (halfResistance[^1] + FilmResistance(rightCompartment));
         }
 
         var leftBath = Coupling(simulation.Left, halfResistance[0], capacity[0]);
         var rightBath = Coupling(simulation.Right, halfResistance[^1], capacity[^1]);
-        return (new DiffusionSystem(grid, capacity, conductance, leftBath, rightBath, first, saturation), initial);
+        return (new DiffusionSystem(grid, capacity, conductance, halfResistance, partition, leftBath, rightBath, first, saturation), initial);
     }
 
     private static double FilmResistance(CompartmentFace compartment)

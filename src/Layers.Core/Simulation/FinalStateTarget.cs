@@ -168,13 +168,17 @@ internal sealed class FinalStateTarget
         return (k * Steady.ContinuousVariableAtEdge(layer), k * Steady.ContinuousVariableAtEdge(layer + 1));
     }
 
-    /// <summary>Final concentration in a face medium, or null for a closed face, kg/m3.</summary>
-    public double? MediumConcentration(FaceCondition face, Side side)
+    /// <summary>
+    /// Final concentration in a face medium, or null for a closed face, kg/m3; a compartment's through the node map of
+    /// the case's own system, whose u the node values are in.
+    /// </summary>
+    public double? MediumConcentration(DiffusionSystem system, FaceCondition face, Side side)
     {
-        var u = side == Side.Left ? NodeValues[0] : NodeValues[^1];
+        ArgumentNullException.ThrowIfNull(system);
+        var node = side == Side.Left ? 0 : NodeValues.Length - 1;
         return face switch
         {
-            CompartmentFace compartment => compartment.PartitionCoefficient * u,
+            CompartmentFace => system.ConcentrationOf(node, NodeValues[node]),
             BathFace bath => bath.ConcentrationKgPerCubicMeter,
             _ => null,
         };

@@ -139,7 +139,7 @@ internal sealed class Observables
                 var transferred = (_system.Capacity[node] * (state[node] - _initialState[node]))
                     + (_sampling?.RemovedPerArea(side) ?? 0)
                     - bathInflow;
-                return new FaceSample(transferred, compartment.PartitionCoefficient * state[node], CompartmentFraction(side, state));
+                return new FaceSample(transferred, _system.ConcentrationOf(node, state[node]), CompartmentFraction(side, state));
             case BathFace bath:
                 // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
                 return new FaceSample(0 - bathInflow, bath.ConcentrationKgPerCubicMeter, null);

@@ -20,14 +20,7 @@ internal sealed class ProfileBuilder
     {
         _case = simulation;
         _system = system;
-        var grid = system.Grid;
-        _halfResistance = new double[grid.CellCount];
-        for (var cell = 0; cell < grid.CellCount; cell++)
-        {
-            var layer = simulation.Stack.Layers[grid.LayerOfCell[cell]];
-            _halfResistance[cell] = SeriesResistance.HalfCell(
-                grid.WidthsMeters[cell], layer.DiffusivitySquareMetersPerSecond, layer.PartitionCoefficient);
-        }
+        _halfResistance = system.HalfCellResistance;
     }
 
     /// <summary>Profiles of the dissolved concentration (undissolved drug of a dispersed layer is not part of them).</summary>
@@ -45,15 +38,16 @@ internal sealed class ProfileBuilder
             var positions = new double[count + 2];
             var concentrations = new double[count + 2];
             positions[0] = _case.Stack.LeftEdgeMeters(layerIndex);
-            concentrations[0] = layer.PartitionCoefficient * FaceValue(cells, state, first - 1, first);
+            var firstNode = _system.FirstCellNode + first;
+            concentrations[0] = _system.ConcentrationOf(firstNode, FaceValue(cells, state, first - 1, first));
             for (var i = 0; i < count; i++)
             {
                 positions[i + 1] = grid.CentresMeters[first + i];
-                concentrations[i + 1] = layer.PartitionCoefficient * cells[first + i];
+                concentrations[i + 1] = _system.ConcentrationOf(firstNode + i, cells[first + i]);
             }
 
             positions[^1] = positions[0] + layer.ThicknessMeters;
-            concentrations[^1] = layer.PartitionCoefficient * FaceValue(cells, state, first + count - 1, first + count);
+            concentrations[^1] = _system.ConcentrationOf(firstNode + count - 1, FaceValue(cells, state, first + count - 1, first + count));
             profiles.Add(new LayerProfile(layerIndex, layer.Name, positions, concentrations));
         }
 

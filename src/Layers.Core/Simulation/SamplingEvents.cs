@@ -12,9 +12,11 @@ namespace Layers.Core.Simulation;
 internal sealed class SamplingEvents : IStateEvents
 {
     private readonly Sampled?[] _sides = new Sampled?[2];
+    private readonly DiffusionSystem _system;
 
     public SamplingEvents(SimulationCase simulation, DiffusionSystem system)
     {
+        _system = system;
         foreach (var side in new[] { Side.Left, Side.Right })
         {
             if (simulation.Face(side) is CompartmentFace { Sampling: { } sampling } compartment)
@@ -49,7 +51,7 @@ internal sealed class SamplingEvents : IStateEvents
             }
 
             var compartment = sampled.Compartment;
-            var concentration = compartment.PartitionCoefficient * state[sampled.Node];
+            var concentration = _system.ConcentrationOf(sampled.Node, state[sampled.Node]);
             sampled.Taken.Add((timeSeconds, concentration));
             sampled.RemovedPerArea += sampled.Sampling.VolumeCubicMeters * concentration / compartment.ContactAreaSquareMeters;
             state[sampled.Node] *= (compartment.VolumeCubicMeters - sampled.Sampling.VolumeCubicMeters) / compartment.VolumeCubicMeters;

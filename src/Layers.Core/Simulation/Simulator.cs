@@ -113,7 +113,7 @@ public static class Simulator
     {
         var grid = GridBuilder.Build(simulation);
         var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
-        var stages = StageSystem.For(simulation, grid);
+        var stages = simulation.FoodContact is null ? [StageSystem.Whole(simulation, system)] : StageSystem.For(simulation, grid);
         var final = FinalStateTarget.ForStages(simulation, system, stages, massLeftAfterSamplingPerArea);
         var sampling = new SamplingEvents(simulation, system);
         var recorder = new ResultRecorder(simulation, system, initial, final, sampling);

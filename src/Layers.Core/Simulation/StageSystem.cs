@@ -31,10 +31,20 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
         ArgumentNullException.ThrowIfNull(simulation);
         if (simulation.FoodContact is not { } food)
         {
-            return [new StageSystem(simulation, DiffusionSystemBuilder.Build(simulation, grid).System, 0, simulation.DurationSeconds)];
+            return [Whole(simulation, DiffusionSystemBuilder.Build(simulation, grid).System)];
         }
 
         return For(simulation, grid, food.Stages, food.Diffusivities);
+    }
+
+    /// <summary>
+    /// The single stage of a case without a temperature history, on a system already assembled for that case, so that
+    /// a plain run assembles its discrete system once.
+    /// </summary>
+    public static StageSystem Whole(SimulationCase simulation, DiffusionSystem system)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        return new StageSystem(simulation, system, 0, simulation.DurationSeconds);
     }
 
     /// <summary>The stages of a given history (also used for a test condition) on a grid.</summary>

@@ -129,8 +129,8 @@ internal sealed class ImplicitMatrix
     {
         var conductance = system.Conductance;
         var last = system.NodeCount - 1;
-        var toLeft = n > 0 ? conductance[n - 1] : system.LeftBath.Conductance;
-        var toRight = n < last ? conductance[n] : system.RightBath.Conductance;
+        var toLeft = system.ConductanceToLeft(n);
+        var toRight = system.ConductanceToRight(n);
         var lower = n > 0 ? -coefficientSeconds * conductance[n - 1] : 0;
         var upper = n < last ? -coefficientSeconds * conductance[n] : 0;
         return (lower, coefficientSeconds * (toLeft + toRight), upper);

@@ -152,9 +152,7 @@ public sealed class TransientSolver
         var last = _system.NodeCount - 1;
         for (var n = 0; n <= last; n++)
         {
-            var toLeft = n > 0 ? _system.Conductance[n - 1] : _system.LeftBath.Conductance;
-            var toRight = n < last ? _system.Conductance[n] : _system.RightBath.Conductance;
-            var outflow = toLeft + toRight;
+            var outflow = _system.ConductanceToLeft(n) + _system.ConductanceToRight(n);
             if (outflow > 0)
             {
                 fastest = Math.Min(fastest, _system.Capacity[n] / outflow);
