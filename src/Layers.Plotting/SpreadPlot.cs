@@ -23,7 +23,7 @@ public static class SpreadPlot
         ArgumentNullException.ThrowIfNull(outcome);
         ArgumentNullException.ThrowIfNull(options);
         var simulation = outcome.BaseCase;
-        var preferred = simulation.FoodContact?.FoodSide == Side.Left || simulation.Right is ClosedFace ? NamedResult.LeftReceived : NamedResult.RightReceived;
+        var preferred = simulation.FoodContact?.FoodSide == Side.Left || !simulation.Right.IsOpen ? NamedResult.LeftReceived : NamedResult.RightReceived;
         if (outcome.Series.FirstOrDefault(series => series.Result == preferred) is not { } spread)
         {
             return null;

@@ -54,7 +54,7 @@ public static class TransferPlot
         var model = PlotFrame.Create(
             simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options, migration), options);
         model.Axes.Add(time.Axis);
-        var compartments = media.Where(medium => medium.Face is CompartmentFace).ToList();
+        var compartments = media.Where(medium => medium.Face.HasFiniteVolume).ToList();
         var secondScale = compartments.Count == 1 && !compartments[0].Flipped && KeepsWhatItReceives((CompartmentFace)compartments[0].Face);
         var panel = compartments.Count > 0 && !secondScale;
         var massAxis = PlotFrame.Linear(AxisPosition.Left, $"Transferred per contact area ({DisplayText.Unit(massUnit)})");
@@ -225,7 +225,7 @@ public static class TransferPlot
         model.Axes.Add(axis);
         for (var i = 0; i < media.Count; i++)
         {
-            if (media[i].Face is not CompartmentFace)
+            if (!media[i].Face.HasFiniteVolume)
             {
                 continue;
             }

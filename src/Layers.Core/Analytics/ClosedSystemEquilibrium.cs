@@ -20,7 +20,7 @@ public sealed record ClosedSystemEquilibrium(double ContinuousVariable)
     {
         ArgumentNullException.ThrowIfNull(simulation);
         var mass = simulation.Stack.InitialMassPerArea
-            + new[] { simulation.Left, simulation.Right }.OfType<CompartmentFace>().Sum(compartment => compartment.InitialMassPerArea);
+            + new[] { simulation.Left, simulation.Right }.Sum(face => face.InitialMassPerArea);
         return Of(simulation, mass);
     }
 

@@ -392,9 +392,9 @@ internal static class FoodContactReader
         var path = $"{input.Path}.food";
         switch (input.Food)
         {
-            case "left" when left is CompartmentFace:
+            case "left" when left is { HasFiniteVolume: true }:
                 return Side.Left;
-            case "right" when right is CompartmentFace:
+            case "right" when right is { HasFiniteVolume: true }:
                 return Side.Right;
             case "left" or "right":
                 if ((input.Food == "left" ? left : right) is not null)
@@ -403,12 +403,12 @@ internal static class FoodContactReader
                 }
 
                 return null;
-            case null when left is CompartmentFace && right is CompartmentFace:
+            case null when left is { HasFiniteVolume: true } && right is { HasFiniteVolume: true }:
                 context.Errors.Add(new CaseError(path, "is required: both faces are compartments; say which one is the food (\"left\" or \"right\")"));
                 return null;
-            case null when left is CompartmentFace:
+            case null when left is { HasFiniteVolume: true }:
                 return Side.Left;
-            case null when right is CompartmentFace:
+            case null when right is { HasFiniteVolume: true }:
                 return Side.Right;
             case null when left is not null && right is not null:
                 context.Errors.Add(new CaseError(input.Path, "needs the food as a compartment on one face; neither $.left nor $.right is a compartment"));

@@ -20,7 +20,7 @@ internal static class PermeationTestReader
             return null;
         }
 
-        if (right is ClosedFace)
+        if (right is { IsOpen: false })
         {
             context.Errors.Add(new CaseError(
                 test.Path,

@@ -26,6 +26,8 @@ public sealed class DiffusionSystem
         double[] conductance,
         double[] halfCellResistance,
         double[] partitionCoefficient,
+        FaceModel leftFace,
+        FaceModel rightFace,
         BathCoupling left,
         BathCoupling right,
         int firstCellNode,
@@ -37,6 +39,8 @@ public sealed class DiffusionSystem
         Conductance = conductance;
         HalfCellResistance = halfCellResistance;
         PartitionCoefficient = partitionCoefficient;
+        Left = leftFace;
+        Right = rightFace;
         LeftBath = left;
         RightBath = right;
         FirstCellNode = firstCellNode;
@@ -63,6 +67,15 @@ public sealed class DiffusionSystem
     /// </summary>
     public double[] PartitionCoefficient { get; }
 
+    /// <summary>The model of the left face: whether it adds a node, its links, its face-value reconstruction.</summary>
+    public FaceModel Left { get; }
+
+    /// <summary>The model of the right face: whether it adds a node, its links, its face-value reconstruction.</summary>
+    public FaceModel Right { get; }
+
+    /// <summary>The model of the face on a side.</summary>
+    public FaceModel Face(Side side) => side == Side.Left ? Left : Right;
+
     /// <summary>Coupling of the first node to a bath on the left (zero conductance when there is none).</summary>
     public BathCoupling LeftBath { get; }
 
@@ -81,10 +94,10 @@ public sealed class DiffusionSystem
     /// <summary>Number of unknowns.</summary>
     public int NodeCount => Capacity.Length;
 
-    /// <summary>Node index of the compartment on a side, or -1 when that side has none.</summary>
-    public int CompartmentNode(Side side, SimulationCase simulation)
+    /// <summary>Node index of the node a face adds on a side (a compartment), or -1 when that side adds none.</summary>
+    public int CompartmentNode(Side side)
     {
-        if (simulation.Face(side) is not CompartmentFace)
+        if (!Face(side).AddsNode)
         {
             return -1;
         }

@@ -2,17 +2,20 @@ using Layers.Core.Domain;
 
 namespace Layers.Core.Discretization;
 
-/// <summary>Assembles a <see cref="DiffusionSystem"/> from a case and its mesh.</summary>
+/// <summary>
+/// Assembles a <see cref="DiffusionSystem"/> from a case and its mesh: the cells of the stack, and at each end what
+/// the face's <see cref="FaceModel"/> adds (a node, its links); no kind of face is named here.
+/// </summary>
 public static class DiffusionSystemBuilder
 {
     /// <summary>Assembles the system and returns it with the initial state u(0).</summary>
     public static (DiffusionSystem System, double[] InitialState) Build(SimulationCase simulation, Grid grid)
     {
         var stack = simulation.Stack;
-        var hasLeftCompartment = simulation.Left is CompartmentFace;
-        var hasRightCompartment = simulation.Right is CompartmentFace;
-        var first = hasLeftCompartment ? 1 : 0;
-        var nodeCount = grid.CellCount + first + (hasRightCompartment ? 1 : 0);
+        var left = FaceModel.For(simulation.Left);
+        var right = FaceModel.For(simulation.Right);
+        var first = left.AddsNode ? 1 : 0;
+        var nodeCount = grid.CellCount + first + (right.AddsNode ? 1 : 0);
         var capacity = new double[nodeCount];
         var partition = new double[nodeCount];
         var initial = new double[nodeCount];
@@ -43,47 +46,27 @@ public static class DiffusionSystemBuilder
             conductance[first + cell] = 1 / (halfResistance[cell] + halfResistance[cell + 1]);
         }
 
-        if (simulation.Left is CompartmentFace leftCompartment)
+        // A face that adds a node puts its storage, K and initial u there, linked to the end cell.
+        if (left.AddsNode)
         {
-            capacity[0] = leftCompartment.VolumePerAreaMeters * leftCompartment.PartitionCoefficient;
-            partition[0] = leftCompartment.PartitionCoefficient;
-            initial[0] = leftCompartment.InitialConcentrationKgPerCubicMeter / leftCompartment.PartitionCoefficient;
-            conductance[0] = 1 / (halfResistance[0] + FilmResistance(leftCompartment));
+            capacity[0] = left.NodeCapacity;
+            partition[0] = left.NodePartitionCoefficient;
+            initial[0] = left.NodeInitialValue;
+            conductance[0] = left.NodeConductance(halfResistance[0]);
         }
 
-        if (simulation.Right is CompartmentFace rightCompartment)
+        if (right.AddsNode)
         {
             var last = nodeCount - 1;
-            capacity[last] = rightCompartment.VolumePerAreaMeters * rightCompartment.PartitionCoefficient;
-            partition[last] = rightCompartment.PartitionCoefficient;
-            initial[last] = rightCompartment.InitialConcentrationKgPerCubicMeter / rightCompartment.PartitionCoefficient;
-            conductance[last - 1] = 1 / (halfResistance[^1] + FilmResistance(rightCompartment));
+            capacity[last] = right.NodeCapacity;
+            partition[last] = right.NodePartitionCoefficient;
+            initial[last] = right.NodeInitialValue;
+            conductance[last - 1] = right.NodeConductance(halfResistance[^1]);
         }
 
-        var leftBath = Coupling(simulation.Left, halfResistance[0], capacity[0]);
-        var rightBath = Coupling(simulation.Right, halfResistance[^1], capacity[^1]);
-        return (new DiffusionSystem(grid, capacity, conductance, halfResistance, partition, leftBath, rightBath, first, saturation), initial);
-    }
-
-    private static double FilmResistance(CompartmentFace compartment)
-        => SeriesResistance.Film(compartment.FilmCoefficientMetersPerSecond, compartment.PartitionCoefficient);
-
-    private static BathCoupling Coupling(FaceCondition face, double halfCellResistance, double endCapacity)
-    {
-        // First-order removal from a compartment, k V c per area and time = k (V/A) K u, is a link of conductance
-        // k (V/A) K from the compartment node to a bath at u = 0: the loss sits on the diagonal, the system stays
-        // tridiagonal, and the removed mass is counted by the bath quadrature, so the balance closes to round-off.
-        if (face is CompartmentFace { RemovalRatePerSecond: > 0 } removing)
-        {
-            return new BathCoupling(removing.RemovalRatePerSecond * endCapacity, 0);
-        }
-
-        if (face is not BathFace bath)
-        {
-            return BathCoupling.None;
-        }
-
-        var film = SeriesResistance.Film(bath.FilmCoefficientMetersPerSecond, bath.PartitionCoefficient);
-        return new BathCoupling(1 / (halfCellResistance + film), bath.ContinuousVariable);
+        var system = new DiffusionSystem(
+            grid, capacity, conductance, halfResistance, partition, left, right,
+            left.OuterCoupling(halfResistance[0]), right.OuterCoupling(halfResistance[^1]), first, saturation);
+        return (system, initial);
     }
 }

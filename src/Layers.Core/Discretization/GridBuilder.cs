@@ -28,8 +28,8 @@ public static class GridBuilder
     private static Grid Build(SimulationCase simulation, DiffusionLengthMesh mesh)
     {
         var stack = simulation.Stack;
-        var leftOpen = simulation.Left is not ClosedFace;
-        var rightOpen = simulation.Right is not ClosedFace;
+        var leftOpen = simulation.Left.IsOpen;
+        var rightOpen = simulation.Right.IsOpen;
         var earliestReport = simulation.ReportTimesSeconds.Where(time => time > 0).DefaultIfEmpty(simulation.DurationSeconds).Min();
         var earliest = DiffusionLengthCells.EarliestResolvedPerReportTime * earliestReport;
         var shares = DiffusionLengthCells.Shares(stack, leftOpen, rightOpen, simulation.DurationSeconds);

@@ -2,8 +2,8 @@ namespace Layers.Core.Domain;
 
 /// <summary>
 /// What touches one face of the stack. A closed set of kinds: <see cref="ClosedFace"/>, <see cref="BathFace"/>
-/// and <see cref="CompartmentFace"/>. How each kind enters the discrete equations is in
-/// <see cref="Discretization.DiffusionSystemBuilder"/>.
+/// and <see cref="CompartmentFace"/>. How each kind enters the discrete equations is in its face model
+/// (Discretization.FaceModel). Code that only asks what a face does reads the questions below rather than its kind.
 /// </summary>
 public abstract record FaceCondition
 {
@@ -13,6 +13,18 @@ public abstract record FaceCondition
 
     /// <summary>Short name of the kind, as written in case files.</summary>
     public abstract string KindName { get; }
+
+    /// <summary>Whether substance can cross the face (a medium touches it), so that it has a received amount.</summary>
+    public abstract bool IsOpen { get; }
+
+    /// <summary>Whether the medium beyond the face is unlimited and held at a fixed concentration.</summary>
+    public abstract bool IsUnlimited { get; }
+
+    /// <summary>Whether the medium beyond the face is finite and well mixed, its concentration changing with what it receives.</summary>
+    public abstract bool HasFiniteVolume { get; }
+
+    /// <summary>Initial mass per unit contact area in a finite medium, kg/m2; 0 when the face holds none.</summary>
+    public virtual double InitialMassPerArea => 0;
 }
 
 /// <summary>No flux through the face: an outer film surface, a patch backing, a symmetry plane.</summary>
@@ -20,6 +32,15 @@ public sealed record ClosedFace : FaceCondition
 {
     /// <inheritdoc />
     public override string KindName => "closed";
+
+    /// <inheritdoc />
+    public override bool IsOpen => false;
+
+    /// <inheritdoc />
+    public override bool IsUnlimited => false;
+
+    /// <inheritdoc />
+    public override bool HasFiniteVolume => false;
 }
 
 /// <summary>
@@ -38,6 +59,15 @@ public sealed record BathFace(
 {
     /// <inheritdoc />
     public override string KindName => "bath";
+
+    /// <inheritdoc />
+    public override bool IsOpen => true;
+
+    /// <inheritdoc />
+    public override bool IsUnlimited => true;
+
+    /// <inheritdoc />
+    public override bool HasFiniteVolume => false;
 
     /// <summary>The bath's value of the interface-continuous variable, u = c / K.</summary>
     public double ContinuousVariable => ConcentrationKgPerCubicMeter / PartitionCoefficient;
@@ -66,11 +96,20 @@ public sealed record CompartmentFace(
     /// <inheritdoc />
     public override string KindName => "compartment";
 
+    /// <inheritdoc />
+    public override bool IsOpen => true;
+
+    /// <inheritdoc />
+    public override bool IsUnlimited => false;
+
+    /// <inheritdoc />
+    public override bool HasFiniteVolume => true;
+
     /// <summary>Volume per unit contact area, m: the compartment's depth if it were a slab over the contact area.</summary>
     public double VolumePerAreaMeters => VolumeCubicMeters / ContactAreaSquareMeters;
 
     /// <summary>Initial mass per unit contact area, kg/m2.</summary>
-    public double InitialMassPerArea => InitialConcentrationKgPerCubicMeter * VolumePerAreaMeters;
+    public override double InitialMassPerArea => InitialConcentrationKgPerCubicMeter * VolumePerAreaMeters;
 
     /// <summary>Sampling with replacement by fresh medium, or null for an unsampled compartment.</summary>
     public ReceptorSampling? Sampling { get; init; }

@@ -51,5 +51,5 @@ public sealed record SimulationCase
     public FaceCondition Face(Side side) => side == Side.Left ? Left : Right;
 
     /// <summary>True when no mass can enter or leave: no face is a bath.</summary>
-    public bool IsClosed => Left is not BathFace && Right is not BathFace;
+    public bool IsClosed => !Left.IsUnlimited && !Right.IsUnlimited;
 }

@@ -138,11 +138,11 @@ public static class CaseFitter
         var data = request.Data;
         var side = request.Face == Side.Left ? "left" : "right";
         var medium = simulation.Face(request.Face);
-        if (medium is ClosedFace)
+        if (!medium.IsOpen)
         {
             errors.Add($"{request.CasePath}: $.{side}: the {side} face is closed; the data must be measured in the medium on a face (use --face)");
         }
-        else if (data.Quantity == MeasuredQuantity.Concentration && medium is not CompartmentFace)
+        else if (data.Quantity == MeasuredQuantity.Concentration && !medium.HasFiniteVolume)
         {
             errors.Add($"{request.CasePath}: $.{side}: '{data.FileName}' holds concentrations, which need a compartment on the {side} face; a bath's concentration is fixed");
         }

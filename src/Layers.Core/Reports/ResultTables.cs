@@ -53,7 +53,7 @@ public static class ResultTables
         if (final.MassLeftAfterSamplingPerArea is { } left)
         {
             var initial = simulation.Stack.InitialMassPerArea
-                + new[] { simulation.Left, simulation.Right }.OfType<CompartmentFace>().Sum(compartment => compartment.InitialMassPerArea);
+                + new[] { simulation.Left, simulation.Right }.Sum(face => face.InitialMassPerArea);
             var after = final.LastSampleSeconds is { } last ? $" after the last sample at {format.Time(last)}" : string.Empty;
             Add("mass left in the system" + after, $"{format.MassPerArea(left)} of {format.MassPerArea(initial)} at the start");
         }
@@ -61,7 +61,7 @@ public static class ResultTables
         foreach (var (side, face) in Media(simulation))
         {
             var concentration = side == Side.Left ? final.LeftConcentrationKgPerCubicMeter : final.RightConcentrationKgPerCubicMeter;
-            if (face is CompartmentFace && concentration is { } value)
+            if (face.HasFiniteVolume && concentration is { } value)
             {
                 Add($"{TimeSeriesCsv.FaceName(face)} at the final state", format.MediumConcentration(value, face));
             }
@@ -98,7 +98,7 @@ public static class ResultTables
     {
         foreach (var side in new[] { Side.Left, Side.Right })
         {
-            if (simulation.Face(side) is CompartmentFace or BathFace)
+            if (simulation.Face(side).IsOpen)
             {
                 yield return (side, simulation.Face(side));
             }

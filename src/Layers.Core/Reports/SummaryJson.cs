@@ -99,7 +99,7 @@ public static class SummaryJson
         var face = result.Case.Face(side);
         json.WriteStartObject(key);
         json.WriteString("kind", face.KindName);
-        if (face is CompartmentFace or BathFace)
+        if (face.IsOpen)
         {
             json.WriteString("name", TimeSeriesCsv.FaceName(face));
             FaceSample Pick(StateSample sample) => (side == Side.Left ? sample.Left : sample.Right)!;
@@ -121,8 +121,8 @@ public static class SummaryJson
     {
         json.WriteStartObject("massBalance");
         json.WriteNumber("initialMassPerAreaKgPerSquareMeter", result.TimeSeries[0].LayerMassPerArea.Sum()
-            + (result.Case.Left is CompartmentFace left ? left.InitialMassPerArea : 0)
-            + (result.Case.Right is CompartmentFace right ? right.InitialMassPerArea : 0));
+            + result.Case.Left.InitialMassPerArea
+            + result.Case.Right.InitialMassPerArea);
         json.WriteNumber("worstRelativeError", result.WorstMassBalanceError);
         WriteSeries(json, "relativeErrorAtReportTimes", result, sample => sample.MassBalanceError);
         json.WriteEndObject();

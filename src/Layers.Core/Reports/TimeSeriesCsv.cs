@@ -17,7 +17,7 @@ public static class TimeSeriesCsv
         var header = new List<string> { "time [s]", "fraction of final state [-]" };
         foreach (var side in new[] { Side.Left, Side.Right })
         {
-            if (simulation.Face(side) is CompartmentFace or BathFace)
+            if (simulation.Face(side).IsOpen)
             {
                 var name = FaceName(simulation.Face(side));
                 header.Add($"{name}: transferred into medium [kg/m2]");

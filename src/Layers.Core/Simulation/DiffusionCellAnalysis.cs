@@ -62,7 +62,7 @@ internal static class DiffusionCellAnalysis
         PermeationMetrics? simulated = null;
         PermeationMetrics? measured = null;
         DeliverySummary? delivery = null;
-        if (test is not null && simulation.Right is CompartmentFace or BathFace)
+        if (test is not null && simulation.Right.IsOpen)
         {
             var donor = test.DonorConcentrationKgPerCubicMeter ?? simulation.Left switch
             {
@@ -72,9 +72,9 @@ internal static class DiffusionCellAnalysis
             };
             // What the donor starts with: unlimited behind a bath; else all the drug in the system at the start but
             // what the receiving medium itself holds.
-            double? donorContent = simulation.Left is BathFace
+            double? donorContent = simulation.Left.IsUnlimited
                 ? null
-                : simulation.Stack.InitialMassPerArea + ((simulation.Left as CompartmentFace)?.InitialMassPerArea ?? 0);
+                : simulation.Stack.InitialMassPerArea + simulation.Left.InitialMassPerArea;
             var times = series.Select(sample => sample.TimeSeconds).ToArray();
             var received = series.Select(sample => sample.Right!.TransferredIntoMediumPerArea).ToArray();
             // A matrix loaded above its solubility depletes: its Q(t) has no steady part to fit.

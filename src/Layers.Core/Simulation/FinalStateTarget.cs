@@ -100,7 +100,7 @@ internal sealed class FinalStateTarget
             values[system.FirstCellNode + cell] = steady.ContinuousVariableInLayer(layer, depthInLayer);
         }
 
-        SetRemovingCompartment(original, system, steady, values);
+        SetRemovingCompartment(system, steady, values);
         // With no bath in the case itself, the only "bath" is the removal: it takes everything in the end.
         var kind = original.IsClosed
             ? FinalStateKind.AllRemoved
@@ -142,17 +142,20 @@ internal sealed class FinalStateTarget
         return simulation with { Left = Replace(simulation.Left), Right = Replace(simulation.Right) };
     }
 
-    /// <summary>A removing compartment holds, at steady state, the u whose removal k (V/A) K u equals the flux it receives.</summary>
-    private static void SetRemovingCompartment(SimulationCase simulation, DiffusionSystem system, SteadyStateStack steady, double[] values)
+    /// <summary>
+    /// A removing compartment holds, at steady state, the u whose removal k (V/A) K u equals the flux it receives: the
+    /// removal is the link of the face's added node to a bath at u = 0, of conductance k (V/A) K.
+    /// </summary>
+    private static void SetRemovingCompartment(DiffusionSystem system, SteadyStateStack steady, double[] values)
     {
-        if (simulation.Left is CompartmentFace { RemovalRatePerSecond: > 0 } left)
+        if (system.Left.AddsNode && system.LeftBath.Exists)
         {
-            values[0] = -steady.FluxKgPerSquareMeterSecond / (left.RemovalRatePerSecond * system.Capacity[0]);
+            values[0] = -steady.FluxKgPerSquareMeterSecond / system.LeftBath.Conductance;
         }
 
-        if (simulation.Right is CompartmentFace { RemovalRatePerSecond: > 0 } right)
+        if (system.Right.AddsNode && system.RightBath.Exists)
         {
-            values[^1] = steady.FluxKgPerSquareMeterSecond / (right.RemovalRatePerSecond * system.Capacity[^1]);
+            values[^1] = steady.FluxKgPerSquareMeterSecond / system.RightBath.Conductance;
         }
     }
 

@@ -58,7 +58,7 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
             ? new[] { settings.DetectionLimit, limit }
             : new[] { settings.DetectionLimit };
         return new FoodConcentrationWatcher(
-            system.CompartmentNode(settings.FoodSide, simulation), food.PartitionCoefficient / density, stages, levels, initial.Length);
+            system.CompartmentNode(settings.FoodSide), food.PartitionCoefficient / density, stages, levels, initial.Length);
     }
 
     /// <summary>The food's mass fraction for a state.</summary>

@@ -65,7 +65,7 @@ internal sealed class Observables
 
         foreach (var side in new[] { Side.Left, Side.Right })
         {
-            var node = _system.CompartmentNode(side, _case);
+            var node = _system.CompartmentNode(side);
             if (node >= 0)
             {
                 lowest = Math.Min(lowest, _system.Capacity[node] * state[node]);
@@ -79,7 +79,7 @@ internal sealed class Observables
     /// <summary>Fraction of the way to equilibrium of a compartment's content, or null if it does not change.</summary>
     public double? CompartmentFraction(Side side, ReadOnlySpan<double> state)
     {
-        var node = _system.CompartmentNode(side, _case);
+        var node = _system.CompartmentNode(side);
         if (node < 0)
         {
             return null;
@@ -130,22 +130,19 @@ internal sealed class Observables
 
     private FaceSample? Face(Side side, ReadOnlySpan<double> state, double bathInflow)
     {
-        switch (_case.Face(side))
+        var node = _system.CompartmentNode(side);
+        if (node >= 0)
         {
-            case CompartmentFace compartment:
-                var node = _system.CompartmentNode(side, _case);
-                // What crossed into the compartment: its change of content, plus what samples took out, plus what
-                // first-order removal took out (counted by the removal's bath link, as an inflow of opposite sign).
-                var transferred = (_system.Capacity[node] * (state[node] - _initialState[node]))
-                    + (_sampling?.RemovedPerArea(side) ?? 0)
-                    - bathInflow;
-                return new FaceSample(transferred, _system.ConcentrationOf(node, state[node]), CompartmentFraction(side, state));
-            case BathFace bath:
-                // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
-                return new FaceSample(0 - bathInflow, bath.ConcentrationKgPerCubicMeter, null);
-            default:
-                return null;
+            // What crossed into the compartment: its change of content, plus what samples took out, plus what
+            // first-order removal took out (counted by the removal's bath link, as an inflow of opposite sign).
+            var transferred = (_system.Capacity[node] * (state[node] - _initialState[node]))
+                + (_sampling?.RemovedPerArea(side) ?? 0)
+                - bathInflow;
+            return new FaceSample(transferred, _system.ConcentrationOf(node, state[node]), CompartmentFraction(side, state));
         }
+
+        // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
+        return _case.Face(side) is BathFace bath ? new FaceSample(0 - bathInflow, bath.ConcentrationKgPerCubicMeter, null) : null;
     }
 
     private double DistanceToFinal(ReadOnlySpan<double> state)

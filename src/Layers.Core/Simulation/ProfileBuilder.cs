@@ -8,7 +8,7 @@ namespace Layers.Core.Simulation;
 /// Concentration profiles per layer, with the values on each side of every face reconstructed from flux continuity:
 /// the face value of u is the resistance-weighted mean of its two neighbours, u_f = (u_a/R_a + u_b/R_b)/(1/R_a + 1/R_b),
 /// where R are the half-cell (and film) resistances; each side then reads c = K u_f with its own K, which shows the
-/// partition jump.
+/// partition jump. An outer face's value is reconstructed by its face model (<see cref="FaceModel.FaceValue"/>).
 /// </summary>
 internal sealed class ProfileBuilder
 {
@@ -75,28 +75,16 @@ internal sealed class ProfileBuilder
     {
         if (a < 0)
         {
-            return OuterFaceValue(cells[0], _halfResistance[0], _case.Left, state[0]);
+            return _system.Left.FaceValue(cells[0], _halfResistance[0], state[0]);
         }
 
         if (b >= cells.Length)
         {
-            return OuterFaceValue(cells[^1], _halfResistance[^1], _case.Right, state[^1]);
+            return _system.Right.FaceValue(cells[^1], _halfResistance[^1], state[^1]);
         }
 
         var weightA = 1 / _halfResistance[a];
         var weightB = 1 / _halfResistance[b];
         return ((cells[a] * weightA) + (cells[b] * weightB)) / (weightA + weightB);
-    }
-
-    private static double OuterFaceValue(double cellValue, double halfResistance, FaceCondition face, double endNodeValue)
-    {
-        var (outside, film) = face switch
-        {
-            BathFace bath => (bath.ContinuousVariable, SeriesResistance.Film(bath.FilmCoefficientMetersPerSecond, bath.PartitionCoefficient)),
-            CompartmentFace compartment => (endNodeValue, SeriesResistance.Film(compartment.FilmCoefficientMetersPerSecond, compartment.PartitionCoefficient)),
-            _ => (cellValue, 0.0),
-        };
-        var flux = (outside - cellValue) / (halfResistance + film);
-        return cellValue + (flux * halfResistance);
     }
 }

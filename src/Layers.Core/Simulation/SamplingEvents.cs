@@ -21,7 +21,7 @@ internal sealed class SamplingEvents : IStateEvents
         {
             if (simulation.Face(side) is CompartmentFace { Sampling: { } sampling } compartment)
             {
-                _sides[(int)side] = new Sampled(compartment, sampling, system.CompartmentNode(side, simulation));
+                _sides[(int)side] = new Sampled(compartment, sampling, system.CompartmentNode(side));
             }
         }
 

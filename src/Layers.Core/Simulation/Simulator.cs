@@ -44,7 +44,7 @@ public static class Simulator
             FinalState = recorder.Summary(horizon, sampling.TimesSeconds.Count > 0 ? sampling.TimesSeconds[^1] : null),
             // With first-order removal the receiving "bath" is the removal itself, whose intake is not the amount
             // permeated; the diffusion-cell metrics report that case instead.
-            Permeation = final.Kind == FinalStateKind.SteadyPermeation && simulation.Left is not CompartmentFace && simulation.Right is not CompartmentFace
+            Permeation = final.Kind == FinalStateKind.SteadyPermeation && !simulation.Left.HasFiniteVolume && !simulation.Right.HasFiniteVolume
                 ? new PermeationSummary(
                     final.Steady!.FluxKgPerSquareMeterSecond,
                     recorder.FluxAtEnd,

@@ -66,17 +66,17 @@ public sealed record ResultMeasure(NamedResult Kind, double? AtSeconds = null, s
 
         return Kind switch
         {
-            NamedResult.LeftReceived or NamedResult.LeftConcentration => simulation.Left is ClosedFace
+            NamedResult.LeftReceived or NamedResult.LeftConcentration => !simulation.Left.IsOpen
                 ? $"{Name} needs a medium on the left; the left face is closed"
                 : null,
-            NamedResult.RightReceived or NamedResult.RightConcentration => simulation.Right is ClosedFace
+            NamedResult.RightReceived or NamedResult.RightConcentration => !simulation.Right.IsOpen
                 ? $"{Name} needs a medium on the right; the right face is closed"
                 : null,
             NamedResult.FoodConcentration => simulation.FoodContact is null ? $"{Name} needs $.foodContact" : null,
             NamedResult.TimeToLimit => simulation.FoodContact?.SpecificMigrationLimit is null
                 ? $"{Name} needs $.foodContact.specificMigrationLimit"
                 : null,
-            NamedResult.SteadyFlux or NamedResult.LagTime => simulation.Left is not BathFace || simulation.Right is not BathFace
+            NamedResult.SteadyFlux or NamedResult.LagTime => !simulation.Left.IsUnlimited || !simulation.Right.IsUnlimited
                 ? $"{Name} needs a bath on each face"
                 : null,
             NamedResult.TimeTo90Percent => null,

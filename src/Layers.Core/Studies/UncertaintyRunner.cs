@@ -154,12 +154,12 @@ public static class UncertaintyRunner
     private static List<ResultMeasure[]> SeriesOf(SimulationCase baseCase, IReadOnlyList<double> times)
     {
         var kinds = new List<NamedResult>();
-        if (baseCase.Left is not ClosedFace)
+        if (baseCase.Left.IsOpen)
         {
             kinds.AddRange([NamedResult.LeftReceived, NamedResult.LeftConcentration]);
         }
 
-        if (baseCase.Right is not ClosedFace)
+        if (baseCase.Right.IsOpen)
         {
             kinds.AddRange([NamedResult.RightReceived, NamedResult.RightConcentration]);
         }
