@@ -40,20 +40,19 @@ internal sealed class FinalStateTarget
     /// The final state of a staged run: that of its last stage, whose partition coefficients (and D) hold from the
     /// end of the run on, with the node values in the case's own u = c/K, as observers read states.
     /// </summary>
-    /// <param name="simulation">The case.</param>
-    /// <param name="system">Its assembled system.</param>
+    /// <param name="model">The case's discrete model.</param>
     /// <param name="stages">Its stages.</param>
     /// <param name="massLeftAfterSamplingPerArea">
     /// For a sampled closed system, the mass per area left in it after the last sample, kg/m2, from a run up to it;
     /// null for the equilibrium of the initial mass.
     /// </param>
     public static FinalStateTarget ForStages(
-        SimulationCase simulation, DiffusionSystem system, IReadOnlyList<StageSystem> stages, double? massLeftAfterSamplingPerArea = null)
+        DiscreteModel model, IReadOnlyList<StageSystem> stages, double? massLeftAfterSamplingPerArea = null)
     {
         var last = stages[^1];
         if (last.ToStage is not { } factors)
         {
-            return Of(simulation, system, massLeftAfterSamplingPerArea);
+            return Of(model.Case, model.System, massLeftAfterSamplingPerArea);
         }
 
         var target = Of(last.Case, last.System, massLeftAfterSamplingPerArea);

@@ -49,8 +49,9 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
     public bool WantsMoreTime => false;
 
     /// <summary>Creates the watcher for a case with food-contact settings.</summary>
-    public static FoodConcentrationWatcher For(SimulationCase simulation, DiffusionSystem system, IReadOnlyList<StageSystem> stages, double[] initial)
+    public static FoodConcentrationWatcher For(DiscreteModel model, IReadOnlyList<StageSystem> stages)
     {
+        var simulation = model.Case;
         var settings = simulation.FoodContact!;
         var food = (CompartmentFace)simulation.Face(settings.FoodSide);
         var density = food.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
@@ -58,7 +59,7 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
             ? new[] { settings.DetectionLimit, limit }
             : new[] { settings.DetectionLimit };
         return new FoodConcentrationWatcher(
-            system.CompartmentNode(settings.FoodSide), food.PartitionCoefficient / density, stages, levels, initial.Length);
+            model.System.CompartmentNode(settings.FoodSide), food.PartitionCoefficient / density, stages, levels, model.InitialState.Length);
     }
 
     /// <summary>The food's mass fraction for a state.</summary>

@@ -21,13 +21,13 @@ namespace Layers.Core.Simulation;
 internal static class FoodContactAssessment
 {
     public static FoodContactResult Assess(
-        SimulationCase simulation,
-        Grid grid,
+        DiscreteModel model,
         IReadOnlyList<StageSystem> stages,
-        double[] initial,
         FoodConcentrationWatcher watcher,
         CancellationToken cancellation)
     {
+        ArgumentNullException.ThrowIfNull(model);
+        var (simulation, grid, initial) = (model.Case, model.Grid, model.InitialState);
         var settings = simulation.FoodContact!;
         var food = (CompartmentFace)simulation.Face(settings.FoodSide);
         var density = food.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;

@@ -18,15 +18,12 @@ internal sealed class Observables
     private readonly bool _startsAtFinalState;
     private readonly SamplingEvents? _sampling;
 
-    public Observables(
-        SimulationCase simulation,
-        DiffusionSystem system,
-        ReadOnlySpan<double> initialState,
-        FinalStateTarget final,
-        SamplingEvents? sampling = null)
+    public Observables(DiscreteModel model, FinalStateTarget final, SamplingEvents? sampling = null)
     {
+        var system = model.System;
+        ReadOnlySpan<double> initialState = model.InitialState;
         _sampling = sampling;
-        _case = simulation;
+        _case = model.Case;
         _system = system;
         _final = final;
         _initialState = initialState.ToArray();

@@ -16,11 +16,11 @@ internal sealed class ProfileBuilder
     private readonly DiffusionSystem _system;
     private readonly double[] _halfResistance;
 
-    public ProfileBuilder(SimulationCase simulation, DiffusionSystem system)
+    public ProfileBuilder(DiscreteModel model)
     {
-        _case = simulation;
-        _system = system;
-        _halfResistance = system.HalfCellResistance;
+        _case = model.Case;
+        _system = model.System;
+        _halfResistance = _system.HalfCellResistance;
     }
 
     /// <summary>Profiles of the dissolved concentration (undissolved drug of a dispersed layer is not part of them).</summary>

@@ -26,18 +26,14 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     private readonly CrossingTracker? _rightTracker;
     private double _systemFraction;
 
-    public ResultRecorder(
-        SimulationCase simulation,
-        DiffusionSystem system,
-        ReadOnlySpan<double> initialState,
-        FinalStateTarget final,
-        SamplingEvents? sampling = null)
+    public ResultRecorder(DiscreteModel model, FinalStateTarget final, SamplingEvents? sampling = null)
     {
-        _case = simulation;
-        _system = system;
+        ReadOnlySpan<double> initialState = model.InitialState;
+        _case = model.Case;
+        _system = model.System;
         _final = final;
-        _observables = new Observables(simulation, system, initialState, final, sampling);
-        _profiles = new ProfileBuilder(simulation, system);
+        _observables = new Observables(model, final, sampling);
+        _profiles = new ProfileBuilder(model);
         _systemFraction = Tracked(_observables.FractionOfFinalState(initialState));
         _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction);
         _leftTracker = TrackerFor(Side.Left, initialState);

@@ -14,8 +14,10 @@ internal sealed class SamplingEvents : IStateEvents
     private readonly Sampled?[] _sides = new Sampled?[2];
     private readonly DiffusionSystem _system;
 
-    public SamplingEvents(SimulationCase simulation, DiffusionSystem system)
+    public SamplingEvents(DiscreteModel model)
     {
+        var simulation = model.Case;
+        var system = model.System;
         _system = system;
         foreach (var side in new[] { Side.Left, Side.Right })
         {

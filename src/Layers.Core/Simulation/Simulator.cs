@@ -18,15 +18,16 @@ public static class Simulator
     public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
     {
         var massLeft = MassLeftAfterSampling(simulation, cancellation);
-        var (grid, system, initial, final, sampling, recorder, stages) = Assemble(simulation, massLeft);
+        var (model, final, sampling, recorder, stages) = Assemble(simulation, massLeft);
+        var grid = model.Grid;
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
-        var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(simulation, system, stages, initial);
+        var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(model, stages);
         ITimeLoopObserver observer = watcher is null ? recorder : new ObserverPair(recorder, watcher);
-        var undissolved = system.Saturation is null ? null : new UndissolvedTracker(simulation, system, initial);
+        var undissolved = model.System.Saturation is null ? null : new UndissolvedTracker(model);
         observer = undissolved is null ? observer : new ObserverPair(observer, undissolved);
         var statistics = StagedIntegration.Run(
-            stages, initial, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
+            stages, model.InitialState, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
             simulation.Numerics.Solver, observer, sampling, cancellation).Statistics;
         var failure = statistics.StopReason == StopReason.Completed ? string.Empty : $"the solver stopped early ({statistics})";
         if (statistics.StopReason == StopReason.Completed)
@@ -58,7 +59,7 @@ public static class Simulator
             FailureReason = failure,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
                 ? null
-                : FoodContactAssessment.Assess(simulation, grid, stages, initial, watcher, cancellation),
+                : FoodContactAssessment.Assess(model, stages, watcher, cancellation),
         };
     }
 
@@ -71,10 +72,10 @@ public static class Simulator
         SimulationCase simulation,
         CancellationToken cancellation = default)
     {
-        var (grid, _, initial, _, sampling, recorder, stages) = Assemble(simulation);
+        var (model, _, sampling, recorder, stages) = Assemble(simulation);
         var statistics = StagedIntegration.Run(
-            stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
-            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
+            stages, model.InitialState, OutputSchedule.For(simulation), simulation.DurationSeconds,
+            (stage, firstOutput) => InitialStep(stage.Case, model.Grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
         return (recorder.Samples, statistics);
     }
 
@@ -99,25 +100,24 @@ public static class Simulator
             return null;
         }
 
-        var (grid, system, initial, _, sampling, recorder, stages) = Assemble(simulation);
+        var (model, _, sampling, recorder, stages) = Assemble(simulation);
         var statistics = StagedIntegration.Run(
-            stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
-            (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
+            stages, model.InitialState, OutputSchedule.For(simulation), simulation.DurationSeconds,
+            (stage, firstOutput) => InitialStep(stage.Case, model.Grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
         return statistics.StopReason == StopReason.Completed
-            ? system.TotalMass(initial) - sampling.RemovedPerArea(Side.Left) - sampling.RemovedPerArea(Side.Right)
+            ? model.System.TotalMass(model.InitialState) - sampling.RemovedPerArea(Side.Left) - sampling.RemovedPerArea(Side.Right)
             : null;
     }
 
-    private static (Grid Grid, DiffusionSystem System, double[] Initial, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(
+    private static (DiscreteModel Model, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(
         SimulationCase simulation, double? massLeftAfterSamplingPerArea = null)
     {
-        var grid = GridBuilder.Build(simulation);
-        var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
-        var stages = simulation.FoodContact is null ? [StageSystem.Whole(simulation, system)] : StageSystem.For(simulation, grid);
-        var final = FinalStateTarget.ForStages(simulation, system, stages, massLeftAfterSamplingPerArea);
-        var sampling = new SamplingEvents(simulation, system);
-        var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
-        return (grid, system, initial, final, sampling, recorder, stages);
+        var model = DiscreteModel.Build(simulation);
+        var stages = simulation.FoodContact is null ? [StageSystem.Whole(simulation, model.System)] : StageSystem.For(simulation, model.Grid);
+        var final = FinalStateTarget.ForStages(model, stages, massLeftAfterSamplingPerArea);
+        var sampling = new SamplingEvents(model);
+        var recorder = new ResultRecorder(model, final, sampling);
+        return (model, final, sampling, recorder, stages);
     }
 
     /// <summary>

@@ -24,10 +24,12 @@ internal sealed class UndissolvedTracker : ITimeLoopObserver
     private double _previousTime;
     private double _beforePreviousTime;
 
-    public UndissolvedTracker(SimulationCase simulation, DiffusionSystem system, ReadOnlySpan<double> initialState)
+    public UndissolvedTracker(DiscreteModel model)
     {
+        var simulation = model.Case;
+        var initialState = model.InitialState;
         _case = simulation;
-        _system = system;
+        _system = model.System;
         _layers = Enumerable.Range(0, simulation.Stack.Count)
             .Where(layer => simulation.Stack.Layers[layer].SolubilityKgPerCubicMeter is not null)
             .ToArray();
