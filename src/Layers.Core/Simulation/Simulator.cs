@@ -18,12 +18,14 @@ public static class Simulator
     public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
     {
         var massLeft = MassLeftAfterSampling(simulation, cancellation);
-        var (grid, system, initial, final, sampling, recorder, stages) = Assemble(simulation, massLeft);
+        // The case as read keeps where each D comes from, for the result and the assessment; everything that reads a
+        // layer's D is given its own case, with its first stage's D.
+        var (own, grid, system, initial, final, sampling, recorder, stages) = Assemble(simulation, massLeft);
         var outputs = OutputSchedule.For(simulation);
         var horizon = simulation.DurationSeconds * HorizonFactor;
-        var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(simulation, system, stages, initial);
+        var watcher = simulation.FoodContact is null ? null : FoodConcentrationWatcher.For(own, system, stages, initial);
         ITimeLoopObserver observer = watcher is null ? recorder : new ObserverPair(recorder, watcher);
-        var undissolved = system.Saturation is null ? null : new UndissolvedTracker(simulation, system, initial);
+        var undissolved = system.Saturation is null ? null : new UndissolvedTracker(own, system, initial);
         observer = undissolved is null ? observer : new ObserverPair(observer, undissolved);
         var statistics = StagedIntegration.Run(
             stages, initial, outputs, horizon, (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput),
@@ -49,16 +51,16 @@ public static class Simulator
                     final.Steady!.FluxKgPerSquareMeterSecond,
                     recorder.FluxAtEnd,
                     recorder.LagTimeSeconds,
-                    SingleMembrane.LagTimeSeconds(simulation))
+                    SingleMembrane.LagTimeSeconds(own))
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
             DispersedLayers = undissolved?.Summaries ?? [],
-            DiffusionCell = DiffusionCellAnalysis.Of(simulation, recorder.Samples, sampling),
+            DiffusionCell = DiffusionCellAnalysis.Of(own, recorder.Samples, sampling),
             Statistics = statistics,
             FailureReason = failure,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
                 ? null
-                : FoodContactAssessment.Assess(simulation, grid, stages, initial, watcher, cancellation),
+                : FoodContactAssessment.Assess(simulation, grid, system, stages, initial, watcher, cancellation),
         };
     }
 
@@ -71,7 +73,7 @@ public static class Simulator
         SimulationCase simulation,
         CancellationToken cancellation = default)
     {
-        var (grid, _, initial, _, sampling, recorder, stages) = Assemble(simulation);
+        var (_, grid, _, initial, _, sampling, recorder, stages) = Assemble(simulation);
         var statistics = StagedIntegration.Run(
             stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
             (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
@@ -99,7 +101,7 @@ public static class Simulator
             return null;
         }
 
-        var (grid, system, initial, _, sampling, recorder, stages) = Assemble(simulation);
+        var (_, grid, system, initial, _, sampling, recorder, stages) = Assemble(simulation);
         var statistics = StagedIntegration.Run(
             stages, initial, OutputSchedule.For(simulation), simulation.DurationSeconds,
             (stage, firstOutput) => InitialStep(stage.Case, grid, firstOutput), simulation.Numerics.Solver, recorder, sampling, cancellation).Statistics;
@@ -108,16 +110,21 @@ public static class Simulator
             : null;
     }
 
-    private static (Grid Grid, DiffusionSystem System, double[] Initial, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(
+    /// <summary>
+    /// The grid and the case's own system, assembled once from the case with its first stage's D (its own K), and
+    /// the stages on them; what observes the run is built on that case too.
+    /// </summary>
+    private static (SimulationCase Own, Grid Grid, DiffusionSystem System, double[] Initial, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(
         SimulationCase simulation, double? massLeftAfterSamplingPerArea = null)
     {
-        var grid = GridBuilder.Build(simulation);
-        var (system, initial) = DiffusionSystemBuilder.Build(simulation, grid);
-        var stages = simulation.FoodContact is null ? [StageSystem.Whole(simulation, system)] : StageSystem.For(simulation, grid);
-        var final = FinalStateTarget.ForStages(simulation, system, stages, massLeftAfterSamplingPerArea);
-        var sampling = new SamplingEvents(simulation, system);
-        var recorder = new ResultRecorder(simulation, system, initial, final, sampling);
-        return (grid, system, initial, final, sampling, recorder, stages);
+        var own = simulation.WithFirstStageDiffusivities();
+        var grid = GridBuilder.Build(own);
+        var (system, initial) = DiffusionSystemBuilder.Build(own, grid);
+        var stages = StageSystem.For(simulation, grid, system);
+        var final = FinalStateTarget.ForStages(own, system, stages, massLeftAfterSamplingPerArea);
+        var sampling = new SamplingEvents(own, system);
+        var recorder = new ResultRecorder(own, system, initial, final, sampling);
+        return (own, grid, system, initial, final, sampling, recorder, stages);
     }
 
     /// <summary>
