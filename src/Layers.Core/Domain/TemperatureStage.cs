@@ -70,7 +70,7 @@ public sealed record TemperatureStage(string Name, double DurationSeconds, doubl
 
     /// <summary>
     /// Temperature of the stage of a case that states none, K: 25 degC, the usual reference temperature; only a D that
-    /// depends on temperature would read it, and a case has such a D only with a temperature history.
+    /// depends on temperature would read it, and a case read from a file has such a D only with a temperature history.
     /// </summary>
     public const double UnstatedKelvin = 298.15;
 
