@@ -45,6 +45,7 @@ public sealed record Layer(
         ? constant.DiffusivitySquareMetersPerSecond
         : throw new InvalidOperationException(
             $"the diffusion coefficient of layer '{Name}' depends on temperature; take the layer from a stage's case (TemperatureStage.Apply)");
+
     /// <summary>
     /// The variable that is continuous across interfaces, u = c / K (kg/m3 of reference-medium equivalent),
     /// at the start of the simulation.
