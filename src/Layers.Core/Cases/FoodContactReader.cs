@@ -10,7 +10,9 @@ namespace Layers.Core.Cases;
 /// Reads <c>foodContact</c>: the time-temperature stages, where each layer's D comes from, the food face, the
 /// limits, a test condition and a worst-case partition convention. Read in two passes: <see cref="Read"/> before
 /// the layers (the layers need to know which of them have an estimated D and what the duration is),
-/// <see cref="Resolve"/> after them (layer names are checked and D placed at the first stage's temperature).
+/// <see cref="Resolve"/> after them (names are checked and turned into layer indices and face sides). A layer's D
+/// source (an estimate, an Arrhenius law) is handed to <see cref="LayerReader"/> through the <see cref="ReadContext"/>,
+/// so that every layer is read with its source.
 /// </summary>
 internal static class FoodContactReader
 {
@@ -35,7 +37,8 @@ internal static class FoodContactReader
         /// <summary>Per stage (same order as <see cref="Stages"/>), the partition coefficients as written, with their paths.</summary>
         public List<Dictionary<string, (double Written, string Path)>> StagePartitions { get; } = [];
 
-        public Dictionary<string, (DiffusivitySource? Source, ArrheniusDiffusivity? Arrhenius, string Path)> Layers { get; } = [];
+        /// <summary>The layers named in <c>layerDiffusion</c>, with the path of each entry.</summary>
+        public Dictionary<string, string> Layers { get; } = [];
 
         public double? Limit { get; set; }
 
@@ -94,7 +97,7 @@ internal static class FoodContactReader
 
     /// <summary>
     /// Second pass: checks names against the layers and the food face, applies the partition convention, and
-    /// returns the settings with the layers' D at the first stage's temperature.
+    /// returns the settings with the layers.
     /// </summary>
     public static (FoodContactSettings? Settings, List<Layer> Layers) Resolve(
         Input input, JsonFields root, List<Layer> layers, FaceCondition? left, FaceCondition? right, ReadContext context)
@@ -103,9 +106,9 @@ internal static class FoodContactReader
         var written = WrittenLayerNames(root);
         var names = written.ToHashSet(StringComparer.Ordinal);
         var known = string.Join(", ", written.Select(name => $"'{name}'"));
-        foreach (var (name, entry) in input.Layers.Where(pair => !names.Contains(pair.Key)))
+        foreach (var (name, path) in input.Layers.Where(pair => !names.Contains(pair.Key)))
         {
-            context.Errors.Add(new CaseError(entry.Path, $"no layer is named '{name}'; the layers are {known}"));
+            context.Errors.Add(new CaseError(path, $"no layer is named '{name}'; the layers are {known}"));
         }
 
         foreach (var (_, _, overrides, _) in input.Stages)
@@ -125,14 +128,6 @@ internal static class FoodContactReader
             return (null, layers);
         }
 
-        var sources = convention.Select(
-            layer => input.Layers.TryGetValue(layer.Name, out var entry) && entry.Source is { } estimated
-                ? estimated
-                : input.Layers.TryGetValue(layer.Name, out var arrhenius) && arrhenius.Arrhenius is { } given
-                    ? given with { ReferenceDiffusivity = layer.DiffusivitySquareMetersPerSecond, Origin = layer.DiffusivityOrigin }
-                    : (DiffusivitySource)new GivenDiffusivity(layer.DiffusivitySquareMetersPerSecond) { Origin = layer.DiffusivityOrigin })
-            .ToArray();
-
         // Names are turned into layer indices and face sides here, once; everything after reads the typed keys.
         var stages = input.Stages.Select((entry, index) => entry.Stage with
         {
@@ -140,20 +135,16 @@ internal static class FoodContactReader
             LayerPartitionOverrides = partitions[index].Layers,
             FacePartitionOverrides = partitions[index].Faces,
         }).ToArray();
-        var placed = convention
-            .Select((layer, index) => layer with { DiffusivitySquareMetersPerSecond = stages[0].DiffusivityOf(index, sources[index]).Value })
-            .ToList();
         return (new FoodContactSettings
         {
             Stages = stages,
-            Diffusivities = sources,
             FoodSide = foodSide,
             SpecificMigrationLimit = input.Limit,
             DetectionLimit = input.DetectionLimit,
             TestCondition = input.Test,
             EquivalenceActivationEnergy = input.ActivationEnergy,
             PartitionConvention = input.Convention,
-        }, placed);
+        }, convention);
     }
 
     private static List<string> WrittenLayerNames(JsonFields root)
@@ -356,7 +347,6 @@ internal static class FoodContactReader
             if (isEstimate)
             {
                 // Even with a mistake in the estimate, the layer is meant to give no D of its own: say so only once.
-                context.LayersWithEstimatedDiffusivity.Add(member.Name);
                 var polymerName = entry.Text("polymer", required: true);
                 var polymer = polymerName is null ? null : PolymerTable.Find(polymerName);
                 if (polymerName is not null && polymer is null)
@@ -371,7 +361,8 @@ internal static class FoodContactReader
                     molarMass = null;
                 }
 
-                input.Layers[member.Name] = (polymer is not null && molarMass is { } m ? new EstimatedDiffusivity(polymer, m) : null, null, path);
+                input.Layers[member.Name] = path;
+                context.EstimatedDiffusivities[member.Name] = polymer is not null && molarMass is { } m ? new EstimatedDiffusivity(polymer, m) : null;
                 continue;
             }
 
@@ -383,7 +374,11 @@ internal static class FoodContactReader
                 energy = null;
             }
 
-            input.Layers[member.Name] = (null, reference is { } r && energy is { } ea ? new ArrheniusDiffusivity(double.NaN, r, ea.SiValue) : null, path);
+            input.Layers[member.Name] = path;
+            if (reference is { } r && energy is { } ea)
+            {
+                context.ArrheniusLaws[member.Name] = (r, ea.SiValue);
+            }
         }
     }
 

@@ -80,18 +80,18 @@ internal static class LayerReader
             return PottsGuyReader.Read(fields, context, name, thickness);
         }
 
-        // A layer whose D is estimated from its polymer gives none itself; it is placed by FoodContactReader.Resolve.
-        var estimated = name is not null && context.LayersWithEstimatedDiffusivity.Contains(name);
+        // A layer whose D is estimated from its polymer gives none itself: its source is the estimate.
+        var estimated = name is not null && context.EstimatedDiffusivities.ContainsKey(name);
         if (estimated && fields.Has("diffusionCoefficient"))
         {
             fields.Error("diffusionCoefficient", $"must be left out: $.foodContact.layerDiffusion.{name} estimates it");
         }
 
-        var diffusivity = estimated ? double.NaN : ReadContext.Positive(fields, "diffusionCoefficient", Dimension.Diffusivity, required: true);
+        var diffusivity = estimated ? null : ReadContext.Positive(fields, "diffusionCoefficient", Dimension.Diffusivity, required: true);
         var density = ReadContext.Positive(fields, "density", Dimension.MassConcentration, required: false);
         var k = context.PartitionCoefficient(fields, density);
         var concentration = context.Concentration(fields, "initialConcentration", density);
-        if (name is null || thickness is null || diffusivity is null || k is null || concentration is null)
+        if (name is null || thickness is null || (diffusivity is null && !estimated) || k is null || concentration is null)
         {
             return null;
         }
@@ -109,7 +109,24 @@ internal static class LayerReader
             return null;
         }
 
-        return new Layer(name, thickness.Value, diffusivity.Value, k.Value, concentration.Value, density) { DiffusivityOrigin = origin };
+        var source = Source(context, name, diffusivity, origin);
+        return source is null ? null : new Layer(name, thickness.Value, source, k.Value, concentration.Value, density);
+    }
+
+    /// <summary>
+    /// Where the layer's D comes from: the estimate of foodContact.layerDiffusion (null when that entry has a mistake,
+    /// already recorded), its Arrhenius law with the layer's D at the reference temperature, or the layer's D as given.
+    /// </summary>
+    private static DiffusivitySource? Source(ReadContext context, string name, double? diffusivity, string origin)
+    {
+        if (context.EstimatedDiffusivities.TryGetValue(name, out var estimate))
+        {
+            return estimate;
+        }
+
+        return context.ArrheniusLaws.TryGetValue(name, out var law)
+            ? new ArrheniusDiffusivity(diffusivity!.Value, law.ReferenceKelvin, law.ActivationEnergyJoulesPerMole) { Origin = origin }
+            : new GivenDiffusivity(diffusivity!.Value) { Origin = origin };
     }
 
     /// <summary>The optional solubility: null when absent, NaN when given but unusable (the error is recorded).</summary>

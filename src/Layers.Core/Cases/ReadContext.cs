@@ -1,3 +1,4 @@
+using Layers.Core.Domain;
 using Layers.Core.Units;
 
 namespace Layers.Core.Cases;
@@ -29,8 +30,17 @@ internal sealed class ReadContext
     /// <summary>True once any concentration was given as a mass fraction (a hint that the case is about foods).</summary>
     public bool SawMassFraction { get; private set; }
 
-    /// <summary>Names of the layers whose D is estimated in foodContact.layerDiffusion, so they give none themselves.</summary>
-    public HashSet<string> LayersWithEstimatedDiffusivity { get; } = new(StringComparer.Ordinal);
+    /// <summary>
+    /// The layers whose D is estimated in foodContact.layerDiffusion, so they give none themselves, by name: the
+    /// estimate, or null when its entry has a mistake (recorded).
+    /// </summary>
+    public Dictionary<string, EstimatedDiffusivity?> EstimatedDiffusivities { get; } = new(StringComparer.Ordinal);
+
+    /// <summary>
+    /// The layers whose D follows an Arrhenius law in foodContact.layerDiffusion, by name: the law's reference
+    /// temperature, K, and activation energy, J/mol; the layer's own D is the value at the reference temperature.
+    /// </summary>
+    public Dictionary<string, (double ReferenceKelvin, double ActivationEnergyJoulesPerMole)> ArrheniusLaws { get; } = new(StringComparer.Ordinal);
 
     /// <summary>The case's duration, s, once read (null before or when invalid); bounds the sampling times.</summary>
     public double? DurationSeconds { get; set; }

@@ -12,6 +12,12 @@ public static class DiffusivityOrigins
     /// <summary>Estimated from measurements by <c>layers fit</c>.</summary>
     public const string Fitted = "fitted";
 
-    /// <summary>All of them, in the order the messages list them.</summary>
+    /// <summary>
+    /// Estimated by a correlation (Potts-Guy, the upper-bound polymer law): said of a D in reports, never written in a
+    /// case, where the estimate's own section says so.
+    /// </summary>
+    public const string Estimated = "estimated";
+
+    /// <summary>All the words a case may write, in the order the messages list them.</summary>
     public static IReadOnlyList<string> All { get; } = [Given, Measured, Fitted];
 }

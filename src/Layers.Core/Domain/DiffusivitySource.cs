@@ -21,6 +21,15 @@ public abstract record DiffusivitySource
 
     /// <summary>One line for reports saying where the value comes from.</summary>
     public abstract string Describe();
+
+    /// <summary>Where the value comes from in one word (<see cref="DiffusivityOrigins"/>).</summary>
+    public abstract string Origin { get; init; }
+
+    /// <summary>
+    /// This source as a constant at a temperature: itself when it is constant already (its origin kept), else its
+    /// value there.
+    /// </summary>
+    public virtual GivenDiffusivity AtTemperature(double temperatureKelvin) => new(At(temperatureKelvin)) { Origin = Origin };
 }
 
 /// <summary>A diffusion coefficient given in the case and used unchanged at every temperature.</summary>
@@ -37,7 +46,10 @@ public sealed record GivenDiffusivity(double DiffusivitySquareMetersPerSecond) :
     public override string Describe() => $"{Origin}; the same at every temperature";
 
     /// <summary>What the case says of the value: <c>given</c>, <c>measured</c> or <c>fitted</c>.</summary>
-    public string Origin { get; init; } = DiffusivityOrigins.Given;
+    public override string Origin { get; init; } = DiffusivityOrigins.Given;
+
+    /// <inheritdoc />
+    public override GivenDiffusivity AtTemperature(double temperatureKelvin) => this;
 }
 
 /// <summary>A diffusion coefficient given at a reference temperature with an activation energy.</summary>
@@ -60,7 +72,7 @@ public sealed record ArrheniusDiffusivity(
         $"{Origin} at {ReferenceKelvin - 273.15:0.##} degC, Arrhenius with Ea = {ActivationEnergyJoulesPerMole / 1e3:0.##} kJ/mol");
 
     /// <summary>What the case says of the value at the reference temperature: <c>given</c>, <c>measured</c> or <c>fitted</c>.</summary>
-    public string Origin { get; init; } = DiffusivityOrigins.Given;
+    public override string Origin { get; init; } = DiffusivityOrigins.Given;
 }
 
 /// <summary>The upper-bound estimate of <see cref="UpperBoundDiffusivity"/> for a polymer and a migrant.</summary>
@@ -70,6 +82,9 @@ public sealed record EstimatedDiffusivity(PolymerConstants Polymer, double Relat
 {
     /// <inheritdoc />
     public override string KindName => "upperBoundEstimate";
+
+    /// <inheritdoc />
+    public override string Origin { get; init; } = DiffusivityOrigins.Estimated;
 
     /// <inheritdoc />
     public override double At(double temperatureKelvin)

@@ -3,8 +3,9 @@ using Layers.Core.FoodContact;
 namespace Layers.Core.Domain;
 
 /// <summary>
-/// The food-contact part of a case, in SI units: the time-temperature history, where each layer's D comes from,
-/// which face is the food, and the limits to judge the result against.
+/// The food-contact part of a case, in SI units: the time-temperature history, which face is the food, and the
+/// limits to judge the result against. Where each layer's D comes from is the layer's own
+/// <see cref="Layer.Diffusivity"/>.
 /// </summary>
 public sealed record FoodContactSettings
 {
@@ -16,9 +17,6 @@ public sealed record FoodContactSettings
 
     /// <summary>The stages, in order; the case's duration is their sum.</summary>
     public required IReadOnlyList<TemperatureStage> Stages { get; init; }
-
-    /// <summary>Where each layer's D comes from, by layer index in the stack (one entry per layer).</summary>
-    public required IReadOnlyList<DiffusivitySource> Diffusivities { get; init; }
 
     /// <summary>The face whose compartment is the food.</summary>
     public required Side FoodSide { get; init; }

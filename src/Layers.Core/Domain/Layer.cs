@@ -5,7 +5,10 @@ namespace Layers.Core.Domain;
 /// </summary>
 /// <param name="Name">Unique name within the stack (used in reports and CSV columns).</param>
 /// <param name="ThicknessMeters">Thickness, m; strictly positive.</param>
-/// <param name="DiffusivitySquareMetersPerSecond">Diffusion coefficient of the substance in this layer, m2/s.</param>
+/// <param name="Diffusivity">
+/// Where the diffusion coefficient of the substance in this layer comes from: a constant value, or a law in
+/// temperature that a <see cref="TemperatureStage"/> resolves (the one place a D is taken at a temperature).
+/// </param>
 /// <param name="PartitionCoefficient">
 /// Volume-basis partition coefficient relative to the case's reference medium:
 /// K = c_layer / c_reference at equilibrium, both in kg/m3. Mass-basis inputs are converted before this record is made.
@@ -15,11 +18,34 @@ namespace Layers.Core.Domain;
 public sealed record Layer(
     string Name,
     double ThicknessMeters,
-    double DiffusivitySquareMetersPerSecond,
+    DiffusivitySource Diffusivity,
     double PartitionCoefficient,
     double InitialConcentrationKgPerCubicMeter,
     double? DensityKgPerCubicMeter = null)
 {
+    /// <summary>A layer with a constant diffusion coefficient, m2/s (given, the same at every temperature).</summary>
+    public Layer(
+        string name,
+        double thicknessMeters,
+        double diffusivitySquareMetersPerSecond,
+        double partitionCoefficient,
+        double initialConcentrationKgPerCubicMeter,
+        double? densityKgPerCubicMeter = null)
+        : this(name, thicknessMeters, new GivenDiffusivity(diffusivitySquareMetersPerSecond), partitionCoefficient, initialConcentrationKgPerCubicMeter, densityKgPerCubicMeter)
+    {
+    }
+
+    /// <summary>
+    /// The diffusion coefficient, m2/s, of a layer whose D is constant: every layer of a case without a temperature
+    /// history, and every layer of a stage's case (<see cref="TemperatureStage.Apply"/>). A D that depends on
+    /// temperature has no value of its own: it is taken at a stage's temperature there, and asking for it here is
+    /// a mistake in the code, not in the case.
+    /// </summary>
+    public double DiffusivitySquareMetersPerSecond => Diffusivity is GivenDiffusivity constant
+        ? constant.DiffusivitySquareMetersPerSecond
+        : throw new InvalidOperationException(
+            $"the diffusion coefficient of layer '{Name}' depends on temperature; take the layer from a stage's case (TemperatureStage.Apply)");
+
     /// <summary>
     /// The variable that is continuous across interfaces, u = c / K (kg/m3 of reference-medium equivalent),
     /// at the start of the simulation.
@@ -47,11 +73,11 @@ public sealed record Layer(
         : 0;
 
     /// <summary>
-    /// Where the case's D comes from, as the case says: <c>given</c> (the default: a value taken from elsewhere),
-    /// <c>measured</c>, or <c>fitted</c> (written by <c>layers fit</c>). Estimated values say so through
-    /// <see cref="Estimate"/> or the food-contact settings instead.
+    /// Where the case's D comes from, in one word: <c>estimated</c> (Potts-Guy, see <see cref="Estimate"/>, or the
+    /// upper-bound polymer correlation), else what the case says: <c>given</c> (the default: a value taken from
+    /// elsewhere), <c>measured</c>, or <c>fitted</c> (written by <c>layers fit</c>).
     /// </summary>
-    public string DiffusivityOrigin { get; init; } = DiffusivityOrigins.Given;
+    public string DiffusivityOrigin => Estimate is not null ? DiffusivityOrigins.Estimated : Diffusivity.Origin;
 
     /// <summary>How D and K were estimated (Potts-Guy), or null when the case gave them.</summary>
     public SkinEstimate? Estimate { get; init; }

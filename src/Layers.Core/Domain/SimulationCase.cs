@@ -44,6 +44,18 @@ public sealed record SimulationCase
     /// </summary>
     public FoodContactSettings? FoodContact { get; init; }
 
+    /// <summary>
+    /// The stages of the run, in order: the temperature history of a food-contact case, else one stage spanning the
+    /// duration with no D or K of its own (<see cref="TemperatureStage.Whole"/>).
+    /// </summary>
+    public IReadOnlyList<TemperatureStage> Stages => FoodContact?.Stages ?? [TemperatureStage.Whole(DurationSeconds)];
+
+    /// <summary>
+    /// The case with every layer's D as in its first stage and its own K: the case its grid and its own system (in
+    /// whose u = c/K observers read every state) are built from, and whose D the input tables show.
+    /// </summary>
+    public SimulationCase WithFirstStageDiffusivities() => Stages[0].WithDiffusivities(this);
+
     /// <summary>Permeation metrics asked for by the case, or null.</summary>
     public PermeationTest? PermeationTest { get; init; }
 

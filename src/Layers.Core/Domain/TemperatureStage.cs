@@ -33,10 +33,13 @@ public sealed record TemperatureStage(string Name, double DurationSeconds, doubl
     public (double Value, string Origin) DiffusivityOf(int layerIndex, DiffusivitySource source)
     {
         ArgumentNullException.ThrowIfNull(source);
-        return DiffusivityOverrides.TryGetValue(layerIndex, out var value)
-            ? (value, GivenForStage)
-            : (source.At(TemperatureKelvin), source.Describe());
+        return (ConstantDiffusivity(layerIndex, source).DiffusivitySquareMetersPerSecond,
+            DiffusivityOverrides.ContainsKey(layerIndex) ? GivenForStage : source.Describe());
     }
+
+    /// <summary>The D of a layer in this stage as a constant: this stage's own value, else its source at this temperature.</summary>
+    private GivenDiffusivity ConstantDiffusivity(int layerIndex, DiffusivitySource source)
+        => DiffusivityOverrides.TryGetValue(layerIndex, out var value) ? new GivenDiffusivity(value) : source.AtTemperature(TemperatureKelvin);
 
     /// <summary>The partition coefficient of the layer at <paramref name="layerIndex"/> in this stage: the stage's own, else <paramref name="caseValue"/>.</summary>
     public double LayerPartitionOf(int layerIndex, double caseValue) => LayerPartitionOverrides.GetValueOrDefault(layerIndex, caseValue);
@@ -45,27 +48,47 @@ public sealed record TemperatureStage(string Name, double DurationSeconds, doubl
     public double FacePartitionOf(Side side, double caseValue) => FacePartitionOverrides.GetValueOrDefault(side, caseValue);
 
     /// <summary>
-    /// The case as it is during this stage: every layer's D from its source (or this stage's own value) and every
-    /// K this stage gives. The one place where a stage's D and K are put into a case.
+    /// The case as it is during this stage: every layer's D from its source at this stage's temperature (or this
+    /// stage's own value), as a constant, and every K this stage gives. The one place where a stage's D and K are
+    /// put into a case.
     /// </summary>
     /// <param name="simulation">The case as read.</param>
-    /// <param name="sources">Where each layer's D comes from, by layer index.</param>
-    public SimulationCase Apply(SimulationCase simulation, IReadOnlyList<DiffusivitySource> sources)
+    public SimulationCase Apply(SimulationCase simulation) => Resolve(simulation, withPartitions: true);
+
+    /// <summary>
+    /// The case with every layer's D as in this stage (see <see cref="Apply"/>) and its own K: the case whose
+    /// u = c/K states are carried between stages, taken with the D of its first stage.
+    /// </summary>
+    /// <param name="simulation">The case as read.</param>
+    public SimulationCase WithDiffusivities(SimulationCase simulation) => Resolve(simulation, withPartitions: false);
+
+    /// <summary>
+    /// The single stage of a case without a temperature history: the whole duration, with no D or K of its own.
+    /// Its temperature is <see cref="UnstatedKelvin"/>, which a constant D (all such a case has) does not read.
+    /// </summary>
+    public static TemperatureStage Whole(double durationSeconds) => new("whole run", durationSeconds, UnstatedKelvin);
+
+    /// <summary>
+    /// Temperature of the stage of a case that states none, K: 25 degC, the usual reference temperature; only a D that
+    /// depends on temperature would read it, and a case read from a file has such a D only with a temperature history.
+    /// </summary>
+    public const double UnstatedKelvin = 298.15;
+
+    private SimulationCase Resolve(SimulationCase simulation, bool withPartitions)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        ArgumentNullException.ThrowIfNull(sources);
         var layers = simulation.Stack.Layers
             .Select((layer, index) => layer with
             {
-                DiffusivitySquareMetersPerSecond = DiffusivityOf(index, sources[index]).Value,
-                PartitionCoefficient = LayerPartitionOf(index, layer.PartitionCoefficient),
+                Diffusivity = ConstantDiffusivity(index, layer.Diffusivity),
+                PartitionCoefficient = withPartitions ? LayerPartitionOf(index, layer.PartitionCoefficient) : layer.PartitionCoefficient,
             })
             .ToArray();
         return simulation with
         {
             Stack = new LayerStack(layers),
-            Left = WithPartition(simulation.Left, Side.Left),
-            Right = WithPartition(simulation.Right, Side.Right),
+            Left = withPartitions ? WithPartition(simulation.Left, Side.Left) : simulation.Left,
+            Right = withPartitions ? WithPartition(simulation.Right, Side.Right) : simulation.Right,
         };
     }
 

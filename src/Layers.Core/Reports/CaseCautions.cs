@@ -42,11 +42,11 @@ public static class CaseCautions
     {
         ArgumentNullException.ThrowIfNull(simulation);
         var notes = new List<string>(EstimateNotes.For(simulation));
-        if (simulation.FoodContact is { } food)
+        if (simulation.FoodContact is not null)
         {
-            foreach (var (layer, source) in simulation.Stack.Layers.Zip(food.Diffusivities))
+            foreach (var layer in simulation.Stack.Layers)
             {
-                if (source is EstimatedDiffusivity { Polymer.Verified: false } estimated)
+                if (layer.Diffusivity is EstimatedDiffusivity { Polymer.Verified: false } estimated)
                 {
                     notes.Add($"note: {layer.Name}: D is an upper-bound estimate for {estimated.Polymer.Name} from polymer constants that are UNVERIFIED, from memory ({estimated.Polymer.Source})");
                 }

@@ -43,7 +43,7 @@ public static class FoodContactTables
         {
             foreach (var (layer, index) in simulation.Stack.Layers.Select((layer, index) => (layer, index)))
             {
-                var (value, origin) = stage.DiffusivityOf(index, settings.Diffusivities[index]);
+                var (value, origin) = stage.DiffusivityOf(index, layer.Diffusivity);
                 rows.Add([$"{stage.Name}, {format.Time(stage.DurationSeconds)} at {Celsius(stage.TemperatureKelvin)}", layer.Name, DisplayFormat.Number(value * 1e4), origin]);
             }
         }

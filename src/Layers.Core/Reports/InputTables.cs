@@ -15,7 +15,9 @@ public static class InputTables
     {
         var format = new DisplayFormat(simulation.Display);
         var depth = simulation.Display.Depth.Symbol;
-        var rows = simulation.Stack.Layers.Select((layer, index) => (IReadOnlyList<string>)
+
+        // A D that depends on temperature is shown as in the first stage, where the run starts.
+        var rows = simulation.WithFirstStageDiffusivities().Stack.Layers.Select((layer, index) => (IReadOnlyList<string>)
         [
             layer.Name,
             DisplayFormat.Number(simulation.Display.Depth.FromSi(layer.ThicknessMeters)),
@@ -40,10 +42,7 @@ public static class InputTables
     public static string OriginOf(SimulationCase simulation, int layerIndex)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        var layer = simulation.Stack.Layers[layerIndex];
-        var estimated = layer.Estimate is not null
-            || simulation.FoodContact?.Diffusivities[layerIndex] is EstimatedDiffusivity;
-        return estimated ? "estimated" : layer.DiffusivityOrigin;
+        return simulation.Stack.Layers[layerIndex].DiffusivityOrigin;
     }
 
     /// <summary>The two faces, the duration and the report times.</summary>

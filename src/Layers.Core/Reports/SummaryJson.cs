@@ -66,13 +66,16 @@ public static class SummaryJson
     {
         json.WriteStartArray("layers");
         var stack = result.Case.Stack;
+
+        // A D that depends on temperature is shown as in the first stage, where the run starts.
+        var diffusivities = result.Case.WithFirstStageDiffusivities().Stack;
         for (var i = 0; i < stack.Count; i++)
         {
             var layer = stack.Layers[i];
             json.WriteStartObject();
             json.WriteString("name", layer.Name);
             json.WriteNumber("thicknessMeters", layer.ThicknessMeters);
-            json.WriteNumber("diffusionCoefficientSquareMetersPerSecond", layer.DiffusivitySquareMetersPerSecond);
+            json.WriteNumber("diffusionCoefficientSquareMetersPerSecond", diffusivities.Layers[i].DiffusivitySquareMetersPerSecond);
             json.WriteString("diffusionCoefficientOrigin", InputTables.OriginOf(result.Case, i));
             json.WriteNumber("partitionCoefficientVolumeBasis", layer.PartitionCoefficient);
             json.WriteNumber("initialConcentrationKgPerCubicMeter", layer.InitialConcentrationKgPerCubicMeter);

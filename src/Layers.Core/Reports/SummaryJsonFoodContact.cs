@@ -69,7 +69,7 @@ internal static class SummaryJsonFoodContact
 
     private static void WriteSources(Utf8JsonWriter json, SimulationResult result, FoodContactResult food)
     {
-        var sources = result.Case.FoodContact!.Diffusivities;
+        var sources = result.Case.Stack.Layers.Select(layer => layer.Diffusivity);
         json.WriteStartArray("diffusionSources");
         foreach (var ((layer, origin), source) in food.DiffusivityOrigins.Zip(sources))
         {

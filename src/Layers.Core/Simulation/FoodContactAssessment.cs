@@ -21,13 +21,15 @@ namespace Layers.Core.Simulation;
 internal static class FoodContactAssessment
 {
     public static FoodContactResult Assess(
+        SimulationCase simulation,
         DiscreteModel model,
         IReadOnlyList<StageSystem> stages,
         FoodConcentrationWatcher watcher,
         CancellationToken cancellation)
     {
+        ArgumentNullException.ThrowIfNull(simulation);
         ArgumentNullException.ThrowIfNull(model);
-        var (simulation, grid, initial) = (model.Case, model.Grid, model.InitialState);
+        var (grid, own, initial) = (model.Grid, model.System, model.InitialState);
         var settings = simulation.FoodContact!;
         var food = (CompartmentFace)simulation.Face(settings.FoodSide);
         var density = food.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
@@ -47,7 +49,7 @@ internal static class FoodContactAssessment
             AreaPerFoodMassSquareMetersPerKilogram = food.ContactAreaSquareMeters / (food.VolumeCubicMeters * density),
             Stages = StageReports(simulation, settings, watcher),
             DiffusivityOrigins = simulation.Stack.Layers
-                .Select((layer, index) => (layer.Name, Origin(index, settings)))
+                .Select((layer, index) => (layer.Name, Origin(layer, index, settings)))
                 .ToArray(),
             FinalConcentration = final,
             FinalMigrationPerArea = (final - (food.InitialConcentrationKgPerCubicMeter / density)) * foodMassPerArea,
@@ -56,7 +58,7 @@ internal static class FoodContactAssessment
             DetectionLimit = settings.DetectionLimit,
             DetectionReachedSeconds = detection,
             BarrierLags = BarrierLags(simulation, settings),
-            Test = settings.TestCondition is { } test ? Compare(simulation, grid, settings, test, initial, watcher, cancellation) : null,
+            Test = settings.TestCondition is { } test ? Compare(simulation, grid, own, settings, test, initial, watcher, cancellation) : null,
             MaximumLoading = settings.SpecificMigrationLimit is { } sml ? Loading(simulation, grid, stages, final, sml, watcher, cancellation) : null,
             PartitionConvention = settings.PartitionConvention,
         };
@@ -114,10 +116,10 @@ internal static class FoodContactAssessment
     }
 
     private static TestComparison Compare(
-        SimulationCase simulation, Grid grid, FoodContactSettings settings, TemperatureStage test, double[] initial,
+        SimulationCase simulation, Grid grid, DiffusionSystem own, FoodContactSettings settings, TemperatureStage test, double[] initial,
         FoodConcentrationWatcher watcher, CancellationToken cancellation)
     {
-        var stages = StageSystem.For(simulation, grid, [test], settings.Diffusivities);
+        var stages = StageSystem.For(simulation, grid, own, [test]);
         var value = FinalValue(stages, initial, grid, simulation, watcher, cancellation);
         var equivalent = settings.Stages.Sum(stage => Arrhenius.EquivalentTestSeconds(
             stage.DurationSeconds, stage.TemperatureKelvin, test.TemperatureKelvin, settings.EquivalenceActivationEnergy));
@@ -142,7 +144,7 @@ internal static class FoodContactAssessment
         var offset = 0.0;
         if (!OnlyLoadedLayersCarrySubstance(simulation))
         {
-            var empty = simulation with
+            var empty = simulation.WithFirstStageDiffusivities() with
             {
                 Stack = new LayerStack(simulation.Stack.Layers.Select(layer => layer with { InitialConcentrationKgPerCubicMeter = 0 })),
             };
@@ -185,7 +187,7 @@ internal static class FoodContactAssessment
             var values = simulation.Stack.Layers
                 .Select((layer, layerIndex) =>
                 {
-                    var (value, origin) = stage.DiffusivityOf(layerIndex, settings.Diffusivities[layerIndex]);
+                    var (value, origin) = stage.DiffusivityOf(layerIndex, layer.Diffusivity);
                     return (layer.Name, value, origin);
                 })
                 .ToArray();
@@ -204,10 +206,10 @@ internal static class FoodContactAssessment
         return reports;
     }
 
-    private static string Origin(int layer, FoodContactSettings settings)
+    private static string Origin(Layer layer, int layerIndex, FoodContactSettings settings)
     {
-        var origin = settings.Diffusivities[layer].Describe();
-        var overridden = settings.Stages.Where(stage => stage.DiffusivityOverrides.ContainsKey(layer)).Select(stage => stage.Name).ToArray();
+        var origin = layer.Diffusivity.Describe();
+        var overridden = settings.Stages.Where(stage => stage.DiffusivityOverrides.ContainsKey(layerIndex)).Select(stage => stage.Name).ToArray();
         return overridden.Length == 0 ? origin : $"{origin}; given per stage in: {string.Join(", ", overridden)}";
     }
 
@@ -230,7 +232,7 @@ internal static class FoodContactAssessment
             var layer = layers[index];
             foreach (var stage in settings.Stages)
             {
-                var diffusivity = stage.DiffusivityOf(index, settings.Diffusivities[index]).Value;
+                var diffusivity = stage.DiffusivityOf(index, layer.Diffusivity).Value;
                 lags.Add(new BarrierLag(layer.Name, stage.Name, layer.ThicknessMeters * layer.ThicknessMeters / (6 * diffusivity)));
             }
         }

@@ -18,6 +18,8 @@ public static class Simulator
     public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
     {
         var massLeft = MassLeftAfterSampling(simulation, cancellation);
+        // The case as read keeps where each D comes from, for the result and the assessment; everything that reads a
+        // layer's D is given its own case, with its first stage's D.
         var (model, final, sampling, recorder, stages) = Assemble(simulation, massLeft);
         var grid = model.Grid;
         var outputs = OutputSchedule.For(simulation);
@@ -50,16 +52,16 @@ public static class Simulator
                     final.Steady!.FluxKgPerSquareMeterSecond,
                     recorder.FluxAtEnd,
                     recorder.LagTimeSeconds,
-                    SingleMembrane.LagTimeSeconds(simulation))
+                    SingleMembrane.LagTimeSeconds(own))
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
             DispersedLayers = undissolved?.Summaries ?? [],
-            DiffusionCell = DiffusionCellAnalysis.Of(simulation, recorder.Samples, sampling),
+            DiffusionCell = DiffusionCellAnalysis.Of(own, recorder.Samples, sampling),
             Statistics = statistics,
             FailureReason = failure,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
                 ? null
-                : FoodContactAssessment.Assess(model, stages, watcher, cancellation),
+                : FoodContactAssessment.Assess(simulation, model, stages, watcher, cancellation),
         };
     }
 
@@ -109,11 +111,15 @@ public static class Simulator
             : null;
     }
 
+    /// <summary>
+    /// The grid and the case's own system, assembled once from the case with its first stage's D (its own K), and
+    /// the stages on them; what observes the run is built on that case too.
+    /// </summary>
     private static (DiscreteModel Model, FinalStateTarget Final, SamplingEvents Sampling, ResultRecorder Recorder, IReadOnlyList<StageSystem> Stages) Assemble(
         SimulationCase simulation, double? massLeftAfterSamplingPerArea = null)
     {
-        var model = DiscreteModel.Build(simulation);
-        var stages = simulation.FoodContact is null ? [StageSystem.Whole(simulation, model.System)] : StageSystem.For(simulation, model.Grid);
+        var model = DiscreteModel.Build(simulation.WithFirstStageDiffusivities());
+        var stages = StageSystem.For(simulation, model.Grid, model.System);
         var final = FinalStateTarget.ForStages(model, stages, massLeftAfterSamplingPerArea);
         var sampling = new SamplingEvents(model);
         var recorder = new ResultRecorder(model, final, sampling);

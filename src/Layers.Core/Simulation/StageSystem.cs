@@ -22,49 +22,49 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
     public double[]? ToStage { get; init; }
 
     /// <summary>
-    /// The stages of a case on a grid: one per temperature stage when the case has a history, else one for the whole
-    /// duration with the case as it is. Observers read every state in the case's own u = c/K (see
-    /// <see cref="ToStage"/>), so their masses and concentrations hold in every stage.
+    /// The stages of a case on a grid, one per stage of <see cref="SimulationCase.Stages"/> (a case without a
+    /// temperature history has one, spanning its duration). Observers read every state in the case's own u = c/K
+    /// (see <see cref="ToStage"/>), so their masses and concentrations hold in every stage.
     /// </summary>
-    public static IReadOnlyList<StageSystem> For(SimulationCase simulation, Grid grid)
+    /// <param name="simulation">The case as read.</param>
+    /// <param name="grid">The grid shared by every stage.</param>
+    /// <param name="own">
+    /// The case's own system, assembled once by the caller from <see cref="SimulationCase.WithFirstStageDiffusivities"/>:
+    /// the first stage runs on it when it gives no K of its own, so a plain run assembles its discrete system once.
+    /// </param>
+    public static IReadOnlyList<StageSystem> For(SimulationCase simulation, Grid grid, DiffusionSystem own)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        if (simulation.FoodContact is not { } food)
-        {
-            return [Whole(simulation, DiffusionSystemBuilder.Build(simulation, grid).System)];
-        }
-
-        return For(simulation, grid, food.Stages, food.Diffusivities);
+        return Build(simulation, grid, own, simulation.Stages, firstIsOwn: true);
     }
 
     /// <summary>
-    /// The single stage of a case without a temperature history, on a system already assembled for that case, so that
-    /// a plain run assembles its discrete system once.
+    /// The stages of another history for the case (a test condition) on a grid; each assembles its own system, and
+    /// <paramref name="own"/> (see <see cref="For(SimulationCase, Grid, DiffusionSystem)"/>) gives the case's K per node.
     /// </summary>
-    public static StageSystem Whole(SimulationCase simulation, DiffusionSystem system)
-    {
-        ArgumentNullException.ThrowIfNull(simulation);
-        return new StageSystem(simulation, system, 0, simulation.DurationSeconds);
-    }
-
-    /// <summary>The stages of a given history (also used for a test condition) on a grid.</summary>
     public static IReadOnlyList<StageSystem> For(
-        SimulationCase simulation,
-        Grid grid,
-        IReadOnlyList<TemperatureStage> stages,
-        IReadOnlyList<DiffusivitySource> sources)
+        SimulationCase simulation, Grid grid, DiffusionSystem own, IReadOnlyList<TemperatureStage> stages)
+        => Build(simulation, grid, own, stages, firstIsOwn: false);
+
+    private static List<StageSystem> Build(
+        SimulationCase simulation, Grid grid, DiffusionSystem own, IReadOnlyList<TemperatureStage> stages, bool firstIsOwn)
     {
         ArgumentNullException.ThrowIfNull(simulation);
+        ArgumentNullException.ThrowIfNull(own);
         ArgumentNullException.ThrowIfNull(stages);
         var result = new List<StageSystem>();
         var start = 0.0;
-        var own = stages.Any(stage => stage.HasPartitionOverrides) ? DiffusionSystemBuilder.Build(simulation, grid).System : null;
         foreach (var stage in stages)
         {
-            var stageCase = stage.Apply(simulation, sources);
+            var stageCase = stage.Apply(simulation);
             var end = start + stage.DurationSeconds;
-            var system = DiffusionSystemBuilder.Build(stageCase, grid).System;
-            result.Add(new StageSystem(stageCase, system, start, end) { ToStage = stage.HasPartitionOverrides ? StorageRatio(own!, system) : null });
+
+            // The case's own system holds its K and its first stage's D: exactly the first stage's, unless that stage
+            // gives K of its own.
+            var system = firstIsOwn && result.Count == 0 && !stage.HasPartitionOverrides
+                ? own
+                : DiffusionSystemBuilder.Build(stageCase, grid).System;
+            result.Add(new StageSystem(stageCase, system, start, end) { ToStage = stage.HasPartitionOverrides ? PartitionRatio(own, system) : null });
             start = end;
         }
 
@@ -95,12 +95,16 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
         }
     }
 
-    private static double[] StorageRatio(DiffusionSystem own, DiffusionSystem stage)
+    /// <summary>
+    /// K_case / K_stage per node, from the two systems' node maps of K: the storages' ratio, as a node's storage is
+    /// its size (the same in both, on one grid) times its K.
+    /// </summary>
+    internal static double[] PartitionRatio(DiffusionSystem own, DiffusionSystem stage)
     {
         var ratio = new double[own.NodeCount];
         for (var n = 0; n < ratio.Length; n++)
         {
-            ratio[n] = own.Capacity[n] / stage.Capacity[n];
+            ratio[n] = own.PartitionCoefficient[n] / stage.PartitionCoefficient[n];
         }
 
         return ratio;

@@ -69,7 +69,7 @@ public sealed partial class CaseFormatTemperatureUnitsTests
                 Assert.Equal(313.15, food.Stages[0].TemperatureKelvin, 9);
                 Assert.Equal(313.15, food.TestCondition!.TemperatureKelvin, 9);
                 Assert.Equal(80e3, food.EquivalenceActivationEnergy, 6);
-                var arrhenius = Assert.IsType<ArrheniusDiffusivity>(food.Diffusivities[0]);
+                var arrhenius = Assert.IsType<ArrheniusDiffusivity>(read.Case.Stack.Layers[0].Diffusivity);
                 Assert.Equal(313.15, arrhenius.ReferenceKelvin, 9);
                 Assert.Equal(80e3, arrhenius.ActivationEnergyJoulesPerMole, 6);
             }

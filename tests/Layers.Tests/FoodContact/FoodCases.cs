@@ -25,7 +25,7 @@ internal static class FoodCases
         double foodInitial = 0,
         double initial = InitialConcentration)
     {
-        var layer = new Layer("film", Thickness, source.At(stages[0].TemperatureKelvin), kFilmOverFood, initial, 920);
+        var layer = new Layer("film", Thickness, source, kFilmOverFood, initial, 920);
         var food = new CompartmentFace("food", FoodVolume, Area, 1, foodInitial, null, FoodDensity);
         return new SimulationCase
         {
@@ -38,7 +38,6 @@ internal static class FoodCases
             FoodContact = new FoodContactSettings
             {
                 Stages = stages,
-                Diffusivities = [source],
                 FoodSide = Side.Right,
                 SpecificMigrationLimit = limit,
                 TestCondition = test,

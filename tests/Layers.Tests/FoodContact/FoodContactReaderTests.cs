@@ -44,8 +44,8 @@ public sealed class FoodContactReaderTests
         Assert.Equal(0.01e-6, food.DetectionLimit, 15);
         Assert.Equal(333.15, food.TestCondition!.TemperatureKelvin, 9);
         Assert.Equal(Side.Right, food.FoodSide);
-        Assert.IsType<EstimatedDiffusivity>(food.Diffusivities[0]);
-        Assert.IsType<GivenDiffusivity>(food.Diffusivities[1]);
+        Assert.IsType<EstimatedDiffusivity>(result.Case.Stack.Layers[0].Diffusivity);
+        Assert.IsType<GivenDiffusivity>(result.Case.Stack.Layers[1].Diffusivity);
     }
 
     [Fact]
@@ -56,7 +56,7 @@ public sealed class FoodContactReaderTests
         // = 4.055e-8 cm2/s = 4.055e-12 m2/s (equation: Begley et al. 2005, constants from memory).
         var result = CaseJson.Read(Film);
 
-        Tolerance.Relative(4.055e-12, result.Case!.Stack.Layers[0].DiffusivitySquareMetersPerSecond, 1e-3, "estimated D at 70 C");
+        Tolerance.Relative(4.055e-12, result.Case!.WithFirstStageDiffusivities().Stack.Layers[0].DiffusivitySquareMetersPerSecond, 1e-3, "estimated D at 70 C");
     }
 
     [Fact]
@@ -99,7 +99,7 @@ public sealed class FoodContactReaderTests
 
         Assert.True(result.IsValid, result.FormatErrors());
         Assert.Equal("measured", result.Case!.Stack.Layers[1].DiffusivityOrigin);
-        Assert.StartsWith("measured;", result.Case.FoodContact!.Diffusivities[1].Describe(), StringComparison.Ordinal);
+        Assert.StartsWith("measured;", result.Case.Stack.Layers[1].Diffusivity.Describe(), StringComparison.Ordinal);
         Assert.Equal("estimated", Layers.Core.Reports.InputTables.OriginOf(result.Case, 0));
     }
 

@@ -50,7 +50,6 @@ public sealed class FunctionalBarrierTests
             FoodContact = new FoodContactSettings
             {
                 Stages = [stage],
-                Diffusivities = [new GivenDiffusivity(1e-13), new GivenDiffusivity(1e-17)],
                 FoodSide = Side.Right,
             },
         };

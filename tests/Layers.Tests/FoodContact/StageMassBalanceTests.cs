@@ -16,16 +16,16 @@ public sealed class StageMassBalanceTests
     [Fact]
     public void Mass_balance_holds_across_stages_with_a_bath_and_a_food()
     {
-        var outer = new Layer("outer", 20e-6, 1e-13, 2, 0, 900);
-        var core = new Layer("core", 40e-6, 1e-13, 1, 0.9, 900);
-        var skin = new Layer("skin", 10e-6, 1e-15, 0.5, 0, 900);
+        var arrhenius = new ArrheniusDiffusivity(1e-13, 298.15, 90e3);
+        var outer = new Layer("outer", 20e-6, arrhenius, 2, 0, 900);
+        var core = new Layer("core", 40e-6, arrhenius, 1, 0.9, 900);
+        var skin = new Layer("skin", 10e-6, arrhenius, 0.5, 0, 900);
         var stages = new[]
         {
             new TemperatureStage("fill", 2 * 3600, 343.15),
             new TemperatureStage("cold", 5 * Day, 278.15) { DiffusivityOverrides = new Dictionary<int, double> { [2] = 1e-17 } },
             new TemperatureStage("storage", 30 * Day, 298.15),
         };
-        var arrhenius = new ArrheniusDiffusivity(1e-13, 298.15, 90e3);
         var simulation = new SimulationCase
         {
             Title = "three stages",
@@ -37,7 +37,6 @@ public sealed class StageMassBalanceTests
             FoodContact = new FoodContactSettings
             {
                 Stages = stages,
-                Diffusivities = [arrhenius, arrhenius, arrhenius],
                 FoodSide = Side.Right,
             },
         };

@@ -19,7 +19,7 @@ public sealed class TemperatureStageTests
         };
         var simulation = FoodCases.Film(2, [new TemperatureStage("storage", 86400, 298.15)], source);
 
-        var staged = stage.Apply(simulation, [source]);
+        var staged = stage.Apply(simulation);
 
         Tolerance.Relative(6.88574e-12, staged.Stack.Layers[0].DiffusivitySquareMetersPerSecond, 1e-5, "D at 70 degC");
         Assert.Equal(2, staged.Stack.Layers[0].PartitionCoefficient);
