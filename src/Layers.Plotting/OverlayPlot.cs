@@ -25,7 +25,7 @@ public static class OverlayPlot
         };
         var computed = new ScatterSeries
         {
-            Title = "computed (default accuracy)",
+            Title = $"computed ({VerificationSuite.BenchmarkSettings})",
             MarkerType = MarkerType.Circle,
             MarkerSize = PlotStyle.MarkerSize,
             MarkerFill = PlotStyle.SeriesColor(1),

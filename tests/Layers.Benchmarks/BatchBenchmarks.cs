@@ -36,7 +36,7 @@ public class BatchBenchmarks
     [Benchmark]
     public int Batch()
     {
-        var rows = BatchRunner.Run(_items, _output, Environment.ProcessorCount, Files, progress: null, CancellationToken.None);
+        var rows = BatchRunner.Run(_items, new BatchRunOptions(_output, Environment.ProcessorCount), Files, progress: null, CancellationToken.None);
         var succeeded = rows.Count(row => row.Status == BatchStatus.Succeeded);
         return succeeded == CaseCount
             ? succeeded

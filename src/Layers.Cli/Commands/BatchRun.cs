@@ -21,11 +21,9 @@ internal static class BatchRun
 
         var rows = BatchProgressDisplay.Run(collection.Items, settings, output, error, progress => BatchRunner.Run(
             collection.Items,
-            settings.OutputRoot,
-            settings.Jobs,
+            new BatchRunOptions(settings.OutputRoot, settings.Jobs) { Access = settings.Access },
             (result, item) => CaseFiles.Build(result, settings with { CasePath = item.File }, cancellation),
             progress,
-            settings.Access,
             cancellation));
         try
         {

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using Layers.Core.Batch;
 using Layers.Core.Cases;
 using Layers.Core.Studies;
 
@@ -43,7 +44,7 @@ internal static class CaseArgument
     /// <summary>Prints every error of an invalid case to <paramref name="error"/>, under a line that counts them.</summary>
     public static void ReportInvalid(string path, IReadOnlyList<CaseError> errors, TextWriter error)
     {
-        error.WriteLine($"{path}: invalid case ({errors.Count} problem{(errors.Count == 1 ? string.Empty : "s")}):");
+        error.WriteLine($"{path}: {CaseRunOutcome.InvalidCaseHeading(errors.Count)}");
         error.WriteLine(new CaseReadResult(path, null, errors).FormatErrors());
     }
 }

@@ -1,5 +1,7 @@
 using System.CommandLine;
 using System.Text;
+using Layers.Core.Batch;
+using Layers.Core.Domain;
 using Layers.Core.Reports;
 using Layers.Core.Studies;
 using Layers.Plotting;
@@ -13,6 +15,9 @@ namespace Layers.Cli.Commands;
 /// </summary>
 internal static class DesignCommand
 {
+    /// <summary>The study's JSON file, also what --json prints.</summary>
+    private const string Json = "design.json";
+
     public static Command Create(TextWriter output, TextWriter error)
     {
         var caseFile = CaseArgument.Create();
@@ -30,31 +35,19 @@ internal static class DesignCommand
 
     private static int Execute(string casePath, StudyOptions.Values settings, TextWriter output, TextWriter error, CancellationToken cancellation)
     {
-        if (StudyCase.Read(casePath, "design", error) is not var (simulation, document))
-        {
-            return ExitCodes.InvalidInput;
-        }
-
-        // Read once already with the case, so valid here.
-        var design = DesignReader.Read(document, casePath, simulation, [])!;
-        var outcome = DesignSolver.Solve(document, casePath, design, settings.Jobs, cancellation);
-        if (StudyCase.Failure(casePath, outcome.Status, outcome.Message, outcome.Errors, error) is { } failed)
+        var run = StudyRun.Execute(
+            settings.Request(casePath, "design"),
+            "design",
+            // Read once already with the case, so valid here.
+            (simulation, document, token) => DesignSolver.Solve(document, casePath, DesignReader.Read(document, casePath, simulation, [])!, settings.Jobs, token),
+            (simulation, outcome, token) => Files(casePath, simulation, outcome, settings, token),
+            cancellation);
+        if (CaseOutcomeReport.Failure(casePath, run.Run, error) is { } failed)
         {
             return failed;
         }
 
-        var json = DesignReport.Json(outcome, casePath);
-        var files = new Dictionary<string, byte[]> { ["design.json"] = Encoding.UTF8.GetBytes(json) };
-        if (settings.Plots && DesignPlot.Render(outcome, simulation.Title, settings.PlotOptions) is { } png)
-        {
-            files["design.png"] = png;
-        }
-
-        if (StudyCase.Write(settings.OutputRoot, casePath, "design", files, error) is not { } folder)
-        {
-            return ExitCodes.OutputFailed;
-        }
-
+        var outcome = run.Study!;
         if (outcome.Status == StudyStatus.NotReached)
         {
             error.WriteLine($"{casePath}: {DesignReport.Line(outcome)}");
@@ -62,21 +55,35 @@ internal static class DesignCommand
 
         if (settings.Json)
         {
-            output.Write(json);
+            output.Write(Encoding.UTF8.GetString(run.Run.Files![Json]));
         }
         else if (!settings.Quiet)
         {
-            output.WriteLine($"{simulation.Title} ({casePath})");
+            output.WriteLine($"{run.Case!.Title} ({casePath})");
             if (outcome.Status == StudyStatus.Done)
             {
                 output.WriteLine($"  {DesignReport.Line(outcome)}");
             }
 
-            output.WriteLine($"results: {folder}");
+            output.WriteLine($"results: {run.Run.Folder}");
             output.WriteLine();
             output.WriteLine(DesignReport.Caution(outcome));
         }
 
         return outcome.Status == StudyStatus.Done ? ExitCodes.Success : ExitCodes.NoTrustworthyAnswer;
+    }
+
+    /// <summary>design.json and design.png; stops before the plot once cancelled.</summary>
+    private static Dictionary<string, byte[]> Files(
+        string casePath, SimulationCase simulation, DesignOutcome outcome, StudyOptions.Values settings, CancellationToken cancellation)
+    {
+        var files = new Dictionary<string, byte[]> { [Json] = Encoding.UTF8.GetBytes(DesignReport.Json(outcome, casePath)) };
+        cancellation.ThrowIfCancellationRequested();
+        if (settings.Plots && DesignPlot.Render(outcome, simulation.Title, settings.PlotOptions) is { } png)
+        {
+            files["design.png"] = png;
+        }
+
+        return files;
     }
 }

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Text;
+using Layers.Core.Batch;
 using Layers.Core.Domain;
 using Layers.Core.Fitting;
 using Layers.Core.Reports;
@@ -84,40 +85,16 @@ internal static class FitCommand
             return ExitCodes.InvalidInput;
         }
 
-        FitResult? fit;
-        try
+        var request = new CaseRunRequest(settings.CasePath, Path.GetFileNameWithoutExtension(settings.CasePath) + "-fit", settings.OutputRoot);
+        var run = StudyRun.Finish(request, token => CaseFitter.Run(prepared, token), (outcome, token) => Files(outcome.Result!, settings.Plots, token), cancellation);
+        if (CaseOutcomeReport.Failure(settings.CasePath, run.Run, error) is { } failed)
         {
-            fit = CaseFitter.Fit(prepared, cancellation);
-        }
-        catch (OperationCanceledException)
-        {
-            error.WriteLine($"{settings.CasePath}: fit cancelled; no results were written.");
-            return ExitCodes.Cancelled;
+            return failed;
         }
 
-        if (fit is null)
-        {
-            error.WriteLine($"{settings.CasePath}: the solver cannot solve the case at its starting values; no results were written.");
-            return ExitCodes.SolverFailed;
-        }
-
-        var files = Files(fit, settings.Plots);
-        string folder;
-        try
-        {
-            folder = CaseOutputFolder.Write(settings.OutputRoot, Path.GetFileNameWithoutExtension(settings.CasePath) + "-fit", files, cancellation);
-        }
-        catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
-        {
-            error.WriteLine($"{settings.CasePath}: fit cancelled; no results were written.");
-            return ExitCodes.Cancelled;
-        }
-        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
-        {
-            error.WriteLine($"{settings.CasePath}: cannot write results under '{settings.OutputRoot}': {exception.Message}");
-            return ExitCodes.OutputFailed;
-        }
-
+        var fit = run.Study!.Result!;
+        var files = run.Run.Files!;
+        var folder = run.Run.Folder!;
         if (settings.Json)
         {
             output.Write(Encoding.UTF8.GetString(files["fit.json"]));
@@ -130,15 +107,21 @@ internal static class FitCommand
         return fit.IsTrustworthy ? ExitCodes.Success : ExitCodes.NoTrustworthyAnswer;
     }
 
-    private static Dictionary<string, byte[]> Files(FitResult fit, bool plots)
+    /// <summary>The files of a fit; stops between them once cancelled.</summary>
+    private static Dictionary<string, byte[]> Files(FitResult fit, bool plots, CancellationToken cancellation)
     {
-        var files = new Dictionary<string, byte[]>
+        var files = new Dictionary<string, byte[]>();
+        void Add(string name, Func<string> text)
         {
-            ["fit.json"] = Encoding.UTF8.GetBytes(FitJson.Write(fit)),
-            ["fit-points.csv"] = Encoding.UTF8.GetBytes(FitTables.PointsCsv(fit)),
-            ["fit-curve.csv"] = Encoding.UTF8.GetBytes(FitTables.CurveCsv(fit)),
-            ["fitted-case.json"] = Encoding.UTF8.GetBytes(fit.FittedCaseJson + "\n"),
-        };
+            cancellation.ThrowIfCancellationRequested();
+            files[name] = Encoding.UTF8.GetBytes(text());
+        }
+
+        Add("fit.json", () => FitJson.Write(fit));
+        Add("fit-points.csv", () => FitTables.PointsCsv(fit));
+        Add("fit-curve.csv", () => FitTables.CurveCsv(fit));
+        Add("fitted-case.json", () => fit.FittedCaseJson + "\n");
+        cancellation.ThrowIfCancellationRequested();
         if (plots)
         {
             files[FitPlot.FileName] = FitPlot.Render(fit, new PlotOptions());

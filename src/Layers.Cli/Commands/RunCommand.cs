@@ -134,24 +134,9 @@ internal static class RunCommand
             (result, token) => buildFiles(result, settings, token),
             phase => phases.Mark(PhaseName(phase, settings.Plots)),
             cancellation);
-        switch (outcome.Status)
+        if (CaseOutcomeReport.Failure(casePath, outcome, error) is { } failed)
         {
-            case CaseRunStatus.Succeeded:
-                break;
-            case CaseRunStatus.Invalid:
-                CaseArgument.ReportInvalid(casePath, outcome.Errors, error);
-                return ExitCodes.InvalidInput;
-            case CaseRunStatus.SolverFailed:
-                error.WriteLine($"{casePath}: {outcome.Message}");
-                return ExitCodes.SolverFailed;
-            case CaseRunStatus.OutputFailed:
-                error.WriteLine($"{casePath}: {outcome.Message}");
-                return ExitCodes.OutputFailed;
-            case CaseRunStatus.Cancelled:
-                error.WriteLine($"{casePath}: {outcome.Message}");
-                return ExitCodes.Cancelled;
-            default:
-                throw new InvalidOperationException($"unknown status {outcome.Status}");
+            return failed;
         }
 
         var result = outcome.Result!;
@@ -191,7 +176,8 @@ internal static class RunCommand
             error.WriteLine(phases.Describe());
         }
 
-        return result.FoodContact?.MeetsLimit == false ? ExitCodes.LimitExceeded : ExitCodes.Success;
+        // The verdict a batch row carries too (LimitCheck), so one case gives the same exit code alone and in a batch.
+        return outcome.Limit?.Exceeded == true ? ExitCodes.LimitExceeded : ExitCodes.Success;
     }
 
     /// <summary>The name of a phase in the <c>--timing</c> line.</summary>

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using Layers.Core.Batch;
 using Layers.Plotting;
 
 namespace Layers.Cli.Commands;
@@ -48,5 +49,10 @@ internal sealed class StudyOptions
         new PlotOptions(parseResult.GetValue(_width), parseResult.GetValue(_height)));
 
     /// <summary>The parsed options.</summary>
-    public sealed record Values(string OutputRoot, int Jobs, bool Quiet, bool Json, bool Plots, PlotOptions PlotOptions);
+    public sealed record Values(string OutputRoot, int Jobs, bool Quiet, bool Json, bool Plots, PlotOptions PlotOptions)
+    {
+        /// <summary>A study of a case, written as one folder <c>OUT/&lt;case name&gt;.&lt;study&gt;/</c> beside the forward runs' folders.</summary>
+        public CaseRunRequest Request(string casePath, string study) =>
+            new(casePath, $"{Path.GetFileNameWithoutExtension(casePath)}.{study}", OutputRoot);
+    }
 }

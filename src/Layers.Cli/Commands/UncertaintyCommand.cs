@@ -1,5 +1,8 @@
 using System.CommandLine;
 using System.Text;
+using System.Text.Json.Nodes;
+using Layers.Core.Batch;
+using Layers.Core.Domain;
 using Layers.Core.Reports;
 using Layers.Core.Studies;
 using Layers.Plotting;
@@ -13,6 +16,9 @@ namespace Layers.Cli.Commands;
 /// </summary>
 internal static class UncertaintyCommand
 {
+    /// <summary>The study's JSON file, also what --json prints.</summary>
+    private const string Json = "uncertainty.json";
+
     public static Command Create(TextWriter output, TextWriter error)
     {
         var caseFile = CaseArgument.Create();
@@ -40,49 +46,34 @@ internal static class UncertaintyCommand
     private static int Execute(
         string casePath, (int? Samples, int? Seed, bool Latin) overrides, StudyOptions.Values settings, TextWriter output, TextWriter error, CancellationToken cancellation)
     {
-        if (StudyCase.Read(casePath, "uncertainty", error) is not var (simulation, document))
+        UncertaintyOutcome Solve(SimulationCase simulation, JsonObject document, CancellationToken token)
         {
-            return ExitCodes.InvalidInput;
+            // Read once already with the case, so valid here.
+            var study = UncertaintyReader.Read(document, casePath, simulation, [])!;
+            study = study with
+            {
+                Samples = overrides.Samples ?? study.Samples,
+                Seed = overrides.Seed ?? study.Seed,
+                Sampling = overrides.Latin ? SamplingMethod.LatinHypercube : study.Sampling,
+            };
+            return UncertaintyRunner.Run(document, casePath, simulation, study, settings.Jobs, token);
         }
 
-        // Read once already with the case, so valid here.
-        var study = UncertaintyReader.Read(document, casePath, simulation, [])!;
-        study = study with
-        {
-            Samples = overrides.Samples ?? study.Samples,
-            Seed = overrides.Seed ?? study.Seed,
-            Sampling = overrides.Latin ? SamplingMethod.LatinHypercube : study.Sampling,
-        };
-        var outcome = UncertaintyRunner.Run(document, casePath, simulation, study, settings.Jobs, cancellation);
-        if (StudyCase.Failure(casePath, outcome.Status, outcome.Message, outcome.Errors, error) is { } failed)
+        var run = StudyRun.Execute(
+            settings.Request(casePath, "uncertainty"), "uncertainty", Solve, (_, outcome, token) => Files(casePath, outcome, settings, token), cancellation);
+        if (CaseOutcomeReport.Failure(casePath, run.Run, error) is { } failed)
         {
             return failed;
         }
 
-        var json = UncertaintyReport.Json(outcome, casePath);
-        var files = new Dictionary<string, byte[]>
-        {
-            ["uncertainty.json"] = Encoding.UTF8.GetBytes(json),
-            ["percentiles.csv"] = Encoding.UTF8.GetBytes(UncertaintyReport.PercentilesCsv(outcome)),
-            ["samples.csv"] = Encoding.UTF8.GetBytes(UncertaintyReport.SamplesCsv(outcome)),
-        };
-        if (settings.Plots && SpreadPlot.Render(outcome, settings.PlotOptions with { LogTimeAxis = false }) is { } png)
-        {
-            files["spread.png"] = png;
-        }
-
-        if (StudyCase.Write(settings.OutputRoot, casePath, "uncertainty", files, error) is not { } folder)
-        {
-            return ExitCodes.OutputFailed;
-        }
-
+        var outcome = run.Study!;
         if (settings.Json)
         {
-            output.Write(json);
+            output.Write(Encoding.UTF8.GetString(run.Run.Files![Json]));
         }
         else if (!settings.Quiet)
         {
-            output.WriteLine($"{simulation.Title} ({casePath})");
+            output.WriteLine($"{run.Case!.Title} ({casePath})");
             foreach (var line in UncertaintyReport.Lines(outcome))
             {
                 output.WriteLine($"  {line}");
@@ -93,11 +84,33 @@ internal static class UncertaintyCommand
                 output.WriteLine(note);
             }
 
-            output.WriteLine($"results: {folder}");
+            output.WriteLine($"results: {run.Run.Folder}");
             output.WriteLine();
             output.WriteLine(CaseCautions.Paragraph(outcome.BaseCase));
         }
 
         return ExitCodes.Success;
+    }
+
+    /// <summary>uncertainty.json, percentiles.csv, samples.csv and spread.png; stops between them once cancelled.</summary>
+    private static Dictionary<string, byte[]> Files(string casePath, UncertaintyOutcome outcome, StudyOptions.Values settings, CancellationToken cancellation)
+    {
+        var files = new Dictionary<string, byte[]>();
+        void Add(string name, Func<string> text)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            files[name] = Encoding.UTF8.GetBytes(text());
+        }
+
+        Add(Json, () => UncertaintyReport.Json(outcome, casePath));
+        Add("percentiles.csv", () => UncertaintyReport.PercentilesCsv(outcome));
+        Add("samples.csv", () => UncertaintyReport.SamplesCsv(outcome));
+        cancellation.ThrowIfCancellationRequested();
+        if (settings.Plots && SpreadPlot.Render(outcome, settings.PlotOptions with { LogTimeAxis = false }) is { } png)
+        {
+            files["spread.png"] = png;
+        }
+
+        return files;
     }
 }

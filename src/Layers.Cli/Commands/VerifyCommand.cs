@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Text;
+using Layers.Core.Batch;
 using Layers.Core.Reports;
 using Layers.Core.Verification;
 using Layers.Plotting;
@@ -20,13 +21,30 @@ internal static class VerifyCommand
         CommandLineRules.NonEmptyPath(report);
         var command = new Command("verify", "Run the analytic benchmarks and show how closely the tool reproduces them.");
         command.Options.Add(report);
-        command.SetAction((parseResult, cancellation) => Task.FromResult(Execute(parseResult.GetValue(report), output, error, cancellation)));
+        command.SetAction((parseResult, cancellation) =>
+        {
+            using var interrupt = new InterruptScope(cancellation);
+            return Task.FromResult(Execute(parseResult.GetValue(report), output, error, VerificationSuite.Run, interrupt.Token));
+        });
         return command;
     }
 
-    private static int Execute(string? reportFolder, TextWriter output, TextWriter error, CancellationToken cancellation)
+    /// <summary>Runs the suite given (tests give one that cancels) and prints, and writes the report, as the command does.</summary>
+    internal static int Execute(
+        string? reportFolder,
+        TextWriter output,
+        TextWriter error,
+        Func<CancellationToken, IReadOnlyList<BenchmarkResult>> runSuite,
+        CancellationToken cancellation)
     {
-        var results = VerificationSuite.Run(cancellation);
+        var results = runSuite(cancellation);
+        if (cancellation.IsCancellationRequested)
+        {
+            // A benchmark stopped part way compares a partial run with its solution: no verdict, nothing written.
+            error.WriteLine($"verify: {CaseRun.CancelledMessage}");
+            return ExitCodes.Cancelled;
+        }
+
         ConsoleTables.Write(output, Table(results));
         var failed = results.Count(result => !result.Passed);
         output.WriteLine(failed == 0 ? $"all {results.Count} benchmarks pass" : $"{failed} of {results.Count} benchmarks FAIL");
@@ -34,8 +52,13 @@ internal static class VerifyCommand
         {
             try
             {
-                WriteReport(reportFolder, results);
+                WriteReport(reportFolder, results, cancellation);
                 output.WriteLine($"report: {Path.Combine(reportFolder, "validation.md")}");
+            }
+            catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
+            {
+                error.WriteLine($"verify: {CaseRun.CancelledMessage}");
+                return ExitCodes.Cancelled;
             }
             catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
             {
@@ -48,7 +71,7 @@ internal static class VerifyCommand
     }
 
     private static TextTable Table(IReadOnlyList<BenchmarkResult> results) => new(
-        "Analytic benchmarks at default accuracy",
+        $"Analytic benchmarks at fixed numerics ({VerificationSuite.BenchmarkSettings})",
         ["benchmark", "source", "quantity", "analytic", "computed", "rel. error", "verdict"],
         results.Select(result => (IReadOnlyList<string>)
         [
@@ -61,7 +84,13 @@ internal static class VerifyCommand
             result.Passed ? "pass" : "FAIL",
         ]).ToArray());
 
-    private static void WriteReport(string folder, IReadOnlyList<BenchmarkResult> results)
+    /// <summary>
+    /// Writes validation.md and its pictures (validation/). Everything is made in memory first, checking cancellation
+    /// between pictures; the pictures' folder is then committed as a whole (<see cref="CaseOutputFolder"/>, nothing
+    /// once cancelled) and the page after it as a whole (<see cref="AtomicFile"/>), so that an interrupted run leaves
+    /// the earlier report, and a page never shows pictures that are not there.
+    /// </summary>
+    private static void WriteReport(string folder, IReadOnlyList<BenchmarkResult> results, CancellationToken cancellation)
     {
         var pictures = new Dictionary<int, string>();
         var files = new Dictionary<string, byte[]>();
@@ -70,17 +99,16 @@ internal static class VerifyCommand
         {
             if (results[i].Curve is { } curve)
             {
+                cancellation.ThrowIfCancellationRequested();
                 var name = FormattableString.Invariant($"benchmark-{i + 1:00}.png");
                 files[name] = OverlayPlot.Render(results[i], curve, options);
                 pictures[i] = $"{PictureFolder}/{name}";
             }
         }
 
-        Directory.CreateDirectory(folder);
-        CaseOutputFolder.Write(folder, PictureFolder, files);
-        var markdown = Path.Combine(folder, "validation.md");
-        var staging = markdown + ".writing";
-        File.WriteAllText(staging, ValidationMarkdown.Write(results, pictures), new UTF8Encoding(false));
-        File.Move(staging, markdown, overwrite: true);
+        var page = Encoding.UTF8.GetBytes(ValidationMarkdown.Write(results, pictures));
+        CaseOutputFolder.Write(folder, PictureFolder, files, cancellation);
+        // The pictures are committed: the page that shows them follows, cancelled or not, so the two always match.
+        AtomicFile.Write(Path.Combine(folder, "validation.md"), page);
     }
 }

@@ -1,4 +1,3 @@
-using Layers.Core.Cases;
 using Layers.Core.Results;
 
 namespace Layers.Core.Batch;
@@ -14,7 +13,7 @@ public interface IBatchProgress
 }
 
 /// <summary>
-/// Runs the cases of a batch in parallel, at most <c>jobs</c> at a time. Each case is read, solved and written on
+/// Runs the cases of a batch in parallel, at most <see cref="BatchRunOptions.Jobs"/> at a time. Each case is read, solved and written on
 /// its own by the pipeline a single run uses (<see cref="CaseRun"/>): a bad or failing case becomes a row with its
 /// message and never stops the others. Each case folder is written as a whole (<see cref="Reports.CaseOutputFolder"/>). On cancellation the cases running are stopped (in their solve,
 /// or while their files are made or written: nothing of theirs is committed), the ones not started are marked
@@ -24,8 +23,7 @@ public static class BatchRunner
 {
     /// <summary>Runs the cases and returns one row per case, in the order of <see cref="BatchRow.Ordered"/>.</summary>
     /// <param name="items">The cases.</param>
-    /// <param name="outputRoot">The folder that receives one folder per case.</param>
-    /// <param name="jobs">How many cases run at once (at least 1).</param>
+    /// <param name="options">Where the case folders go, how many cases run at once, which files a case may name.</param>
     /// <param name="buildFiles">
     /// The files to write for a solved case, by name (summary.json, CSV, plots ...); it may throw
     /// <see cref="OperationCanceledException"/> once <paramref name="cancellation"/> fires.
@@ -34,35 +32,18 @@ public static class BatchRunner
     /// <param name="cancellation">Stops the batch.</param>
     public static IReadOnlyList<BatchRow> Run(
         IReadOnlyList<BatchItem> items,
-        string outputRoot,
-        int jobs,
+        BatchRunOptions options,
         Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
         IBatchProgress? progress,
-        CancellationToken cancellation) =>
-        Run(items, outputRoot, jobs, buildFiles, progress, CaseFileAccess.InsideCaseFolder, cancellation);
-
-    /// <summary>As the other overload, with the files the cases may name chosen by the user.</summary>
-    /// <param name="items">The cases.</param>
-    /// <param name="outputRoot">The folder that receives one folder per case.</param>
-    /// <param name="jobs">How many cases run at once (at least 1).</param>
-    /// <param name="buildFiles">The files to write for a solved case, by name (summary.json, CSV, plots ...).</param>
-    /// <param name="progress">Told about starts and ends; may be null.</param>
-    /// <param name="access">Which files a case may name (its measured data).</param>
-    /// <param name="cancellation">Stops the batch.</param>
-    public static IReadOnlyList<BatchRow> Run(
-        IReadOnlyList<BatchItem> items,
-        string outputRoot,
-        int jobs,
-        Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
-        IBatchProgress? progress,
-        CaseFileAccess access,
         CancellationToken cancellation)
     {
+        ArgumentNullException.ThrowIfNull(items);
+        ArgumentNullException.ThrowIfNull(options);
         var rows = new BatchRow[items.Count];
-        var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, jobs) };
+        var parallel = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, options.Jobs) };
         // The token is checked per case rather than given to Parallel.For, which would throw instead of letting the
         // cases not started get their cancelled rows.
-        Parallel.For(0, items.Count, options, index =>
+        Parallel.For(0, items.Count, parallel, index =>
         {
             var item = items[index];
             if (cancellation.IsCancellationRequested)
@@ -72,7 +53,7 @@ public static class BatchRunner
             }
 
             progress?.Started(item);
-            rows[index] = RunOne(item, outputRoot, buildFiles, access, cancellation);
+            rows[index] = RunOne(item, options, buildFiles, cancellation);
             progress?.Finished(rows[index]);
         });
         return BatchRow.Ordered(rows);
@@ -80,12 +61,11 @@ public static class BatchRunner
 
     private static BatchRow RunOne(
         BatchItem item,
-        string outputRoot,
+        BatchRunOptions options,
         Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
-        CaseFileAccess access,
         CancellationToken cancellation)
     {
-        var request = new CaseRunRequest(item.File, item.Name, outputRoot) { Json = item.Json, Errors = item.Errors, Access = access };
+        var request = new CaseRunRequest(item.File, item.Name, options.OutputRoot) { Json = item.Json, Errors = item.Errors, Access = options.Access };
         CaseRunOutcome outcome;
         try
         {

@@ -39,12 +39,12 @@ public static class CaseRun
         phaseEnded?.Invoke(CaseRunPhase.Read);
         if (read.Case is not { } simulation)
         {
-            return new CaseRunOutcome(CaseRunStatus.Invalid, Describe(read.Errors, request.File)) { Errors = read.Errors };
+            return InvalidCase(read);
         }
 
         if (cancellation.IsCancellationRequested)
         {
-            return new CaseRunOutcome(CaseRunStatus.Cancelled, CancelledMessage);
+            return Cancelled;
         }
 
         var clock = Stopwatch.StartNew();
@@ -53,7 +53,7 @@ public static class CaseRun
         phaseEnded?.Invoke(CaseRunPhase.Solve);
         if (result.Statistics.StopReason == StopReason.Cancelled)
         {
-            return new CaseRunOutcome(CaseRunStatus.Cancelled, CancelledMessage) { SolveSeconds = seconds };
+            return Cancelled with { SolveSeconds = seconds };
         }
 
         if (!result.Completed)
@@ -61,26 +61,62 @@ public static class CaseRun
             return new CaseRunOutcome(CaseRunStatus.SolverFailed, $"{result.FailureReason}; no results were written.") { Result = result, SolveSeconds = seconds };
         }
 
+        var written = Commit(request, token => buildFiles(result, token), phaseEnded, cancellation);
+        return written with { Result = result, SolveSeconds = seconds };
+    }
+
+    /// <summary>
+    /// The last phases of a run, shared with the studies: makes the files (the delegate may throw
+    /// <see cref="OperationCanceledException"/> once <paramref name="cancellation"/> fires) and commits the folder
+    /// <c>OutputRoot/Name</c> of the request as a whole. Succeeded with the files and the folder, or cancelled or
+    /// failed with nothing written.
+    /// </summary>
+    /// <param name="request">Where the folder goes.</param>
+    /// <param name="buildFiles">The files, by name.</param>
+    /// <param name="phaseEnded">Told as each phase ends; may be null.</param>
+    /// <param name="cancellation">Checked before each file and before the folder is committed.</param>
+    public static CaseRunOutcome Commit(
+        CaseRunRequest request,
+        Func<CancellationToken, IReadOnlyDictionary<string, byte[]>> buildFiles,
+        Action<CaseRunPhase>? phaseEnded,
+        CancellationToken cancellation)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(buildFiles);
         try
         {
-            var files = buildFiles(result, cancellation);
+            cancellation.ThrowIfCancellationRequested();
+            var files = buildFiles(cancellation);
             phaseEnded?.Invoke(CaseRunPhase.BuildFiles);
             var folder = CaseOutputFolder.Write(request.OutputRoot, request.Name, files, cancellation);
             phaseEnded?.Invoke(CaseRunPhase.Write);
-            return new CaseRunOutcome(CaseRunStatus.Succeeded, string.Empty) { Result = result, Files = files, Folder = folder, SolveSeconds = seconds };
+            return new CaseRunOutcome(CaseRunStatus.Succeeded, string.Empty) { Files = files, Folder = folder };
         }
         catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
         {
-            return new CaseRunOutcome(CaseRunStatus.Cancelled, CancelledMessage) { Result = result, SolveSeconds = seconds };
+            return Cancelled;
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {
-            return new CaseRunOutcome(CaseRunStatus.OutputFailed, $"cannot write results under '{request.OutputRoot}': {exception.Message}")
-            {
-                Result = result,
-                SolveSeconds = seconds,
-            };
+            return new CaseRunOutcome(CaseRunStatus.OutputFailed, $"cannot write results under '{request.OutputRoot}': {exception.Message}");
         }
+    }
+
+    /// <summary>The outcome of a run cancelled before its folder was committed.</summary>
+    public static CaseRunOutcome Cancelled { get; } = new(CaseRunStatus.Cancelled, CancelledMessage);
+
+    /// <summary>
+    /// The outcome of a case file that cannot be read or breaks a rule: the errors joined as its message (a batch
+    /// row), a line that counts them as its heading (a single run lists them below).
+    /// </summary>
+    public static CaseRunOutcome InvalidCase(CaseReadResult read)
+    {
+        ArgumentNullException.ThrowIfNull(read);
+        return new CaseRunOutcome(CaseRunStatus.Invalid, Describe(read.Errors, read.FileName))
+        {
+            Errors = read.Errors,
+            Heading = CaseRunOutcome.InvalidCaseHeading(read.Errors.Count),
+        };
     }
 
     private static CaseReadResult Read(CaseRunRequest request)

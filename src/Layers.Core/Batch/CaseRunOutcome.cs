@@ -11,6 +11,18 @@ namespace Layers.Core.Batch;
 /// </param>
 public sealed record CaseRunOutcome(CaseRunStatus Status, string Message)
 {
+    private readonly string? _heading;
+
+    /// <summary>
+    /// What a single run prints after the file name when the case did not succeed, with <see cref="Errors"/> listed
+    /// below it: the message, except for an invalid case file, whose errors are counted here and listed one a line.
+    /// </summary>
+    public string Heading
+    {
+        get => _heading ?? Message;
+        init => _heading = value;
+    }
+
     /// <summary>Every error of an invalid case, each with its JSON path; empty otherwise.</summary>
     public IReadOnlyList<CaseError> Errors { get; init; } = [];
 
@@ -28,4 +40,8 @@ public sealed record CaseRunOutcome(CaseRunStatus Status, string Message)
 
     /// <summary>The case's specific migration limit checked against its result, when the case gives one.</summary>
     public LimitCheck? Limit => Result is { } result ? LimitCheck.Of(result) : null;
+
+    /// <summary>The line above the errors of an invalid case file: "invalid case (2 problems):".</summary>
+    public static string InvalidCaseHeading(int errorCount) =>
+        $"invalid case ({errorCount} problem{(errorCount == 1 ? string.Empty : "s")}):";
 }

@@ -17,12 +17,9 @@ public static class GridBuilder
     public static Grid Build(SimulationCase simulation)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        return simulation.Numerics.Grid switch
-        {
-            DiffusionLengthMesh mesh => Build(simulation, mesh),
-            CellCountMesh count => Build(simulation.Stack, count),
-            _ => throw new ArgumentException($"unknown kind of mesh: {simulation.Numerics.Grid.GetType().Name}", nameof(simulation)),
-        };
+        return simulation.Numerics.Grid.Match(
+            mesh => Build(simulation, mesh),
+            count => Build(simulation.Stack, count));
     }
 
     private static Grid Build(SimulationCase simulation, DiffusionLengthMesh mesh)

@@ -25,6 +25,13 @@ public sealed record CellCountMesh(int TotalCells) : GridOptions
     public double MaximumWidthRatio { get; init; } = 20;
 
     /// <inheritdoc/>
+    public override T Match<T>(Func<DiffusionLengthMesh, T> byDiffusionLength, Func<CellCountMesh, T> byCellCount)
+    {
+        ArgumentNullException.ThrowIfNull(byCellCount);
+        return byCellCount(this);
+    }
+
+    /// <inheritdoc/>
     public override IEnumerable<(string Setting, string Message)> Problems()
     {
         if (TotalCells is < 8 or > 200_000)

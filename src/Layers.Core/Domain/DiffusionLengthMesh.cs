@@ -22,6 +22,13 @@ public sealed record DiffusionLengthMesh(
     public override int MinimumCellsPerLayer { get; init; } = MinimumCellsPerLayer;
 
     /// <inheritdoc/>
+    public override T Match<T>(Func<DiffusionLengthMesh, T> byDiffusionLength, Func<CellCountMesh, T> byCellCount)
+    {
+        ArgumentNullException.ThrowIfNull(byDiffusionLength);
+        return byDiffusionLength(this);
+    }
+
+    /// <inheritdoc/>
     public override IEnumerable<(string Setting, string Message)> Problems()
     {
         // The width comes from an accuracy, checked where it is read.

@@ -17,4 +17,12 @@ public abstract record GridOptions
 
     /// <summary>Lists every setting outside its admissible range, as (setting, message) pairs.</summary>
     public abstract IEnumerable<(string Setting, string Message)> Problems();
+
+    /// <summary>
+    /// The one way to tell the kinds apart: each kind calls its own arm. A switch with a fallback arm would let a new
+    /// kind build and fail at run time; a new kind here adds an arm, so every use fails to build until it handles it.
+    /// </summary>
+    /// <param name="byDiffusionLength">What to do with a <see cref="DiffusionLengthMesh"/>.</param>
+    /// <param name="byCellCount">What to do with a <see cref="CellCountMesh"/>.</param>
+    public abstract T Match<T>(Func<DiffusionLengthMesh, T> byDiffusionLength, Func<CellCountMesh, T> byCellCount);
 }

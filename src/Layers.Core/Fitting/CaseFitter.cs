@@ -34,25 +34,33 @@ public sealed class PreparedFit
 /// </summary>
 public static class CaseFitter
 {
-    /// <summary>Checks the request; on failure returns null and adds every problem found to <paramref name="errors"/>.</summary>
+    /// <summary>Reads the case of the request and checks the request; on failure returns null and adds every problem found to <paramref name="errors"/>.</summary>
     public static PreparedFit? Prepare(FitRequest request, List<string> errors)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(errors);
-        var before = errors.Count;
-        var read = CaseDocument.ReadFile(request.CasePath);
-        if (read.Case is not { } simulation)
+        var read = CaseDocument.ReadFileWithRoot(request.CasePath);
+        if (read.Read.Case is null)
         {
-            errors.Add(read.FormatErrors());
+            errors.Add(read.Read.FormatErrors());
             return null;
         }
 
-        // Read once already by the case reader, so a JSON object here unless the file changed meanwhile.
-        if (CaseVariation.Parse(CaseReader.ReadDocument(request.CasePath, out _) ?? string.Empty) is not { } root)
+        return Prepare(request, read, errors);
+    }
+
+    /// <summary>Checks the request against its case, already read and valid; on failure returns null and adds every problem found to <paramref name="errors"/>.</summary>
+    public static PreparedFit? Prepare(FitRequest request, CaseDocumentRead document, List<string> errors)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(document);
+        ArgumentNullException.ThrowIfNull(errors);
+        if (document.Read.Case is not { } simulation || document.Root is not { } root)
         {
-            errors.Add($"{request.CasePath}: $: cannot read the file again after reading it once; was it changed?");
-            return null;
+            throw new ArgumentException("the case must be valid", nameof(document));
         }
+
+        var before = errors.Count;
 
         if (root.ContainsKey("sweep"))
         {
@@ -84,6 +92,21 @@ public static class CaseFitter
 
         CheckData(request, simulation, errors);
         return errors.Count > before ? null : new PreparedFit(request, new FitModel(root, request.CasePath, parameters, request.Data, request.Face), parameters);
+    }
+
+    /// <summary>Runs the fit, telling how it ended: done, cancelled, or the model cannot be solved at the starting values.</summary>
+    public static FitOutcome Run(PreparedFit prepared, CancellationToken cancellation = default)
+    {
+        try
+        {
+            return Fit(prepared, cancellation) is { } fit
+                ? new FitOutcome(StudyStatus.Done, fit)
+                : new FitOutcome(StudyStatus.SolverFailed, null) { Message = "the solver cannot solve the case at its starting values" };
+        }
+        catch (OperationCanceledException) when (cancellation.IsCancellationRequested)
+        {
+            return new FitOutcome(StudyStatus.Cancelled, null) { Message = "cancelled" };
+        }
     }
 
     /// <summary>Runs the fit; null when the model cannot be solved at the starting values.</summary>

@@ -20,4 +20,22 @@ public static class CaseDocument
     /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
     public static CaseReadResult ReadText(string json, string fileName, CaseFileAccess access = CaseFileAccess.InsideCaseFolder) =>
         CaseReader.ReadText(json, fileName, access, StudySections.Check);
+
+    /// <summary>
+    /// Reads a case file from disk once, study sections included, and keeps its document for what varies the case
+    /// (a study writes its values into it, a fit its estimates).
+    /// </summary>
+    /// <param name="path">The case file.</param>
+    /// <param name="access">Which files the case may name; by default only those in its own folder.</param>
+    public static CaseDocumentRead ReadFileWithRoot(string path, CaseFileAccess access = CaseFileAccess.InsideCaseFolder)
+    {
+        if (CaseReader.ReadDocument(path, out var error) is not { } text)
+        {
+            return new CaseDocumentRead(new CaseReadResult(path, null, [error!]), null);
+        }
+
+        var read = ReadText(text, path, access);
+        // A valid case was parsed as a JSON object, so the document is one too.
+        return new CaseDocumentRead(read, read.IsValid ? CaseVariation.Parse(text) : null);
+    }
 }

@@ -9,7 +9,7 @@ namespace Layers.Core.Studies;
 public sealed record DesignPoint(double Value, double ResultSi);
 
 /// <summary>What a design found.</summary>
-public sealed record DesignOutcome
+public sealed record DesignOutcome : IStudyOutcome
 {
     /// <summary>The question.</summary>
     public required DesignSettings Settings { get; init; }

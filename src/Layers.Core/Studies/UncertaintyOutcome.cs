@@ -39,7 +39,7 @@ public sealed record Exceedance(StudyLimit Limit, int Above, int Counted, double
 }
 
 /// <summary>What an uncertainty study found.</summary>
-public sealed record UncertaintyOutcome
+public sealed record UncertaintyOutcome : IStudyOutcome
 {
     /// <summary>The study.</summary>
     public required UncertaintySettings Settings { get; init; }

@@ -6,8 +6,8 @@ using Layers.Core.Simulation;
 namespace Layers.Core.Verification;
 
 /// <summary>
-/// The analytic benchmarks the tool runs on itself (<c>layers verify</c>), each at default accuracy against a
-/// published solution. The same solutions check the solver in the test suite.
+/// The analytic benchmarks the tool runs on itself (<c>layers verify</c>), each at the fixed numerics
+/// <see cref="BenchmarkNumerics"/> against a published solution. The same solutions check the solver in the test suite.
 /// </summary>
 public static class VerificationSuite
 {
@@ -183,4 +183,11 @@ public static class VerificationSuite
     /// At the default of a case file (accuracy 1e-4) the time to release half into a perfect sink misses 1e-3 (1.4e-3).
     /// </summary>
     public static NumericsSettings BenchmarkNumerics { get; } = NumericsSettings.FixedCells(240, 1e-6);
+
+    /// <summary>
+    /// <see cref="BenchmarkNumerics"/> in words ("240 cells, relative step tolerance 1e-6"), taken from the settings
+    /// themselves so that the titles of the console table, the report and its plots say what was run.
+    /// </summary>
+    public static string BenchmarkSettings { get; } = FormattableString.Invariant(
+        $"{BenchmarkNumerics.Grid.Match(mesh => $"cells by diffusion length (width {mesh.WidthPerDiffusionLength:G3})", count => $"{count.TotalCells} cells")}, relative step tolerance {BenchmarkNumerics.Solver.RelativeTolerance:0.###e+0}");
 }

@@ -16,7 +16,7 @@ public sealed class BatchCancellationTests
             .ToList();
         using var cancellation = new CancellationTokenSource();
 
-        var rows = BatchRunner.Run(items, temp.Path, jobs: 1, Files, new CancelAfterFirst(cancellation), cancellation.Token);
+        var rows = BatchRunner.Run(items, new BatchRunOptions(temp.Path, Jobs: 1), Files, new CancelAfterFirst(cancellation), cancellation.Token);
 
         var finished = Assert.Single(rows, row => row.Status == BatchStatus.Succeeded);
         Assert.True(File.Exists(temp.Combine(finished.Name, "summary.json")));

@@ -25,7 +25,7 @@ public sealed class CancelWhileWritingTests
             return new() { ["summary.json"] = [1, 2, 3] };
         }
 
-        var rows = BatchRunner.Run(items, temp.Path, jobs: 1, CancelThenFiles, progress: null, cancellation.Token);
+        var rows = BatchRunner.Run(items, new BatchRunOptions(temp.Path, Jobs: 1), CancelThenFiles, progress: null, cancellation.Token);
 
         var row = Assert.Single(rows);
         Assert.Equal(BatchStatus.Cancelled, row.Status);

@@ -63,7 +63,7 @@ public sealed class SameMessageAloneAndInBatchTests
         }
 
         var code = RunCommand.Execute(new RunSettings(path, temp.Combine("alone")) { CasePaths = [path] }, output, error, CancelAlone, aloneCancellation.Token);
-        var row = Assert.Single(BatchRunner.Run([new BatchItem("membrane", path, BatchCases.Membrane, [], [])], temp.Combine("batch"), 1, CancelInBatch, null, batchCancellation.Token));
+        var row = Assert.Single(BatchRunner.Run([new BatchItem("membrane", path, BatchCases.Membrane, [], [])], new BatchRunOptions(temp.Combine("batch"), 1), CancelInBatch, null, batchCancellation.Token));
 
         Assert.Equal(ExitCodes.Cancelled, code);
         Assert.Equal(BatchStatus.Cancelled, row.Status);

@@ -1,4 +1,7 @@
 using Layers.Cli;
+using Layers.Cli.Commands;
+using Layers.Core.Batch;
+using Layers.Core.Domain;
 using Layers.Core.Verification;
 using Layers.Tests.TestSupport;
 
@@ -34,5 +37,46 @@ public sealed class VerifyCommandTests
         Assert.True(exact.Passed);
         Assert.False(off.Passed);
         Assert.Contains("| FAIL |", ValidationMarkdown.Write([exact, off], new Dictionary<int, string>()), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void The_title_names_the_fixed_mesh_and_step_tolerance_the_benchmarks_run_at()
+    {
+        using var output = new StringWriter();
+        using var error = new StringWriter();
+        var cells = Assert.IsType<CellCountMesh>(VerificationSuite.BenchmarkNumerics.Grid).TotalCells;
+        Assert.Equal(1e-6, VerificationSuite.BenchmarkNumerics.Solver.RelativeTolerance);
+
+        var code = VerifyCommand.Execute(null, output, error, _ => [new BenchmarkResult("b", "s", "q", 1.0, 1.0005, 1e-3)], CancellationToken.None);
+
+        // The console table wraps its title to the table's width: the words are compared, not the lines.
+        var words = string.Join(' ', output.ToString().Split([' ', '\n', '\r'], StringSplitOptions.RemoveEmptyEntries));
+        Assert.Equal(ExitCodes.Success, code);
+        Assert.Contains($"Analytic benchmarks at fixed numerics ({cells} cells, relative step tolerance 1e-6)", words, StringComparison.Ordinal);
+        Assert.DoesNotContain("default accuracy", words, StringComparison.Ordinal);
+        Assert.Contains($"at fixed numerics ({cells} cells, relative step tolerance 1e-6)", ValidationMarkdown.Write([], new Dictionary<int, string>()), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Verify_cancelled_while_the_benchmarks_run_keeps_the_earlier_report_and_exits_130()
+    {
+        using var temp = new TempFolder();
+        var earlier = temp.WriteFile("validation.md", "earlier report");
+        using var cancellation = new CancellationTokenSource();
+        using var output = new StringWriter();
+        using var error = new StringWriter();
+        IReadOnlyList<BenchmarkResult> CancelWhileRunning(CancellationToken token)
+        {
+            cancellation.Cancel(); // as if Ctrl+C came during the last benchmark
+            return [new BenchmarkResult("b", "s", "q", 1.0, 1.5, 1e-3)];
+        }
+
+        var code = VerifyCommand.Execute(temp.Path, output, error, CancelWhileRunning, cancellation.Token);
+
+        Assert.Equal(ExitCodes.Cancelled, code);
+        Assert.Contains(CaseRun.CancelledMessage, error.ToString(), StringComparison.Ordinal);
+        Assert.Equal("earlier report", File.ReadAllText(earlier));
+        Assert.Equal([earlier], Directory.GetFileSystemEntries(temp.Path));
+        Assert.Empty(output.ToString());
     }
 }
