@@ -60,6 +60,23 @@ public sealed class LimitedVolumeLaplaceTests
         }
     }
 
+    [Fact]
+    public void Time_to_a_concentration_limit_in_the_solution_matches_the_series()
+    {
+        // With K = 1 and the solution as the reference medium, c_solution = M_t / (V/A): reaching 70 % of its final
+        // concentration is reaching M_t/M_inf = 0.7 (Crank eq. 4.37 solved by bisection).
+        const double alpha = 2;
+        var volumePerArea = alpha * Thickness;
+        var solution = LaplaceSolution.For(Sheet(volumePerArea, 1));
+        var finalConcentration = InitialConcentration * Thickness * alpha / (1 + alpha) / volumePerArea;
+
+        var found = solution.TimeToMediumConcentration(Side.Right, 0.7 * finalConcentration, 10 * Thickness * Thickness / Diffusivity);
+
+        Assert.NotNull(found);
+        Tolerance.Relative(SolveForFraction(alpha, 0.7), found.Value, 1e-7, "time to 70 % of the final concentration");
+        Assert.Null(solution.TimeToMediumConcentration(Side.Right, 1.01 * finalConcentration, 10 * Thickness * Thickness / Diffusivity));
+    }
+
     private static double SolveForFraction(double alpha, double level)
     {
         double low = 0, high = 10 * Thickness * Thickness / Diffusivity;

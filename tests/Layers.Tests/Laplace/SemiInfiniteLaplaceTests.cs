@@ -36,6 +36,9 @@ public sealed class SemiInfiniteLaplaceTests
         Tolerance.Relative(expected, snapshot.LayerMassPerArea[1], 1e-8, "mass transferred into the second medium");
         Tolerance.Relative(c0 * thickness1 - expected, snapshot.LayerMassPerArea[0], 1e-8, "mass left in the first medium");
 
+        // The flux across the contact is the time derivative of A * 2 sqrt(D2 t / pi), i.e. the transferred mass / (2 t).
+        Tolerance.Relative(expected / (2 * time), snapshot.FluxAtInterfaces[1], 1e-8, "flux across the contact");
+
         // Depths measured from the contact: x < 0 in medium 1, x >= 0 in medium 2.
         double[] positions = [-0.3 * thickness1, -0.05 * thickness1, 0, 0.02 * thickness2, 0.1 * thickness2];
         var profile = solution.ConcentrationsAt([.. positions.Select(x => thickness1 + x)], time);
