@@ -14,6 +14,7 @@ internal static class CoreLayers
         "Domain",
         "Discretization",
         "Analytics",
+        "Laplace",
         "TimeStepping",
         "Results",
         "Permeation",

@@ -1,0 +1,79 @@
+using System.Numerics;
+
+namespace Layers.Core.Laplace;
+
+/// <summary>
+/// One layer in the Laplace domain at one value of s: how the transformed flux at its two faces follows from the
+/// transformed values of u = c / K there, in scaled form (docs/numerics.md, "The exact method in the Laplace domain").
+/// </summary>
+/// <remarks>
+/// In the layer, D u'' = s u - u0, so u(xi) = u0/s + [a sinh(q (L - xi)) + b sinh(q xi)] / sinh(q L) with
+/// q = sqrt(s / D), a and b the excess of u over u0/s at the left and right face. The flux in +x, -P u' with
+/// P = D K, is then F(0) = G a - H b and F(L) = H a - G b, with the self admittance G = P q coth(q L) and the cross
+/// admittance H = P q csch(q L); their difference T = G - H = P q tanh(q L / 2). All three are written through
+/// E = e^(-q L) and phi (see <see cref="ScaledExponentials"/>), so they hold for |q L| from 1e-8 to 1e4 and more.
+/// </remarks>
+internal readonly struct LayerTransfer
+{
+    private readonly double _thicknessMeters;
+    private readonly Complex _q;
+    private readonly Complex _phiOfQl;
+    private readonly Complex _phiOfTwoQl;
+
+    public LayerTransfer(Complex s, double thicknessMeters, double diffusivity, double permeability)
+    {
+        _thicknessMeters = thicknessMeters;
+        _q = Complex.Sqrt(s / diffusivity);
+        var ql = _q * thicknessMeters;
+        Decay = Complex.Exp(-ql);
+        _phiOfQl = ScaledExponentials.Phi(ql);
+        _phiOfTwoQl = ScaledExponentials.Phi(2 * ql);
+        var conductance = permeability / thicknessMeters;
+
+        // coth(x) = (1 + E^2) / (2 x phi(2x)) and csch(x) = E / (x phi(2x)), times P q = (P/L) x.
+        Self = conductance * (1 + (Decay * Decay)) / (2 * _phiOfTwoQl);
+        Cross = conductance * Decay / _phiOfTwoQl;
+
+        // tanh(x/2) = x phi(x) / (1 + E): no cancellation of G - H when x is small.
+        Storage = conductance * ql * ql * _phiOfQl / (1 + Decay);
+    }
+
+    /// <summary>E = e^(-q L), of modulus at most 1.</summary>
+    public Complex Decay { get; }
+
+    /// <summary>G = P q coth(q L), m/s.</summary>
+    public Complex Self { get; }
+
+    /// <summary>H = P q csch(q L), m/s.</summary>
+    public Complex Cross { get; }
+
+    /// <summary>T = G - H = P q tanh(q L / 2), m/s: what the layer takes up when both faces rise together.</summary>
+    public Complex Storage { get; }
+
+    /// <summary>Transformed flux in +x at the left face, from the face values of u and the layer's u0 / s.</summary>
+    public Complex FluxAtLeft(Complex left, Complex right, Complex initialOverS)
+        => (Self * (left - right)) + (Storage * (right - initialOverS));
+
+    /// <summary>Transformed flux in +x at the right face.</summary>
+    public Complex FluxAtRight(Complex left, Complex right, Complex initialOverS)
+        => (Self * (left - right)) - (Storage * (left - initialOverS));
+
+    /// <summary>
+    /// Transformed integral of u over the layer: L u0/s + (a + b) tanh(q L / 2) / q, with tanh(x/2)/q = L phi(x) / (1 + E).
+    /// </summary>
+    public Complex IntegralOfU(Complex left, Complex right, Complex initialOverS)
+        => (_thicknessMeters * initialOverS)
+            + ((left - initialOverS + right - initialOverS) * _thicknessMeters * _phiOfQl / (1 + Decay));
+
+    /// <summary>Transformed u at depth xi from the layer's left face, 0 &lt;= xi &lt;= L.</summary>
+    public Complex ValueAt(double depthMeters, Complex left, Complex right, Complex initialOverS)
+    {
+        var length = _thicknessMeters;
+        var remaining = length - depthMeters;
+
+        // sinh(q (L - xi)) / sinh(q L) = e^(-q xi) (L - xi) phi(2 q (L - xi)) / (L phi(2 q L)), and the mirror image.
+        var fromLeft = Complex.Exp(-_q * depthMeters) * remaining * ScaledExponentials.Phi(2 * _q * remaining) / (length * _phiOfTwoQl);
+        var fromRight = Complex.Exp(-_q * remaining) * depthMeters * ScaledExponentials.Phi(2 * _q * depthMeters) / (length * _phiOfTwoQl);
+        return initialOverS + ((left - initialOverS) * fromLeft) + ((right - initialOverS) * fromRight);
+    }
+}
