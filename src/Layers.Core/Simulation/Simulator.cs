@@ -52,11 +52,11 @@ public static class Simulator
                     final.Steady!.FluxKgPerSquareMeterSecond,
                     recorder.FluxAtEnd,
                     recorder.LagTimeSeconds,
-                    SingleMembrane.LagTimeSeconds(own))
+                    SingleMembrane.LagTimeSeconds(model.Case))
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
             DispersedLayers = undissolved?.Summaries ?? [],
-            DiffusionCell = DiffusionCellAnalysis.Of(own, recorder.Samples, sampling),
+            DiffusionCell = DiffusionCellAnalysis.Of(model.Case, recorder.Samples, sampling),
             Statistics = statistics,
             FailureReason = failure,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed

@@ -29,7 +29,6 @@ public sealed class LaplaceApplicabilityTests
             FoodContact = new FoodContactSettings
             {
                 Stages = [new TemperatureStage("storage", 1000, 298.15)],
-                Diffusivities = [new GivenDiffusivity(1e-12)],
                 FoodSide = Side.Right,
             },
         };
