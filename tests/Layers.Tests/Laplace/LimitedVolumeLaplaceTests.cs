@@ -78,23 +78,7 @@ public sealed class LimitedVolumeLaplaceTests
     }
 
     private static double SolveForFraction(double alpha, double level)
-    {
-        double low = 0, high = 10 * Thickness * Thickness / Diffusivity;
-        for (var i = 0; i < 200; i++)
-        {
-            var middle = 0.5 * (low + high);
-            if (PlaneSheetIntoLimitedVolume.FractionOfEquilibrium(Diffusivity, Thickness, alpha, middle) < level)
-            {
-                low = middle;
-            }
-            else
-            {
-                high = middle;
-            }
-        }
-
-        return 0.5 * (low + high);
-    }
+        => LimitedVolumeTimes.ToFraction(Diffusivity, Thickness, alpha, level);
 
     private static SimulationCase Sheet(double volumePerArea, double kSheet)
         => Cases.Make(Cases.Closed, Cases.Compartment(volumePerArea), 1, layers: Cases.Layer("sheet", Thickness, Diffusivity, kSheet, InitialConcentration));

@@ -1,0 +1,27 @@
+using Layers.Core.Analytics;
+
+namespace Layers.Tests.TestSupport;
+
+/// <summary>Crank's limited-volume series (The Mathematics of Diffusion, eq. 4.37) solved for a time.</summary>
+internal static class LimitedVolumeTimes
+{
+    /// <summary>The time at which M_t/M_inf reaches <paramref name="level"/>, by bisection over ten diffusion times.</summary>
+    public static double ToFraction(double diffusivity, double thickness, double alpha, double level)
+    {
+        double low = 0, high = 10 * thickness * thickness / diffusivity;
+        for (var i = 0; i < 200; i++)
+        {
+            var middle = 0.5 * (low + high);
+            if (PlaneSheetIntoLimitedVolume.FractionOfEquilibrium(diffusivity, thickness, alpha, middle) < level)
+            {
+                low = middle;
+            }
+            else
+            {
+                high = middle;
+            }
+        }
+
+        return 0.5 * (low + high);
+    }
+}
