@@ -22,7 +22,7 @@ public static class CaseReader
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
-    private static readonly string[] NumericsKeys = ["accuracy", "cells", "minimumCellsPerLayer", "relativeTolerance"];
+    private static readonly string[] NumericsKeys = ["accuracy", "cells", "minimumCellsPerLayer", "negligibleAmount", "relativeTolerance"];
 
     // Standard JSON only, as docs/case-format.md promises: a case file must also open in editors, schema
     // validators and scripts, which reject comments and trailing commas.
@@ -253,13 +253,33 @@ public static class CaseReader
         grid = grid with { MinimumCellsPerLayer = minimumCells ?? grid.MinimumCellsPerLayer };
         settings = new NumericsSettings(
             grid,
-            settings.Solver with { RelativeTolerance = numerics.Number("relativeTolerance") ?? settings.Solver.RelativeTolerance });
+            settings.Solver with { RelativeTolerance = numerics.Number("relativeTolerance") ?? settings.Solver.RelativeTolerance })
+        {
+            Accuracy = settings.Accuracy,
+            NegligibleAmountPerArea = NegligibleAmount(numerics),
+        };
         foreach (var (setting, message) in settings.Problems())
         {
             numerics.Error(setting, message);
         }
 
         return settings;
+    }
+
+    private static double? NegligibleAmount(JsonFields numerics)
+    {
+        if (numerics.Quantity("negligibleAmount", [Dimension.MassPerArea]) is not { } amount)
+        {
+            return null;
+        }
+
+        if (!(amount.SiValue > 0))
+        {
+            numerics.Error("negligibleAmount", $"must be a positive mass per area such as \"1 ng/dm2\"; got {numerics.Written("negligibleAmount")}");
+            return null;
+        }
+
+        return amount.SiValue;
     }
 
     /// <summary>

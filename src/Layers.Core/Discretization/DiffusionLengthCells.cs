@@ -15,9 +15,6 @@ public static class DiffusionLengthCells
     /// </summary>
     public const double EarliestResolvedPerReportTime = 0.2;
 
-    /// <summary>Coarsest width per diffusion length, however little a layer exchanges.</summary>
-    public const double CoarsestWidthPerDiffusionLength = 0.35;
-
     /// <summary>
     /// Each layer's share of what the run can get wrong, 0 to 1, the larger of two: the mass it could take up or give
     /// off over the run (K times the largest initial value of u = c/K times the smaller of its thickness and its
@@ -69,7 +66,7 @@ public static class DiffusionLengthCells
     /// <param name="resolveEnd">Whether the edge at the end of the layer gets small cells.</param>
     public static double[] Widths(this DiffusionLengthMesh mesh, double thicknessMeters, double diffusivitySquareMetersPerSecond, double share, double earliestSeconds, bool resolveStart, bool resolveEnd)
     {
-        var fraction = Math.Min(CoarsestWidthPerDiffusionLength, mesh.WidthPerDiffusionLength / Math.Sqrt(Math.Max(share, 1e-12)));
+        var fraction = Math.Min(mesh.CoarsestWidthPerDiffusionLength, mesh.WidthPerDiffusionLength / Math.Sqrt(Math.Max(share, 1e-12)));
         var widest = thicknessMeters / mesh.MinimumCellsPerLayer;
         if (!resolveStart && !resolveEnd)
         {

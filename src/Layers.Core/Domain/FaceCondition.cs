@@ -25,6 +25,9 @@ public abstract record FaceCondition
 
     /// <summary>Initial mass per unit contact area in a finite medium, kg/m2; 0 when the face holds none.</summary>
     public virtual double InitialMassPerArea => 0;
+
+    /// <summary>The name reports give the medium at this face: its own name, or the kind of a face with none.</summary>
+    public virtual string MediumName => KindName;
 }
 
 /// <summary>No flux through the face: an outer film surface, a patch backing, a symmetry plane.</summary>
@@ -61,6 +64,9 @@ public sealed record BathFace(
     public override string KindName => "bath";
 
     /// <inheritdoc />
+    public override string MediumName => Name;
+
+    /// <inheritdoc />
     public override bool IsOpen => true;
 
     /// <inheritdoc />
@@ -95,6 +101,9 @@ public sealed record CompartmentFace(
 {
     /// <inheritdoc />
     public override string KindName => "compartment";
+
+    /// <inheritdoc />
+    public override string MediumName => Name;
 
     /// <inheritdoc />
     public override bool IsOpen => true;

@@ -37,6 +37,17 @@ public sealed record NumericsSettings(GridOptions Grid, SolverOptions Solver)
     /// <summary>Step tolerance over the target.</summary>
     public const double ToleranceOverTarget = 1.0;
 
+    /// <summary>
+    /// The negligible floor of a case that names none and has no detection limit to go by, as a fraction of the
+    /// largest content of the run (docs/numerics.md, "The accuracy promise").
+    /// </summary>
+    public const double NegligibleFractionOfContent = 1e-9;
+
+    /// <summary>
+    /// The negligible floor of a food-contact case that names none, as a fraction of its detection limit in the food.
+    /// </summary>
+    public const double NegligibleFractionOfDetectionLimit = 1e-3;
+
     /// <summary>Fewest cells in any layer of the mesh chosen for an accuracy.</summary>
     public const int MinimumCellsPerLayerForAccuracy = 4;
 
@@ -45,6 +56,25 @@ public sealed record NumericsSettings(GridOptions Grid, SolverOptions Solver)
     /// nor a tolerance (docs/case-format.md, <c>$.numerics.cells</c>).
     /// </summary>
     public const double CellCountRelativeTolerance = 1e-6;
+
+    /// <summary>
+    /// The relative accuracy promised for every key figure above the negligible floor, against its own value; the
+    /// error estimate of a run is judged against it.
+    /// </summary>
+    public double Accuracy { get; init; } = DefaultAccuracy;
+
+    /// <summary>
+    /// Amounts below this, kg/m2, count as negligible (and concentrations, fluxes below what such an amount makes);
+    /// null for the default (<see cref="NegligibleFractionOfContent"/>, or
+    /// <see cref="NegligibleFractionOfDetectionLimit"/> for a food-contact case).
+    /// </summary>
+    public double? NegligibleAmountPerArea { get; init; }
+
+    /// <summary>
+    /// What the run does about its numerical error; by default, estimate and refine on a mesh chosen for an accuracy,
+    /// estimate only on an explicit cell count (which fixes the mesh).
+    /// </summary>
+    public ErrorControl ErrorControl { get; init; } = Grid is CellCountMesh ? ErrorControl.EstimateOnly : ErrorControl.EstimateAndRefine;
 
     /// <summary>The numerics of every case that names none: the mesh and tolerance for <see cref="DefaultAccuracy"/>.</summary>
     public static NumericsSettings Default { get; } = ForAccuracy(DefaultAccuracy);
@@ -56,7 +86,43 @@ public sealed record NumericsSettings(GridOptions Grid, SolverOptions Solver)
         var tolerance = ToleranceOverTarget * accuracy * Math.Min(1, Math.Sqrt(accuracy / 1e-4));
         return new NumericsSettings(
             new DiffusionLengthMesh(width, MinimumCellsPerLayerForAccuracy),
-            new SolverOptions { RelativeTolerance = Math.Min(1e-2, tolerance) });
+            new SolverOptions { RelativeTolerance = Math.Min(1e-2, tolerance) })
+        {
+            Accuracy = accuracy,
+        };
+    }
+
+    /// <summary>
+    /// The same numerics with every error source scaled by about <paramref name="errorFactor"/> (4: twice as coarse;
+    /// 1/4: twice as fine): cell widths and the minimum cell count by its square root (space error goes as width^2),
+    /// the step tolerance by its 3/2 power (the global error of TR-BDF2 under local error control goes as tolerance^(2/3)).
+    /// The mesh keeps its kind; the promise is unchanged.
+    /// </summary>
+    public NumericsSettings Scaled(double errorFactor)
+    {
+        var widthFactor = Math.Sqrt(errorFactor);
+        int Count(int cells, int fewest) => Math.Max(fewest, (int)Math.Round(cells / widthFactor));
+        var grid = Grid.Match<GridOptions>(
+            mesh => mesh with
+            {
+                WidthPerDiffusionLength = mesh.WidthPerDiffusionLength * widthFactor,
+                CoarsestWidthPerDiffusionLength = mesh.CoarsestWidthPerDiffusionLength * widthFactor,
+                MinimumCellsPerLayer = Count(mesh.MinimumCellsPerLayer, 2),
+            },
+            count => count with
+            {
+                TotalCells = Count(count.TotalCells, 4),
+                MinimumCellsPerLayer = Count(count.MinimumCellsPerLayer, 2),
+            });
+        return this with
+        {
+            Grid = grid,
+            Solver = Solver with
+            {
+                RelativeTolerance = Solver.RelativeTolerance * Math.Pow(errorFactor, 1.5),
+                RelativeToleranceAfterEnd = Solver.RelativeToleranceAfterEnd * Math.Pow(errorFactor, 1.5),
+            },
+        };
     }
 
     /// <summary>
@@ -64,7 +130,10 @@ public sealed record NumericsSettings(GridOptions Grid, SolverOptions Solver)
     /// (for convergence studies and checks that must not depend on the mesh the accuracy would choose).
     /// </summary>
     public static NumericsSettings FixedCells(int totalCells, double relativeTolerance) =>
-        new(new CellCountMesh(totalCells), new SolverOptions { RelativeTolerance = relativeTolerance });
+        new(new CellCountMesh(totalCells), new SolverOptions { RelativeTolerance = relativeTolerance })
+        {
+            ErrorControl = ErrorControl.None,
+        };
 
     /// <summary>Lists every setting outside its admissible range, as (setting, message) pairs.</summary>
     public IEnumerable<(string Setting, string Message)> Problems() => Grid.Problems().Concat(Solver.Problems());

@@ -38,6 +38,11 @@ public static class HtmlReport
         html.Append("<h2>Results</h2>\n");
         AppendTable(html, ResultTables.AtReportTimes(result));
         AppendTable(html, ResultTables.KeyFigures(result));
+        if (AccuracyTables.Shortfalls(result) is { } shortfalls)
+        {
+            AppendTable(html, shortfalls);
+        }
+
         foreach (var table in FoodContactTables.For(result).Concat(DiffusionCellTables.For(result)))
         {
             AppendTable(html, table);

@@ -91,6 +91,11 @@ public static class ResultTables
         }
 
         Add("mass balance (worst relative error)", result.WorstMassBalanceError.ToString("G2", System.Globalization.CultureInfo.InvariantCulture));
+        if (result.NumericalError is { } error)
+        {
+            Add("numerical error", AccuracyTables.Summary(error));
+        }
+
         return new TextTable("Key figures", ["quantity", "value"], rows);
     }
 

@@ -36,6 +36,7 @@ public static class SummaryJson
             SummaryJsonFoodContact.Write(json, result);
             SummaryJsonDiffusionCell.Write(json, result);
             WriteSolver(json, result);
+            SummaryJsonNumericalError.Write(json, result);
             json.WriteEndObject();
         }
 
@@ -91,6 +92,8 @@ public static class SummaryJson
 
             WriteSeries(json, "massPerAreaKgPerSquareMeter", result, sample => sample.LayerMassPerArea[i]);
             WriteSeries(json, "meanConcentrationKgPerCubicMeter", result, sample => sample.LayerMassPerArea[i] / layer.ThicknessMeters);
+            WriteReportSeries(json, "leftEdgeConcentrationKgPerCubicMeter", result, report => report.Profiles[i].ConcentrationsKgPerCubicMeter[0]);
+            WriteReportSeries(json, "rightEdgeConcentrationKgPerCubicMeter", result, report => report.Profiles[i].ConcentrationsKgPerCubicMeter[^1]);
             json.WriteEndObject();
         }
 
@@ -164,12 +167,15 @@ public static class SummaryJson
         json.WriteEndObject();
     }
 
-    internal static void WriteSeries(Utf8JsonWriter json, string key, SimulationResult result, Func<StateSample, double?> value)
+    internal static void WriteSeries(Utf8JsonWriter json, string key, SimulationResult result, Func<StateSample, double?> value) =>
+        WriteReportSeries(json, key, result, report => value(report.Sample));
+
+    private static void WriteReportSeries(Utf8JsonWriter json, string key, SimulationResult result, Func<ReportPoint, double?> value)
     {
         json.WriteStartArray(key);
         foreach (var report in result.Reports)
         {
-            WriteNullable(json, value(report.Sample));
+            WriteNullable(json, value(report));
         }
 
         json.WriteEndArray();

@@ -38,12 +38,7 @@ public static class TimeSeriesCsv
         return text.ToString();
     }
 
-    internal static string FaceName(FaceCondition face) => face switch
-    {
-        CompartmentFace compartment => compartment.Name,
-        BathFace bath => bath.Name,
-        _ => face.KindName,
-    };
+    internal static string FaceName(FaceCondition face) => face.MediumName;
 
     private static IEnumerable<string> Row(StateSample sample)
     {

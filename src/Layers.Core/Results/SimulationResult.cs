@@ -37,6 +37,12 @@ public sealed record SimulationResult
     /// <summary>Solver counters.</summary>
     public required SolverStatistics Statistics { get; init; }
 
+    /// <summary>
+    /// The estimated numerical error of every key figure and the solves behind it; null when the case asks for none
+    /// (<see cref="NumericsSettings.ErrorControl"/>) or the run did not complete.
+    /// </summary>
+    public NumericalErrorSummary? NumericalError { get; init; }
+
     /// <summary>The food-contact assessment, for a case with food-contact settings that ran to its end.</summary>
     public FoodContactResult? FoodContact { get; init; }
 

@@ -14,8 +14,20 @@ public static class Simulator
     /// <summary>How far beyond the duration the solver may look for the times to equilibrium, as a multiple of it.</summary>
     public const double HorizonFactor = 1000;
 
-    /// <summary>Solves a validated case.</summary>
+    /// <summary>
+    /// Solves a validated case, with the error of its key figures estimated and controlled as its numerics say
+    /// (<see cref="NumericsSettings.ErrorControl"/>).
+    /// </summary>
     public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        return simulation.Numerics.ErrorControl == ErrorControl.None
+            ? Solve(simulation, cancellation)
+            : ErrorEstimation.Run(simulation, solved => Solve(solved, cancellation));
+    }
+
+    /// <summary>One solve at the case's own numerics.</summary>
+    private static SimulationResult Solve(SimulationCase simulation, CancellationToken cancellation)
     {
         var massLeft = MassLeftAfterSampling(simulation, cancellation);
         // The case as read keeps where each D comes from, for the result and the assessment; everything that reads a

@@ -6,22 +6,9 @@ namespace Layers.Tests.TestSupport;
 internal static class LimitedVolumeTimes
 {
     /// <summary>The time at which M_t/M_inf reaches <paramref name="level"/>, by bisection over ten diffusion times.</summary>
-    public static double ToFraction(double diffusivity, double thickness, double alpha, double level)
-    {
-        double low = 0, high = 10 * thickness * thickness / diffusivity;
-        for (var i = 0; i < 200; i++)
-        {
-            var middle = 0.5 * (low + high);
-            if (PlaneSheetIntoLimitedVolume.FractionOfEquilibrium(diffusivity, thickness, alpha, middle) < level)
-            {
-                low = middle;
-            }
-            else
-            {
-                high = middle;
-            }
-        }
-
-        return 0.5 * (low + high);
-    }
+    public static double ToFraction(double diffusivity, double thickness, double alpha, double level) =>
+        TimeToLevel.Of(
+            time => PlaneSheetIntoLimitedVolume.FractionOfEquilibrium(diffusivity, thickness, alpha, time),
+            level,
+            10 * thickness * thickness / diffusivity);
 }

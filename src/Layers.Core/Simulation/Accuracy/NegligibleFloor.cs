@@ -1,0 +1,36 @@
+using Layers.Core.Domain;
+using Layers.Core.Results;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// The amount per area below which a figure counts as negligible: the case's own, or a default that fits the trade
+/// (docs/numerics.md, "The accuracy promise").
+/// </summary>
+public static class NegligibleFloor
+{
+    /// <summary>
+    /// The floor for amounts, kg/m2: the case's <see cref="NumericsSettings.NegligibleAmountPerArea"/> when given;
+    /// for a food-contact case, <see cref="NumericsSettings.NegligibleFractionOfDetectionLimit"/> of the detection limit
+    /// as an amount in the food; otherwise <see cref="NumericsSettings.NegligibleFractionOfContent"/> of the largest
+    /// content of the run (the stack and what the media received, at any output time).
+    /// </summary>
+    public static double AmountPerArea(SimulationResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        if (result.Case.Numerics.NegligibleAmountPerArea is { } given)
+        {
+            return given;
+        }
+
+        if (result.FoodContact is { } food)
+        {
+            return NumericsSettings.NegligibleFractionOfDetectionLimit * food.DetectionLimit / food.AreaPerFoodMassSquareMetersPerKilogram;
+        }
+
+        var content = result.TimeSeries.Max(sample => sample.LayerMassPerArea.Sum()
+            + Math.Abs(sample.Left?.TransferredIntoMediumPerArea ?? 0)
+            + Math.Abs(sample.Right?.TransferredIntoMediumPerArea ?? 0));
+        return NumericsSettings.NegligibleFractionOfContent * Math.Max(content, result.Case.Left.InitialMassPerArea + result.Case.Right.InitialMassPerArea);
+    }
+}
