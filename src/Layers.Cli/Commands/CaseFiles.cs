@@ -29,6 +29,11 @@ internal static class CaseFiles
         Add(Summary, () => SummaryJson.Write(result, settings.CasePath));
         Add("timeseries.csv", () => TimeSeriesCsv.Write(result));
         Add("profiles.csv", () => ProfilesCsv.Write(result));
+        if (DepthsCsv.Write(result) is { } depths)
+        {
+            Add("depths.csv", () => depths);
+        }
+
         Add("report.html", () => HtmlReport.Write(result, settings.CasePath, pictures));
         cancellation.ThrowIfCancellationRequested();
         foreach (var (name, png) in pictures)

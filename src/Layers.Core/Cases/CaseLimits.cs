@@ -20,4 +20,9 @@ public static class CaseLimits
     /// row of amounts to timeseries.csv.
     /// </summary>
     public const int MaxOutputTimes = 10_000;
+
+    /// <summary>
+    /// Most depths (<c>$.depths</c>): each adds a row per report time to depths.csv and an entry to summary.json.
+    /// </summary>
+    public const int MaxDepths = 100;
 }

@@ -17,7 +17,7 @@ public static class CaseReader
     private static readonly string[] TopKeys =
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
-        "duration", "reportTimes", "extraOutputTimes", "numerics", "display", "sweep", "foodContact", "permeationTest",
+        "duration", "reportTimes", "extraOutputTimes", "depths", "numerics", "display", "sweep", "foodContact", "permeationTest",
         "design", "uncertainty",
     ];
 
@@ -130,7 +130,9 @@ public static class CaseReader
         root.Text("description");
         var referenceName = ReadBasisAndReference(root, context);
         var food = FoodContactReader.Read(root, context);
+        var errorsBeforeLayers = context.Errors.Count;
         var layers = LayerReader.Read(root, context);
+        var layersRead = context.Errors.Count == errorsBeforeLayers;
         var (duration, durationText) = ReadDuration(root, food, context);
         context.DurationSeconds = duration;
         context.DurationText = durationText;
@@ -138,6 +140,7 @@ public static class CaseReader
         var right = FaceReader.Read(root, "right", context);
         var reports = TimesReader.List(root, "reportTimes", duration, durationText, ascending: true, context, CaseLimits.MaxReportTimes);
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
+        var depths = DepthsReader.Read(root, layersRead ? layers : [], context);
         var numerics = ReadNumerics(root, context);
         var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));
         FoodContactSettings? foodSettings = null;
@@ -162,6 +165,7 @@ public static class CaseReader
             DurationSeconds = end,
             ReportTimesSeconds = (IReadOnlyList<double>?)reports ?? TimesReader.DefaultReportFractions.Select(fraction => fraction * end).ToArray(),
             ExtraOutputTimesSeconds = extra?.Order().ToArray() ?? [],
+            ReportDepthsMeters = depths,
             Numerics = numerics,
             Display = display,
             FoodContact = foodSettings,

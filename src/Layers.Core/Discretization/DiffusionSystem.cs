@@ -125,6 +125,30 @@ public sealed class DiffusionSystem
         rates[count - 1] = inflow + RightBath.InflowRate(values[count - 1]);
     }
 
+    /// <summary>
+    /// Flux from the stack across a face into its medium, kg/(m2 s), positive into the medium, for a state u: the rate
+    /// of the face's link in <see cref="Residual"/> (to a compartment's node, or to a bath), so that its time integral
+    /// is what the mass balance counts as transferred. A compartment's first-order removal is a link beyond its node,
+    /// not part of this flux. Zero for a closed face.
+    /// </summary>
+    /// <param name="side">The face.</param>
+    /// <param name="state">u at every node (w where a layer has a solubility: the dissolved part drives the flux).</param>
+    public double FluxIntoMedium(Side side, ReadOnlySpan<double> state)
+    {
+        var last = NodeCount - 1;
+        if (Face(side).AddsNode)
+        {
+            return side == Side.Left
+                ? Conductance[0] * (Dissolved(1, state[1]) - Dissolved(0, state[0]))
+                : Conductance[last - 1] * (Dissolved(last - 1, state[last - 1]) - Dissolved(last, state[last]));
+        }
+
+        // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
+        return side == Side.Left
+            ? 0 - LeftBath.InflowRate(Dissolved(0, state[0]))
+            : 0 - RightBath.InflowRate(Dissolved(last, state[last]));
+    }
+
     /// <summary>Concentration c = K u in the medium of a node for a value u of the continuous variable, kg/m3.</summary>
     public double ConcentrationOf(int node, double u) => PartitionCoefficient[node] * u;
 

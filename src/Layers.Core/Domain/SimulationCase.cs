@@ -29,6 +29,12 @@ public sealed record SimulationCase
     /// <summary>Extra times at which amounts are written to the time series, s, ascending, within the duration.</summary>
     public IReadOnlyList<double> ExtraOutputTimesSeconds { get; init; } = [];
 
+    /// <summary>
+    /// Depths from the left face of the stack at which the concentration is reported at every report time, m, in the
+    /// order the case gives them, each within [0, total thickness]; empty when the case names none.
+    /// </summary>
+    public IReadOnlyList<double> ReportDepthsMeters { get; init; } = [];
+
     /// <summary>Mesh and time-stepping settings; by default those for the accuracy target 1e-4.</summary>
     public NumericsSettings Numerics { get; init; } = NumericsSettings.Default;
 

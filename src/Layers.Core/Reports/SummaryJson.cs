@@ -30,6 +30,7 @@ public static class SummaryJson
             WriteFace(json, "left", result, Side.Left);
             WriteFace(json, "right", result, Side.Right);
             json.WriteEndObject();
+            WriteDepths(json, result);
             WriteMassBalance(json, result);
             WriteDispersedLayers(json, result);
             SummaryJsonFinalState.Write(json, result);
@@ -111,6 +112,7 @@ public static class SummaryJson
             FaceSample Pick(StateSample sample) => (side == Side.Left ? sample.Left : sample.Right)!;
             WriteSeries(json, "transferredMassPerAreaKgPerSquareMeter", result, sample => Pick(sample).TransferredIntoMediumPerArea);
             WriteSeries(json, "concentrationKgPerCubicMeter", result, sample => Pick(sample).ConcentrationKgPerCubicMeter);
+            WriteSeries(json, "fluxIntoMediumKgPerSquareMeterSecond", result, sample => Pick(sample).FluxIntoMediumKgPerSquareMeterSecond);
             if (face is CompartmentFace compartment)
             {
                 json.WriteNumber("contactAreaSquareMeters", compartment.ContactAreaSquareMeters);
@@ -121,6 +123,37 @@ public static class SummaryJson
         }
 
         json.WriteEndObject();
+    }
+
+    /// <summary>
+    /// The concentrations at the depths the case names, one entry per reading (a depth on an interface has two, one
+    /// per layer), each with its value per report time; written only when the case names depths.
+    /// </summary>
+    private static void WriteDepths(Utf8JsonWriter json, SimulationResult result)
+    {
+        if (result.Case.ReportDepthsMeters.Count == 0 || result.Reports.Count == 0)
+        {
+            return;
+        }
+
+        json.WriteStartArray("depths");
+        var readings = result.Reports[0].Depths;
+        for (var i = 0; i < readings.Count; i++)
+        {
+            json.WriteStartObject();
+            json.WriteNumber("depthMeters", readings[i].DepthMeters);
+            json.WriteString("layer", readings[i].LayerName);
+            json.WriteStartArray("concentrationKgPerCubicMeter");
+            foreach (var report in result.Reports)
+            {
+                WriteNullable(json, report.Depths[i].ConcentrationKgPerCubicMeter);
+            }
+
+            json.WriteEndArray();
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
     }
 
     private static void WriteMassBalance(Utf8JsonWriter json, SimulationResult result)

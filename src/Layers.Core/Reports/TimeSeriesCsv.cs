@@ -6,7 +6,7 @@ namespace Layers.Core.Reports;
 
 /// <summary>
 /// timeseries.csv: one row per output time (t = 0, the report and extra times and a dense log-spaced grid), with
-/// the amounts in every face medium and layer. SI units, stated in every header as "name [unit]".
+/// the amounts in every face medium and layer and the flux into every face medium. SI units, stated in every header as "name [unit]".
 /// </summary>
 public static class TimeSeriesCsv
 {
@@ -22,6 +22,7 @@ public static class TimeSeriesCsv
                 var name = FaceName(simulation.Face(side));
                 header.Add($"{name}: transferred into medium [kg/m2]");
                 header.Add($"{name}: concentration [kg/m3]");
+                header.Add($"{name}: flux into medium [kg/(m2 s)]");
             }
         }
 
@@ -51,6 +52,7 @@ public static class TimeSeriesCsv
             {
                 yield return CsvText.Number(face.TransferredIntoMediumPerArea);
                 yield return CsvText.Number(face.ConcentrationKgPerCubicMeter);
+                yield return CsvText.Number(face.FluxIntoMediumKgPerSquareMeterSecond);
             }
         }
 

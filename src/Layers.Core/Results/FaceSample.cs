@@ -6,6 +6,11 @@ namespace Layers.Core.Results;
 /// medium gave mass to the stack, e.g. a donor).
 /// </param>
 /// <param name="ConcentrationKgPerCubicMeter">Concentration in the medium, kg/m3 (fixed for a bath).</param>
+/// <param name="FluxIntoMediumKgPerSquareMeterSecond">
+/// Flux from the stack across the face into the medium at this time, kg/(m2 s), positive into the medium: the rate of
+/// the face link of the discrete system, whose time integral is <paramref name="TransferredIntoMediumPerArea"/>. For a
+/// compartment with first-order removal it is the flux across the face, before removal (the removal is not part of it).
+/// </param>
 /// <param name="FractionOfEquilibrium">
 /// For a compartment of a system that tends to a final state: (M(t) - M(0)) / (M_final - M(0)); null where that
 /// change is nil or the medium is a bath.
@@ -13,4 +18,5 @@ namespace Layers.Core.Results;
 public sealed record FaceSample(
     double TransferredIntoMediumPerArea,
     double ConcentrationKgPerCubicMeter,
+    double FluxIntoMediumKgPerSquareMeterSecond,
     double? FractionOfEquilibrium);

@@ -17,9 +17,11 @@ internal sealed class Observables
     private readonly double _initialDistance;
     private readonly bool _startsAtFinalState;
     private readonly SamplingEvents? _sampling;
+    private readonly FaceFlux _flux;
 
-    public Observables(DiscreteModel model, FinalStateTarget final, SamplingEvents? sampling = null)
+    public Observables(DiscreteModel model, IReadOnlyList<StageSystem> stages, FinalStateTarget final, SamplingEvents? sampling = null)
     {
+        _flux = new FaceFlux(stages);
         var system = model.System;
         ReadOnlySpan<double> initialState = model.InitialState;
         _sampling = sampling;
@@ -104,8 +106,8 @@ internal sealed class Observables
         return new StateSample(
             time,
             layerMass,
-            Face(Side.Left, state, baths.LeftPerArea),
-            Face(Side.Right, state, baths.RightPerArea),
+            Face(Side.Left, time, state, baths.LeftPerArea),
+            Face(Side.Right, time, state, baths.RightPerArea),
             FractionOfFinalState(state),
             reference > 0 ? imbalance / reference : 0);
     }
@@ -125,7 +127,7 @@ internal sealed class Observables
         return scale;
     }
 
-    private FaceSample? Face(Side side, ReadOnlySpan<double> state, double bathInflow)
+    private FaceSample? Face(Side side, double time, ReadOnlySpan<double> state, double bathInflow)
     {
         var node = _system.CompartmentNode(side);
         if (node >= 0)
@@ -135,11 +137,14 @@ internal sealed class Observables
             var transferred = (_system.Capacity[node] * (state[node] - _initialState[node]))
                 + (_sampling?.RemovedPerArea(side) ?? 0)
                 - bathInflow;
-            return new FaceSample(transferred, _system.ConcentrationOf(node, state[node]), CompartmentFraction(side, state));
+            return new FaceSample(
+                transferred, _system.ConcentrationOf(node, state[node]), _flux.IntoMedium(side, time, state), CompartmentFraction(side, state));
         }
 
         // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
-        return _case.Face(side) is BathFace bath ? new FaceSample(0 - bathInflow, bath.ConcentrationKgPerCubicMeter, null) : null;
+        return _case.Face(side) is BathFace bath
+            ? new FaceSample(0 - bathInflow, bath.ConcentrationKgPerCubicMeter, _flux.IntoMedium(side, time, state), null)
+            : null;
     }
 
     private double DistanceToFinal(ReadOnlySpan<double> state)

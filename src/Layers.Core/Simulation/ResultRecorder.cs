@@ -26,13 +26,13 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     private readonly CrossingTracker? _rightTracker;
     private double _systemFraction;
 
-    public ResultRecorder(DiscreteModel model, FinalStateTarget final, SamplingEvents? sampling = null)
+    public ResultRecorder(DiscreteModel model, IReadOnlyList<StageSystem> stages, FinalStateTarget final, SamplingEvents? sampling = null)
     {
         ReadOnlySpan<double> initialState = model.InitialState;
         _case = model.Case;
         _system = model.System;
         _final = final;
-        _observables = new Observables(model, final, sampling);
+        _observables = new Observables(model, stages, final, sampling);
         _profiles = new ProfileBuilder(model);
         _systemFraction = Tracked(_observables.FractionOfFinalState(initialState));
         _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction);
@@ -71,7 +71,8 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         LowestAmountRelative = Math.Min(LowestAmountRelative, _observables.LowestAmountRelative(sample, state, bathInflow));
         if (OutputSchedule.IsReportTime(_case, timeSeconds))
         {
-            _reports.Add(new ReportPoint(sample, _profiles.Build(state)));
+            var profiles = _profiles.Build(state);
+            _reports.Add(new ReportPoint(sample, profiles) { Depths = DepthReadings.Read(profiles, _case.ReportDepthsMeters) });
         }
 
         if (timeSeconds >= _case.DurationSeconds * (1 - 1e-12))

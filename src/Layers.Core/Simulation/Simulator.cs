@@ -134,7 +134,7 @@ public static class Simulator
         var stages = StageSystem.For(simulation, model.Grid, model.System);
         var final = FinalStateTarget.ForStages(model, stages, massLeftAfterSamplingPerArea);
         var sampling = new SamplingEvents(model);
-        var recorder = new ResultRecorder(model, final, sampling);
+        var recorder = new ResultRecorder(model, stages, final, sampling);
         return (model, final, sampling, recorder, stages);
     }
 

@@ -40,6 +40,24 @@ public sealed class CaseLimitsTests
     }
 
     [Theory]
+    [InlineData(100, true)]
+    [InlineData(101, false)]
+    public void Depths_beyond_100_are_refused_at_reading(int count, bool valid)
+    {
+        var depths = string.Join(", ", Enumerable.Range(1, count).Select(nanometres => $"\"{nanometres} nm\""));
+
+        var read = CaseDocument.ReadText(CaseJson.With(OneLayer, ("$.depths", $"[{depths}]")), "depths.json");
+
+        Assert.Equal(valid, read.IsValid);
+        if (!valid)
+        {
+            var error = Assert.Single(read.Errors);
+            Assert.Equal("$.depths", error.JsonPath);
+            Assert.Equal("at most 100 depths are allowed; got 101", error.Message);
+        }
+    }
+
+    [Theory]
     [InlineData("$.reportTimes", 1000, true)]
     [InlineData("$.reportTimes", 1001, false)]
     [InlineData("$.extraOutputTimes", 10000, true)]

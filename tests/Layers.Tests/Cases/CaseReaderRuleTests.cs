@@ -106,6 +106,13 @@ public sealed class CaseReaderRuleTests
         { "extra output time beyond the duration", "$.extraOutputTimes", """["6 h", "11 d"]""", "$.extraOutputTimes[1]", "must be <= duration (10 d); got '11 d'" },
         { "extra output time negative", "$.extraOutputTimes", """["-6 h"]""", "$.extraOutputTimes[0]", "must be > 0; got '-6 h'" },
 
+        // Depths (the minimal case's stack is 50 um thick).
+        { "depth beyond the stack", "$.depths", """["10 um", "60 um"]""", "$.depths[1]", "must be at most the thickness of the stack (50 um, its right face); got '60 um'" },
+        { "depth negative", "$.depths", """["-1 um"]""", "$.depths[0]", "must be >= 0 (a depth from the left face of the stack); got '-1 um'" },
+        { "depth that is not a length", "$.depths", """["1 d"]""", "$.depths[0]", "'1 d' is a time; expected a length" },
+        { "empty depths", "$.depths", "[]", "$.depths", "must hold at least one depth" },
+        { "depths not an array", "$.depths", "\"10 um\"", "$.depths", "expected an array of depths" },
+
         // Numerics ranges: cells 8 to 200000, minimumCellsPerLayer 4 to 10000, relativeTolerance 1e-10 to 1e-2, accuracy 1e-6 to 1e-2.
         { "cells below range", "$.numerics.cells", "7", "$.numerics.cells", "must be from 8 to 200000; got 7" },
         { "cells above range", "$.numerics.cells", "200001", "$.numerics.cells", "must be from 8 to 200000; got 200001" },
