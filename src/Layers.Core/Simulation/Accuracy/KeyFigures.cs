@@ -7,7 +7,8 @@ namespace Layers.Core.Simulation;
 /// <summary>
 /// The figures of a result that the accuracy promise covers, each named by its path in summary.json (a test checks
 /// that every path holds the same value there): amounts in every layer and medium, medium and layer-edge
-/// concentrations at every report time; times to 50/90/99 % of the final state; steady flux, flux at the end and lag
+/// concentrations, the flux into each medium and the concentrations at the depths the case names, at every report
+/// time; times to 50/90/99 % of the final state; steady flux, flux at the end and lag
 /// time; the food-contact figures.
 /// </summary>
 public static class KeyFigures
@@ -52,11 +53,25 @@ public static class KeyFigures
             FaceSample Pick(ReportPoint report) => (side == Side.Left ? report.Sample.Left : report.Sample.Right)!;
             var medium = face.MediumName;
             Series(path + ".transferredMassPerAreaKgPerSquareMeter", FigureKind.Amount, medium + ": received per area", amount, report => Pick(report).TransferredIntoMediumPerArea);
+            Series(path + ".fluxIntoMediumKgPerSquareMeterSecond", FigureKind.Flux, medium + ": flux into it", flux, report => Pick(report).FluxIntoMediumKgPerSquareMeterSecond);
             if (face is CompartmentFace compartment)
             {
                 var concentration = amount * compartment.ContactAreaSquareMeters / compartment.VolumeCubicMeters;
                 Series(path + ".concentrationKgPerCubicMeter", FigureKind.Concentration, medium + ": concentration", concentration, report => Pick(report).ConcentrationKgPerCubicMeter);
             }
+        }
+
+        var readings = result.Reports.Count > 0 ? result.Reports[0].Depths.Count : 0;
+        for (var reading = 0; reading < readings; reading++)
+        {
+            var index = reading;
+            var depth = result.Reports[0].Depths[index];
+            Series(
+                Indexed("$.depths", index) + ".concentrationKgPerCubicMeter",
+                FigureKind.Concentration,
+                string.Create(CultureInfo.InvariantCulture, $"{depth.LayerName}: concentration at {depth.DepthMeters * 1e6:G4} um"),
+                layerConcentration,
+                report => report.Depths[index].ConcentrationKgPerCubicMeter);
         }
 
         AddFinalState(figures, result);
