@@ -59,4 +59,15 @@ public sealed class ReadOffAccuracyPendingTests
         AssertRelative(exact, LaplaceSolution.For(simulation).ConcentrationAt(0, time), 1e-7, "Laplace against Crank eq. 4.17");
         AssertRelative(exact, simulated, accuracy, "concentration at the closed face at D t/L^2 = 0.2 (Crank eq. 4.17)");
     }
+
+    [Theory]
+    [InlineData(1e-4)]
+    [InlineData(1e-5)]
+    public void Concentrations_on_both_sides_of_a_contact_between_semi_infinite_media_are_within_the_accuracy(double accuracy)
+    {
+        var profiles = Simulator.Run(SemiInfiniteContact(NumericsSettings.ForAccuracy(accuracy))).Reports[^1].Profiles;
+
+        AssertRelative(ContactPartition * ContactValue, profiles[0].ConcentrationsKgPerCubicMeter[^1], accuracy, "first side of the contact (erfc solution)");
+        AssertRelative(ContactValue, profiles[1].ConcentrationsKgPerCubicMeter[0], accuracy, "second side of the contact (erfc solution)");
+    }
 }

@@ -62,6 +62,33 @@ internal static class ReadOffReferences
     /// <summary>Daynes (1920) and Barrer (1939) as given by Crank (1975), ch. 4.3, eq. 4.24c (from memory): L^2 / (6 D), s.</summary>
     public static double MembraneLagSeconds => Thickness * Thickness / (6 * Diffusivity);
 
+    /// <summary>K of the first of two semi-infinite media in contact (the second has 1).</summary>
+    public const double ContactPartition = 5;
+
+    private const double ContactThickness = 400e-6;
+    private const double FirstDiffusivity = 1e-13;
+    private const double SecondDiffusivity = 4e-13;
+    private const double ContactInitial = 300;
+
+    /// <summary>
+    /// Two media in contact, the first loaded, both closed outside, run until L / (2 sqrt(D t)) = 4 in the faster one:
+    /// erfc(4) ~ 1.5e-8, so both are semi-infinite.
+    /// </summary>
+    public static SimulationCase SemiInfiniteContact(NumericsSettings numerics) => Cases.Make(
+        Cases.Closed,
+        Cases.Closed,
+        Math.Pow(ContactThickness / 8, 2) / SecondDiffusivity,
+        numerics: numerics,
+        layers: [Cases.Layer("first", ContactThickness, FirstDiffusivity, ContactPartition, ContactInitial), Cases.Layer("second", ContactThickness, SecondDiffusivity, 1)]);
+
+    /// <summary>
+    /// Crank (1975), ch. 3, composite media (section from memory); Carslaw and Jaeger, Conduction of Heat in Solids,
+    /// 2nd ed. (1959), ch. 2.15: c/K is continuous and constant at the contact for t &gt; 0, weighted by K sqrt(D):
+    /// c/K = (c0 / K_1) K_1 sqrt(D_1) / (K_1 sqrt(D_1) + K_2 sqrt(D_2)), kg/m3 (c on the second side, K_2 = 1).
+    /// </summary>
+    public static double ContactValue
+        => ContactInitial * Math.Sqrt(FirstDiffusivity) / ((ContactPartition * Math.Sqrt(FirstDiffusivity)) + Math.Sqrt(SecondDiffusivity));
+
     /// <summary>|value - exact| &lt;= accuracy x |exact|.</summary>
     public static void AssertRelative(double exact, double simulated, double accuracy, string what)
     {

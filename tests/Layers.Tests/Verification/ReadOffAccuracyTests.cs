@@ -56,4 +56,14 @@ public sealed class ReadOffAccuracyTests
         AssertRelative(MembraneLagSeconds, LaplaceSolution.For(simulation).SteadyLine(Side.Right)!.LagTimeSeconds, 1e-7, "Laplace against Crank eq. 4.24c");
         AssertRelative(MembraneLagSeconds, simulated, bound, $"lag time on {cells} cells (Crank eq. 4.24c)");
     }
+
+    [Fact]
+    public void Concentrations_on_both_sides_of_a_contact_between_semi_infinite_media_are_within_the_accuracy()
+    {
+        const double accuracy = 1e-3;
+        var profiles = Simulator.Run(SemiInfiniteContact(NumericsSettings.ForAccuracy(accuracy))).Reports[^1].Profiles;
+
+        AssertRelative(ContactPartition * ContactValue, profiles[0].ConcentrationsKgPerCubicMeter[^1], accuracy, "first side of the contact (erfc solution)");
+        AssertRelative(ContactValue, profiles[1].ConcentrationsKgPerCubicMeter[0], accuracy, "second side of the contact (erfc solution)");
+    }
 }
