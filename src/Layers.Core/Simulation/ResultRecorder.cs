@@ -27,7 +27,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     private readonly CrossingTracker _systemTracker;
     private readonly CrossingTracker? _leftTracker;
     private readonly CrossingTracker? _rightTracker;
-    private readonly double? _exactLag;
+    private readonly double[] _initialState;
     private double _systemFraction;
 
     public ResultRecorder(DiscreteModel model, FinalStateTarget final, SamplingEvents? sampling = null)
@@ -42,10 +42,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction, state => Tracked(_observables.FractionOfFinalState(state)));
         _leftTracker = TrackerFor(Side.Left, initialState);
         _rightTracker = TrackerFor(Side.Right, initialState);
-        if (_final.Kind == FinalStateKind.SteadyPermeation && _system.Saturation is null)
-        {
-            _exactLag = SteadyAsymptote.LagTimeSeconds(_system, initialState, _final.Steady!.FluxKgPerSquareMeterSecond > 0);
-        }
+        _initialState = model.InitialState;
     }
 
     public IReadOnlyList<StateSample> Samples => _samples;
@@ -101,7 +98,10 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         {
             var flux = Math.Abs(_final.Steady!.FluxKgPerSquareMeterSecond);
             var received = _final.Steady.FluxKgPerSquareMeterSecond > 0 ? -bathInflow.RightPerArea : -bathInflow.LeftPerArea;
-            LagTimeSeconds = _exactLag ?? (timeSeconds - (received / flux));
+            var exact = _system.Saturation is null
+                ? SteadyAsymptote.LagTimeSeconds(_system, _initialState, _final.Steady.FluxKgPerSquareMeterSecond > 0)
+                : null;
+            LagTimeSeconds = exact ?? (timeSeconds - (received / flux));
         }
     }
 
