@@ -1,21 +1,26 @@
+using Layers.Core.TimeStepping;
+
 namespace Layers.Core.Simulation;
 
 /// <summary>
-/// Finds the first time a monotone-ish fraction reaches each threshold, interpolating linearly within the step in
-/// which it crosses (steps are small where the fraction changes fast, so the error is that of the step).
+/// Finds the first time a monotone-ish fraction reaches each threshold: the accepted step in which it crosses, then the
+/// time within that step on the step's own interpolant (<see cref="DenseCrossing"/>), so the time is as accurate as the
+/// solution rather than limited by a straight line between the step's ends.
 /// </summary>
 internal sealed class CrossingTracker
 {
     private readonly IReadOnlyList<double> _levels;
     private readonly double?[] _times;
-    private double _previousTime;
-    private double _previousFraction;
+    private readonly StateMeasure _measure;
 
-    public CrossingTracker(IReadOnlyList<double> levels, double initialFraction)
+    /// <param name="levels">The thresholds, ascending.</param>
+    /// <param name="initialFraction">The fraction at t = 0; thresholds it already reaches are reached at 0.</param>
+    /// <param name="measure">The fraction of a state, evaluated on the interpolant of the step that crosses.</param>
+    public CrossingTracker(IReadOnlyList<double> levels, double initialFraction, StateMeasure measure)
     {
         _levels = levels;
+        _measure = measure;
         _times = new double?[levels.Count];
-        _previousFraction = initialFraction;
         for (var i = 0; i < levels.Count; i++)
         {
             if (initialFraction >= levels[i])
@@ -31,20 +36,15 @@ internal sealed class CrossingTracker
     /// <summary>True when every level has been reached.</summary>
     public bool AllReached => _times.All(time => time.HasValue);
 
-    /// <summary>Feeds the fraction after an accepted step.</summary>
-    public void Observe(double timeSeconds, double fraction)
+    /// <summary>Feeds the fraction at the end of an accepted step, with the step's dense output.</summary>
+    public void Observe(double fraction, IDenseOutput dense)
     {
         for (var i = 0; i < _levels.Count; i++)
         {
             if (_times[i] is null && fraction >= _levels[i])
             {
-                var span = fraction - _previousFraction;
-                var weight = span > 0 ? (_levels[i] - _previousFraction) / span : 1;
-                _times[i] = _previousTime + (Math.Clamp(weight, 0, 1) * (timeSeconds - _previousTime));
+                _times[i] = DenseCrossing.Time(dense, _measure, _levels[i]);
             }
         }
-
-        _previousTime = timeSeconds;
-        _previousFraction = fraction;
     }
 }

@@ -6,35 +6,34 @@ namespace Layers.Core.Simulation;
 
 /// <summary>
 /// Watches the food's concentration (mass fraction) step by step during the run: its value at every stage end,
-/// and, for each limit, the accepted step over which it first reaches the limit, with the state at the start of
-/// that step so that the crossing can be located by re-integration.
+/// and, for each limit, the time it first reaches the limit: the accepted step over which it crosses, then the time
+/// within that step on the step's own interpolant (<see cref="DenseCrossing"/>), as accurate as the step.
 /// </summary>
 internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
 {
     private readonly double _toMassFraction;
     private readonly int _node;
     private readonly IReadOnlyList<StageSystem> _stages;
-    private readonly double[] _previous;
     private readonly double[] _stageEnds;
+    private readonly StateMeasure _measure;
     private double _previousTime;
-    private double _previousValue;
 
-    private FoodConcentrationWatcher(int node, double toMassFraction, IReadOnlyList<StageSystem> stages, double[] levels, int nodeCount)
+    private FoodConcentrationWatcher(int node, double toMassFraction, IReadOnlyList<StageSystem> stages, double[] levels)
     {
         _node = node;
         _toMassFraction = toMassFraction;
         _stages = stages;
         Levels = levels;
-        Crossings = new Bracket?[levels.Length];
-        _previous = new double[nodeCount];
+        CrossingSeconds = new double?[levels.Length];
         _stageEnds = new double[stages.Count];
+        _measure = ValueOf;
     }
 
     /// <summary>The limits watched, kg/kg: the detection limit first, then the specific migration limit when given.</summary>
     public double[] Levels { get; }
 
-    /// <summary>For each level, the step over which the food first reached it within the history, or null.</summary>
-    public Bracket?[] Crossings { get; }
+    /// <summary>For each level, the time the food first reached it within the history (run clock, s), or null.</summary>
+    public double?[] CrossingSeconds { get; }
 
     /// <summary>Food concentration at the end of each stage, kg/kg.</summary>
     public IReadOnlyList<double> StageEndValues => _stageEnds;
@@ -59,7 +58,7 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
             ? new[] { settings.DetectionLimit, limit }
             : new[] { settings.DetectionLimit };
         return new FoodConcentrationWatcher(
-            model.System.CompartmentNode(settings.FoodSide), food.PartitionCoefficient / density, stages, levels, model.InitialState.Length);
+            model.System.CompartmentNode(settings.FoodSide), food.PartitionCoefficient / density, stages, levels);
     }
 
     /// <summary>The food's mass fraction for a state.</summary>
@@ -73,18 +72,18 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
             return;
         }
 
-        Remember(0, state);
+        var value = ValueOf(state);
         for (var level = 0; level < Levels.Length; level++)
         {
-            if (_previousValue >= Levels[level])
+            if (value >= Levels[level])
             {
-                Crossings[level] = new Bracket(0, 0, state.ToArray(), 0);
+                CrossingSeconds[level] = 0;
             }
         }
     }
 
     /// <inheritdoc />
-    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense)
     {
         var end = _stages[^1].EndSeconds;
         if (_previousTime >= end * (1 - 1e-12))
@@ -93,12 +92,11 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
         }
 
         var value = ValueOf(state);
-        var stage = StageAt(_previousTime);
         for (var level = 0; level < Levels.Length; level++)
         {
-            if (Crossings[level] is null && value >= Levels[level] && _previousValue < Levels[level])
+            if (CrossingSeconds[level] is null && value >= Levels[level])
             {
-                Crossings[level] = new Bracket(_previousTime, timeSeconds, (double[])_previous.Clone(), stage);
+                CrossingSeconds[level] = DenseCrossing.Time(dense, _measure, Levels[level]);
             }
         }
 
@@ -110,33 +108,6 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
             }
         }
 
-        Remember(timeSeconds, state);
+        _previousTime = timeSeconds;
     }
-
-    private int StageAt(double time)
-    {
-        for (var index = 0; index < _stages.Count; index++)
-        {
-            if (time < _stages[index].EndSeconds * (1 - 1e-12))
-            {
-                return index;
-            }
-        }
-
-        return _stages.Count - 1;
-    }
-
-    private void Remember(double time, ReadOnlySpan<double> state)
-    {
-        state.CopyTo(_previous);
-        _previousTime = time;
-        _previousValue = ValueOf(state);
-    }
-
-    /// <summary>An accepted step over which a level was first reached.</summary>
-    /// <param name="StartSeconds">Start of the step (run clock).</param>
-    /// <param name="EndSeconds">End of the step.</param>
-    /// <param name="StartState">u at the start of the step.</param>
-    /// <param name="Stage">Index of the stage the step belongs to.</param>
-    internal sealed record Bracket(double StartSeconds, double EndSeconds, double[] StartState, int Stage);
 }

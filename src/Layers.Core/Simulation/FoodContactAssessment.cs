@@ -12,11 +12,10 @@ namespace Layers.Core.Simulation;
 /// the limit and when it is reached, functional-barrier times, test versus shelf life, maximum loading.
 /// </summary>
 /// <remarks>
-/// Times at which a limit is reached are located by Brent's method on the solution itself: from the state at the
-/// start of the accepted step over which the food crossed the limit, the stage's system is re-integrated (with the
-/// same error control) to a trial time, and the root of c_food(t) - limit is bracketed in that step. The time is
-/// therefore as accurate as the integration: a relative error e in c_food moves it by about e c / (dc/dt);
-/// the root finder's own tolerance is 1e-10 of the step and of c/limit.
+/// Times at which a limit is reached are found by the watcher during the run (<see cref="FoodConcentrationWatcher"/>):
+/// the root of c_food(t) - limit on the interpolant of the accepted step over which the food crossed the limit. The
+/// interpolant is as accurate as the step (O(h^3)), so the time is as accurate as the integration: a relative error e
+/// in c_food moves it by about e c / (dc/dt); the root finder's own tolerance is 1e-13 of the step.
 /// </remarks>
 internal static class FoodContactAssessment
 {
@@ -35,10 +34,8 @@ internal static class FoodContactAssessment
         var density = food.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
         var final = watcher.StageEndValues[^1];
         var foodMassPerArea = food.VolumePerAreaMeters * density;
-        var detection = watcher.Crossings[0] is { } seen ? CrossingTime(seen, watcher.Levels[0], stages, watcher, simulation.Numerics.Solver) : (double?)null;
-        var limit = watcher.Levels.Length > 1 && watcher.Crossings[1] is { } over
-            ? CrossingTime(over, watcher.Levels[1], stages, watcher, simulation.Numerics.Solver)
-            : (double?)null;
+        var detection = watcher.CrossingSeconds[0];
+        var limit = watcher.Levels.Length > 1 ? watcher.CrossingSeconds[1] : null;
 
         return new FoodContactResult
         {
@@ -71,48 +68,6 @@ internal static class FoodContactAssessment
         var outcome = StagedIntegration.Run(
             stages, start, [], 0, (stage, first) => Simulator.InitialStep(stage.Case, grid, first), simulation.Numerics.Solver, NullObserver.Instance, cancellation: cancellation);
         return outcome.Statistics.StopReason == StopReason.Completed ? watcher.ValueOf(outcome.FinalState) : double.NaN;
-    }
-
-    private static double CrossingTime(
-        FoodConcentrationWatcher.Bracket bracket, double level, IReadOnlyList<StageSystem> stages, FoodConcentrationWatcher watcher, SolverOptions options)
-    {
-        var width = bracket.EndSeconds - bracket.StartSeconds;
-        if (width <= 0)
-        {
-            return bracket.StartSeconds;
-        }
-
-        // Relative excess c/level - 1 and the time as a fraction of the step, so that Brent's tolerance (which
-        // Math.NET applies to the function value as well as to the argument) means the same for every case.
-        var stage = stages[bracket.Stage];
-        double Excess(double fraction) => fraction <= 0
-            ? (watcher.ValueOf(bracket.StartState) / level) - 1
-            : (watcher.ValueOf(Integrate(stage, bracket.StartState, fraction * width, options)) / level) - 1;
-
-        // Re-integrating the whole step with sub-steps can land a hair below the limit when the step itself ended a
-        // hair above it; the crossing is then at the step's end to within the integration tolerance.
-        if (Excess(1) < 0)
-        {
-            return bracket.EndSeconds;
-        }
-
-        return bracket.StartSeconds + (width * Brent.FindRoot(Excess, 0, 1, 1e-10, 200));
-    }
-
-    /// <summary>Integrates one stage from a state in the case's own u = c/K and returns the end state in it too.</summary>
-    private static double[] Integrate(StageSystem stage, double[] start, double seconds, SolverOptions options)
-    {
-        var end = new EndState();
-        var state = (double[])start.Clone();
-        stage.IntoStage(state);
-        new TransientSolver(stage.System, options).Run(state, new TimeLoopPlan([seconds], seconds, seconds, seconds), end);
-        if (end.State is not { } reached)
-        {
-            return start;
-        }
-
-        stage.OutOfStage(reached);
-        return reached;
     }
 
     private static TestComparison Compare(
@@ -240,25 +195,6 @@ internal static class FoodContactAssessment
         return lags;
     }
 
-    private sealed class EndState : ITimeLoopObserver
-    {
-        public double[]? State { get; private set; }
-
-        public bool WantsMoreTime => false;
-
-        public void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
-        {
-            if (timeSeconds > 0)
-            {
-                State = state.ToArray();
-            }
-        }
-
-        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
-        {
-        }
-    }
-
     private sealed class NullObserver : ITimeLoopObserver
     {
         public static readonly NullObserver Instance = new();
@@ -269,7 +205,7 @@ internal static class FoodContactAssessment
         {
         }
 
-        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense)
         {
         }
     }

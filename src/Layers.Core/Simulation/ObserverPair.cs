@@ -13,9 +13,9 @@ internal sealed class ObserverPair(ITimeLoopObserver first, ITimeLoopObserver se
         second.OnOutput(timeSeconds, state, bathInflow);
     }
 
-    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense)
     {
-        first.OnStep(timeSeconds, state, bathInflow);
-        second.OnStep(timeSeconds, state, bathInflow);
+        first.OnStep(timeSeconds, state, bathInflow, dense);
+        second.OnStep(timeSeconds, state, bathInflow, dense);
     }
 }

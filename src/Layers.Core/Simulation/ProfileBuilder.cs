@@ -6,9 +6,10 @@ namespace Layers.Core.Simulation;
 
 /// <summary>
 /// Concentration profiles per layer, with the values on each side of every face reconstructed from flux continuity:
-/// the face value of u is the resistance-weighted mean of its two neighbours, u_f = (u_a/R_a + u_b/R_b)/(1/R_a + 1/R_b),
-/// where R are the half-cell (and film) resistances; each side then reads c = K u_f with its own K, which shows the
-/// partition jump. An outer face's value is reconstructed by its face model (<see cref="FaceModel.FaceValue"/>).
+/// each side's cells give a value and a resistance (<see cref="CellSide"/>: the quadratic through the two cells nearest
+/// the face in its layer, second order), and the face value of u is their resistance-weighted mean,
+/// u_f = (v_a/R_a + v_b/R_b)/(1/R_a + 1/R_b); each side then reads c = K u_f with its own K, which shows the partition
+/// jump. An outer face's value is reconstructed by its face model (<see cref="FaceModel.FaceValue"/>) from its side.
 /// </summary>
 internal sealed class ProfileBuilder
 {
@@ -75,16 +76,34 @@ internal sealed class ProfileBuilder
     {
         if (a < 0)
         {
-            return _system.Left.FaceValue(cells[0], _halfResistance[0], state[0]);
+            var right = Side(cells, b, +1);
+            return _system.Left.FaceValue(right.Value, right.Resistance, state[0]);
         }
 
         if (b >= cells.Length)
         {
-            return _system.Right.FaceValue(cells[^1], _halfResistance[^1], state[^1]);
+            var left = Side(cells, a, -1);
+            return _system.Right.FaceValue(left.Value, left.Resistance, state[^1]);
         }
 
-        var weightA = 1 / _halfResistance[a];
-        var weightB = 1 / _halfResistance[b];
-        return ((cells[a] * weightA) + (cells[b] * weightB)) / (weightA + weightB);
+        var sideA = Side(cells, a, -1);
+        var sideB = Side(cells, b, +1);
+        var weightA = 1 / sideA.Resistance;
+        var weightB = 1 / sideB.Resistance;
+        return ((sideA.Value * weightA) + (sideB.Value * weightB)) / (weightA + weightB);
+    }
+
+    /// <summary>The side of a face made by cell <paramref name="nearest"/> and the next one away from the face (<paramref name="away"/> = -1 or +1), when in the same layer.</summary>
+    private CellSide Side(ReadOnlySpan<double> cells, int nearest, int away)
+    {
+        var grid = _system.Grid;
+        var next = nearest + away;
+        var sameLayer = next >= 0 && next < cells.Length && grid.LayerOfCell[next] == grid.LayerOfCell[nearest];
+        return CellSide.From(
+            cells[nearest],
+            grid.WidthsMeters[nearest],
+            _halfResistance[nearest],
+            sameLayer ? cells[next] : null,
+            sameLayer ? grid.WidthsMeters[next] : 0);
     }
 }

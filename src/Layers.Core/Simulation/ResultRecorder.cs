@@ -11,7 +11,10 @@ namespace Layers.Core.Simulation;
 /// </summary>
 internal sealed class ResultRecorder : ITimeLoopObserver
 {
-    /// <summary>Fraction of the final state beyond which the lag-time intercept is read.</summary>
+    /// <summary>
+    /// Fraction of the final state beyond which the lag-time intercept is read from the run, when the system is not
+    /// linear (<see cref="SteadyAsymptote"/> gives it otherwise); the loop runs to it in either case.
+    /// </summary>
     public const double SteadyEnough = 0.9999;
 
     private readonly SimulationCase _case;
@@ -24,6 +27,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     private readonly CrossingTracker _systemTracker;
     private readonly CrossingTracker? _leftTracker;
     private readonly CrossingTracker? _rightTracker;
+    private readonly double[] _initialState;
     private double _systemFraction;
 
     public ResultRecorder(DiscreteModel model, IReadOnlyList<StageSystem> stages, FinalStateTarget final, SamplingEvents? sampling = null)
@@ -35,9 +39,10 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         _observables = new Observables(model, stages, final, sampling);
         _profiles = new ProfileBuilder(model);
         _systemFraction = Tracked(_observables.FractionOfFinalState(initialState));
-        _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction);
+        _systemTracker = new CrossingTracker(ThresholdTimes.Levels, _systemFraction, state => Tracked(_observables.FractionOfFinalState(state)));
         _leftTracker = TrackerFor(Side.Left, initialState);
         _rightTracker = TrackerFor(Side.Right, initialState);
+        _initialState = model.InitialState;
     }
 
     public IReadOnlyList<StateSample> Samples => _samples;
@@ -52,7 +57,10 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     /// </summary>
     public double LowestAmountRelative { get; private set; }
 
-    /// <summary>Lag-time intercept t - Q/J, once steady enough.</summary>
+    /// <summary>
+    /// Lag-time intercept of the steady line, once steady enough: from the steady asymptote of the discrete system
+    /// (<see cref="SteadyAsymptote"/>) when it is linear, else t - Q/J at the first step past <see cref="SteadyEnough"/>.
+    /// </summary>
     public double? LagTimeSeconds { get; private set; }
 
     /// <summary>Flux into the receiving bath at the end of the duration, kg/m2/s.</summary>
@@ -81,17 +89,20 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         }
     }
 
-    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense)
     {
         _systemFraction = Tracked(_observables.FractionOfFinalState(state));
-        _systemTracker.Observe(timeSeconds, _systemFraction);
-        Observe(_leftTracker, Side.Left, timeSeconds, state);
-        Observe(_rightTracker, Side.Right, timeSeconds, state);
+        _systemTracker.Observe(_systemFraction, dense);
+        Observe(_leftTracker, Side.Left, state, dense);
+        Observe(_rightTracker, Side.Right, state, dense);
         if (_final.Kind == FinalStateKind.SteadyPermeation && LagTimeSeconds is null && _systemFraction >= SteadyEnough)
         {
             var flux = Math.Abs(_final.Steady!.FluxKgPerSquareMeterSecond);
             var received = _final.Steady.FluxKgPerSquareMeterSecond > 0 ? -bathInflow.RightPerArea : -bathInflow.LeftPerArea;
-            LagTimeSeconds = timeSeconds - (received / flux);
+            var exact = _system.Saturation is null
+                ? SteadyAsymptote.LagTimeSeconds(_system, _initialState, _final.Steady.FluxKgPerSquareMeterSecond > 0)
+                : null;
+            LagTimeSeconds = exact ?? (timeSeconds - (received / flux));
         }
     }
 
@@ -120,14 +131,14 @@ internal sealed class ResultRecorder : ITimeLoopObserver
 
     private CrossingTracker? TrackerFor(Side side, ReadOnlySpan<double> initialState)
         => _observables.CompartmentFraction(side, initialState) is { } fraction
-            ? new CrossingTracker(ThresholdTimes.Levels, fraction)
+            ? new CrossingTracker(ThresholdTimes.Levels, fraction, state => _observables.CompartmentFraction(side, state) ?? double.NaN)
             : null;
 
-    private void Observe(CrossingTracker? tracker, Side side, double time, ReadOnlySpan<double> state)
+    private void Observe(CrossingTracker? tracker, Side side, ReadOnlySpan<double> state, IDenseOutput dense)
     {
         if (tracker is not null && _observables.CompartmentFraction(side, state) is { } fraction)
         {
-            tracker.Observe(time, fraction);
+            tracker.Observe(fraction, dense);
         }
     }
 

@@ -114,6 +114,7 @@ public static class StagedIntegration
         private readonly double _offsetSeconds = stage.StartSeconds;
         private readonly double[] _end = new double[nodeCount];
         private readonly double[]? _own = stage.ToStage is null ? null : new double[nodeCount];
+        private readonly ShiftedDenseOutput _dense = new(stage, nodeCount);
         private bool _reachedEnd;
         private int _nextRequested;
 
@@ -137,10 +138,11 @@ public static class StagedIntegration
             }
         }
 
-        public void OnStep(double timeSeconds, ReadOnlySpan<double> stageState, BathTotals bathInflow)
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> stageState, BathTotals bathInflow, IDenseOutput dense)
         {
             var state = Own(stageState);
-            inner.OnStep(timeSeconds + _offsetSeconds, state, Shift(bathInflow));
+            _dense.Wrap(dense);
+            inner.OnStep(timeSeconds + _offsetSeconds, state, Shift(bathInflow), _dense);
 
             // The loop lands exactly on the stage end (its last output); only the last stage may step past it, while the
             // observer looks for the times to equilibrium, and those later states are not the stage's end.
@@ -177,6 +179,35 @@ public static class StagedIntegration
             }
 
             stageState.CopyTo(_own);
+            stage.OutOfStage(_own);
+            return _own;
+        }
+    }
+
+    /// <summary>
+    /// A stage's dense output on the run's clock and in the case's own state variable: the same step, shifted by the
+    /// stage's start, with its own buffer so that reading inside the step leaves the step's end state untouched.
+    /// </summary>
+    private sealed class ShiftedDenseOutput(StageSystem stage, int nodeCount) : IDenseOutput
+    {
+        private readonly double[]? _own = stage.ToStage is null ? null : new double[nodeCount];
+        private IDenseOutput? _step;
+
+        public double StartSeconds => _step!.StartSeconds + stage.StartSeconds;
+
+        public double EndSeconds => _step!.EndSeconds + stage.StartSeconds;
+
+        public void Wrap(IDenseOutput step) => _step = step;
+
+        public ReadOnlySpan<double> StateAt(double timeSeconds)
+        {
+            var state = _step!.StateAt(timeSeconds - stage.StartSeconds);
+            if (_own is null)
+            {
+                return state;
+            }
+
+            state.CopyTo(_own);
             stage.OutOfStage(_own);
             return _own;
         }

@@ -59,7 +59,7 @@ internal sealed class UndissolvedTracker : ITimeLoopObserver
     {
     }
 
-    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+    public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense)
     {
         if (timeSeconds > _case.DurationSeconds * (1 + 1e-12))
         {

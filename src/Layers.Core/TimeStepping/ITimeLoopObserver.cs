@@ -13,7 +13,11 @@ public interface ITimeLoopObserver
     void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow);
 
     /// <summary>Called after every accepted step, including steps beyond the end time.</summary>
-    void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow);
+    /// <param name="timeSeconds">The time at the end of the step.</param>
+    /// <param name="state">u at every node at the end of the step; valid only during the call.</param>
+    /// <param name="bathInflow">Mass per area that has entered the stack from each bath since t = 0, kg/m2.</param>
+    /// <param name="dense">The solution inside the step, for placing a time within it; valid only during the call.</param>
+    void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense);
 
     /// <summary>
     /// Asked after the end time is reached and after each later step: true to keep integrating (no outputs) until

@@ -7,7 +7,8 @@ namespace Layers.Core.TimeStepping;
 /// <summary>
 /// The time loop: tries TR-BDF2 steps, lets <see cref="StepSizeController"/> accept or resize them, rejects steps
 /// that would make a value negative beyond round-off, shortens steps to land exactly on the end and on the times of
-/// state events, interpolates the outputs that fall inside a step, and notifies the observer. Work per step is
+/// state events, interpolates the outputs that fall inside a step, and notifies the observer, handing it the step's
+/// interpolant (<see cref="IDenseOutput"/>). Work per step is
 /// O(nodes); nothing is allocated inside the loop.
 /// </summary>
 public sealed class TransientSolver
@@ -49,6 +50,7 @@ public sealed class TransientSolver
         var loop = new LoopState(_system.NodeCount, initialState, ToleranceScale(initialState));
         var stepper = new TrBdf2Stepper(_system);
         var interpolant = new StepInterpolant(_system.NodeCount);
+        var dense = new AcceptedStepOutput(new StepInterpolant(_system.NodeCount));
         var landings = LandingTimes(plan, events);
         var weights = Weights(_options.RelativeTolerance, loop.Scale);
         var floors = NegativityFloors(initialState, loop.Scale);
@@ -114,7 +116,8 @@ public sealed class TransientSolver
             loop.Accept(landsOnTarget ? target : loop.Time + tried, tried, trial);
             step = landsOnTarget ? Math.Max(proposal, step) : proposal;
             outputIndex = ReportInside(plan.OutputTimesSeconds, outputIndex, loop, stepper, trial, interpolant, observer);
-            observer.OnStep(loop.Time, loop.Current, loop.Baths);
+            dense.Set(loop.PreviousTime, loop.Time, loop.Candidate, stepper, loop.Current);
+            observer.OnStep(loop.Time, loop.Current, loop.Baths, dense);
             if (outputIndex < plan.OutputTimesSeconds.Count && IsAt(plan.OutputTimesSeconds[outputIndex], loop.Time))
             {
                 observer.OnOutput(loop.Time, loop.Current, loop.Baths);

@@ -55,7 +55,7 @@ public sealed class TightToleranceTests
         }
 
         // A closed stack with a compartment: the total held by the nodes is conserved (no baths).
-        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense)
         {
             WorstRelativeMassChange = Math.Max(WorstRelativeMassChange, Math.Abs(system.TotalMass(state) - _initialMass) / _initialMass);
             if (++_steps == count)

@@ -58,7 +58,7 @@ public sealed class TimeLoopAllocationTests
 
         public void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow) => Outputs++;
 
-        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
+        public void OnStep(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow, IDenseOutput dense)
         {
             var bytes = GC.GetAllocatedBytesForCurrentThread();
             if (Steps == 0)

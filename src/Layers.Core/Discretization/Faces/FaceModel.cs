@@ -66,12 +66,22 @@ public abstract class FaceModel
     /// (u_out - u_cell) / (R_half + R_film) crosses the half cell, so u_face = u_cell + flux R_half, the
     /// resistance-weighted mean of the two (<see cref="SeriesResistance"/>).
     /// </summary>
-    /// <param name="cellValue">u of the end cell.</param>
-    /// <param name="endHalfCellResistance">Half-cell resistance of the end cell, s/m.</param>
+    /// <param name="cellValue">u the end cells extrapolate to at the face with no flux through it: the end cell's own u,
+    /// or the second-order value of <see cref="CellSide"/>.</param>
+    /// <param name="endHalfCellResistance">Resistance of the cells' side to a flux through the face: the end cell's
+    /// half-cell resistance, or that of <see cref="CellSide"/>, s/m.</param>
     /// <param name="endNodeValue">u of the chain's end node (the added node when there is one).</param>
     public double FaceValue(double cellValue, double endHalfCellResistance, double endNodeValue)
     {
-        var flux = (OutsideValue(cellValue, endNodeValue) - cellValue) / (endHalfCellResistance + FilmResistance);
+        // Without a film the face takes the outside value itself; formed as below it would only do so to round-off,
+        // which can leave a face on a zero bath a hair below zero.
+        var outside = OutsideValue(cellValue, endNodeValue);
+        if (FilmResistance == 0)
+        {
+            return outside;
+        }
+
+        var flux = (outside - cellValue) / (endHalfCellResistance + FilmResistance);
         return cellValue + (flux * endHalfCellResistance);
     }
 
