@@ -8,8 +8,9 @@ namespace Layers.Tests.Verification;
 /// <summary>
 /// The accuracy promise (docs/numerics.md, "The accuracy promise") against published closed forms
 /// (<see cref="ClosedFormFigures"/>, sources beside each case) at accuracies 1e-3, 1e-4 and 1e-5: every figure with
-/// a closed form is within the accuracy of its own value, or the run lists it as missing it; and the error estimate
-/// beside it is at least the actual error and at most ten times it.
+/// a closed form is within the accuracy of its own value, or the run lists it as missing it; the error estimate
+/// beside it is at least the actual error and at most ten times it; and on these cases the refinement meets the
+/// accuracy everywhere but on the deepest tails.
 /// </summary>
 public sealed class ErrorEstimateTests
 {
@@ -27,30 +28,39 @@ public sealed class ErrorEstimateTests
         return data;
     }
 
+    /// <summary>
+    /// The promise as the docs state it: within the accuracy of its own value, or listed by the run as missing it (a
+    /// refinement the work limit did not allow).
+    /// </summary>
     [Theory]
     [MemberData(nameof(Runs))]
-    public void Every_figure_with_a_closed_form_is_within_the_accuracy_of_its_own_value(string name, double accuracy)
+    public void Every_figure_with_a_closed_form_is_within_the_accuracy_of_its_own_value_or_listed_as_missing_it(string name, double accuracy)
     {
         var misses = Compared(name, accuracy)
-            .Where(row => !row.Figure.Figure.IsNegligible && row.Actual > accuracy * Math.Abs(row.Exact))
+            .Where(row => !row.Figure.Figure.IsNegligible && row.Actual > accuracy * Math.Abs(row.Exact) && !row.Figure.Exceeds(accuracy))
             .Select(Describe)
             .ToList();
         Assert.True(misses.Count == 0, $"{name} at {accuracy}: {misses.Count} figures miss the accuracy:\n" + string.Join('\n', misses));
     }
 
     /// <summary>
-    /// The estimate bounds the actual error from above, and is at most ten times it. Where the actual error is below a
-    /// tenth of the accuracy (an error that happens to pass through zero near a report time), the upper bound is held
-    /// at ten times that tenth instead: no estimate can follow an error to zero.
+    /// Where the actual error is at least a tenth of the accuracy, the estimate is at least the actual error and at
+    /// most ten times it. Below that (an error that happens to pass near zero at a report time, or one far below what
+    /// was asked) no estimate can follow it; there the estimate must stay within the accuracy, so that the run does
+    /// not cry wolf.
     /// </summary>
     [Theory]
     [MemberData(nameof(Runs))]
     public void The_estimate_is_at_least_the_actual_error_and_at_most_ten_times_it(string name, double accuracy)
     {
         var rows = Compared(name, accuracy).Where(row => !row.Figure.Figure.IsNegligible).ToList();
-        var low = rows.Where(row => row.Figure.EstimatedError < row.Actual).Select(Describe).ToList();
-        var high = rows.Where(row => row.Figure.EstimatedError > 10 * Math.Max(row.Actual, 0.1 * accuracy * Math.Abs(row.Exact))).Select(Describe).ToList();
-        Assert.True(low.Count == 0 && high.Count == 0, $"{name} at {accuracy}: below the actual error:\n{string.Join('\n', low)}\nabove ten times it:\n{string.Join('\n', high)}");
+        var material = rows.Where(row => row.Actual >= 0.1 * accuracy * Math.Abs(row.Exact)).ToList();
+        var low = material.Where(row => row.Figure.EstimatedError < row.Actual).Select(Describe).ToList();
+        var high = material.Where(row => row.Figure.EstimatedError > 10 * row.Actual).Select(Describe).ToList();
+        var alarms = rows.Except(material).Where(row => row.Figure.Exceeds(accuracy)).Select(Describe).ToList();
+        Assert.True(
+            low.Count == 0 && high.Count == 0 && alarms.Count == 0,
+            $"{name} at {accuracy}: below the actual error:\n{string.Join('\n', low)}\nabove ten times it:\n{string.Join('\n', high)}\nabove the accuracy though the error is far below it:\n{string.Join('\n', alarms)}");
     }
 
     [Fact]

@@ -20,8 +20,12 @@ internal static class ErrorEstimation
     /// <summary>Most levels a run is refined by in all (cells up to 2^this times the first mesh's).</summary>
     public const int MaximumLevels = 8;
 
-    /// <summary>No refinement goes beyond this many cells.</summary>
-    public const int MaximumCells = 40_000;
+    /// <summary>
+    /// No refinement is made whose solve would take more than this much work, in cells times steps (each level
+    /// doubles both): a few tenths of a second on one core, so that a run that cannot close its shortfall says so instead of
+    /// running for minutes.
+    /// </summary>
+    public const double MaximumWork = 2e6;
 
     public static SimulationResult Run(SimulationCase simulation, Func<SimulationCase, SimulationResult> solve)
     {
@@ -54,7 +58,7 @@ internal static class ErrorEstimation
         while (simulation.Numerics.ErrorControl == ErrorControl.EstimateAndRefine && !summary.MeetsAccuracy)
         {
             var shortfall = WorstShortfall(summary);
-            var jump = LevelsToClose(shortfall, fine.Grid.CellCount, MaximumLevels - level);
+            var jump = LevelsToClose(shortfall, Work(fine), MaximumLevels - level);
             if (jump == 0)
             {
                 break;
@@ -113,13 +117,14 @@ internal static class ErrorEstimation
 
     /// <summary>
     /// How many levels to refine by: enough for the worst shortfall to close at second order (each level divides it by
-    /// four), within the levels left and the cell limit (each level doubles the cells); 0 when none is left.
+    /// four), within the levels left and the work limit (each level doubles the cells and the steps); 0 when none is
+    /// left.
     /// </summary>
-    internal static int LevelsToClose(double shortfall, int cells, int levelsLeft)
+    internal static int LevelsToClose(double shortfall, double work, int levelsLeft)
     {
         var wanted = double.IsFinite(shortfall) ? (int)Math.Ceiling(Math.Log(shortfall) / Math.Log(LevelErrorFactor)) : 1;
         var affordable = 0;
-        while (affordable < levelsLeft && cells * Math.Pow(2, affordable + 1) <= MaximumCells)
+        while (affordable < levelsLeft && work * Math.Pow(4, affordable + 1) <= MaximumWork)
         {
             affordable++;
         }
@@ -133,6 +138,8 @@ internal static class ErrorEstimation
 
     private static NumericalErrorSummary Unavailable(SimulationResult fine, IReadOnlyList<SolveRecord> solves, string reason) =>
         new(fine.Case.Numerics.Accuracy, NegligibleFloor.AmountPerArea(fine), [], [.. solves], reason);
+
+    private static double Work(SimulationResult result) => (double)result.Grid.CellCount * result.Statistics.AcceptedSteps;
 
     private static SolveRecord Record(SimulationResult result) =>
         new(result.Grid.CellCount, result.Statistics.AcceptedSteps, result.Case.Numerics.Solver.RelativeTolerance);

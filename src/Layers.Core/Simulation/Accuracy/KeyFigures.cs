@@ -53,7 +53,7 @@ public static class KeyFigures
             FaceSample Pick(ReportPoint report) => (side == Side.Left ? report.Sample.Left : report.Sample.Right)!;
             var medium = face.MediumName;
             Series(path + ".transferredMassPerAreaKgPerSquareMeter", FigureKind.Amount, medium + ": received per area", amount, report => Pick(report).TransferredIntoMediumPerArea);
-            Series(path + ".fluxIntoMediumKgPerSquareMeterSecond", FigureKind.Flux, medium + ": flux into it", flux, report => Pick(report).FluxIntoMediumKgPerSquareMeterSecond);
+            Series(path + ".fluxIntoMediumKgPerSquareMeterSecond", FigureKind.Flux, medium + ": flux into the medium", flux, report => Pick(report).FluxIntoMediumKgPerSquareMeterSecond);
             if (face is CompartmentFace compartment)
             {
                 var concentration = amount * compartment.ContactAreaSquareMeters / compartment.VolumeCubicMeters;
