@@ -26,7 +26,8 @@ public static class AccuracyTables
         var above = error.AboveAccuracy.Count;
         return above == 0
             ? $"within {accuracy} ({worst})"
-            : $"{above} figure{(above == 1 ? string.Empty : "s")} above {accuracy} ({worst}; see below)";
+            : $"{above} figure{(above == 1 ? string.Empty : "s")} above {accuracy} ({worst}; see below)"
+                + (error.RefinementStopped is { } stopped ? $"; refinement stopped: {stopped}" : string.Empty);
     }
 
     /// <summary>The figures whose estimated error exceeds the accuracy, worst first; null when there are none.</summary>

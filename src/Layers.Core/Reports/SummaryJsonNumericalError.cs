@@ -38,16 +38,11 @@ internal static class SummaryJsonNumericalError
         }
 
         json.WriteEndArray();
-        if (error.Unavailable is { } reason)
-        {
-            json.WriteString("unavailable", reason);
-        }
-        else
-        {
-            json.WriteNull("unavailable");
-        }
+        WriteText(json, "unavailable", error.Unavailable);
 
         json.WriteBoolean("meetsAccuracy", error.MeetsAccuracy);
+        WriteText(json, "refinementStopped", error.RefinementStopped);
+
         SummaryJson.WriteNullable(json, "worstRelativeError", error.WorstRelativeError);
         json.WriteStartArray("figures");
         foreach (var figure in error.Figures)
@@ -71,5 +66,17 @@ internal static class SummaryJsonNumericalError
 
         json.WriteEndArray();
         json.WriteEndObject();
+    }
+
+    private static void WriteText(Utf8JsonWriter json, string key, string? text)
+    {
+        if (text is null)
+        {
+            json.WriteNull(key);
+        }
+        else
+        {
+            json.WriteString(key, text);
+        }
     }
 }

@@ -16,6 +16,12 @@ public sealed record NumericalErrorSummary(
     IReadOnlyList<SolveRecord> Solves,
     string? Unavailable)
 {
+    /// <summary>
+    /// Why the refinement stopped while figures still miss the accuracy, in words (its work limit, a refinement that
+    /// did not pay, a mesh the case fixes, a finer solve that failed); null when nothing misses it.
+    /// </summary>
+    public string? RefinementStopped { get; init; }
+
     /// <summary>The figures above their floor whose estimated error exceeds the accuracy.</summary>
     public IReadOnlyList<FigureError> AboveAccuracy => [.. Figures.Where(figure => figure.Exceeds(Accuracy))];
 

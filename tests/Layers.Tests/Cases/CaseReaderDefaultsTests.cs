@@ -133,6 +133,19 @@ public sealed class CaseReaderDefaultsTests
         Assert.Equal(480, mesh.TotalCells);
         Assert.Equal(12, mesh.MinimumCellsPerLayer);
         Assert.Equal(1e-6, simulation.Numerics.Solver.RelativeTolerance);
+        Assert.Equal(ErrorControl.EstimateOnly, simulation.Numerics.ErrorControl);
+    }
+
+    [Fact]
+    public void Numerics_promise_the_accuracy_with_refinement_and_the_default_floor_unless_the_case_names_one()
+    {
+        // docs/case-format.md, $.numerics.accuracy and $.numerics.negligibleAmount; 1 ng/dm2 = 1e-12 kg / 1e-2 m2.
+        var plain = ReadValid(CaseJson.Minimal).Numerics;
+        var named = ReadValid(CaseJson.MinimalWith(("$.numerics", """{ "accuracy": 1e-3, "negligibleAmount": "1 ng/dm2" }"""))).Numerics;
+
+        Assert.Equal((1e-4, ErrorControl.EstimateAndRefine, null), (plain.Accuracy, plain.ErrorControl, plain.NegligibleAmountPerArea));
+        Assert.Equal(1e-3, named.Accuracy);
+        Assert.Equal(1e-10, named.NegligibleAmountPerArea!.Value, 1e-22);
     }
 
     [Fact]

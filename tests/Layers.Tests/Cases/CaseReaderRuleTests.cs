@@ -123,6 +123,8 @@ public sealed class CaseReaderRuleTests
         { "tolerance above range", "$.numerics.relativeTolerance", "0.1", "$.numerics.relativeTolerance", "must be from 1e-10 to 1e-2; got 0.1" },
         { "accuracy below range", "$.numerics.accuracy", "1e-7", "$.numerics.accuracy", "must be from 1e-6 to 1e-2 (a relative accuracy such as 1e-4); got 1E-07" },
         { "accuracy above range", "$.numerics.accuracy", "0.05", "$.numerics.accuracy", "must be from 1e-6 to 1e-2 (a relative accuracy such as 1e-4); got 0.05" },
+        { "negligible amount not positive", "$.numerics.negligibleAmount", "\"0 ng/dm2\"", "$.numerics.negligibleAmount", "must be a positive mass per area such as \"1 ng/dm2\"; got 0 ng/dm2" },
+        { "negligible amount not a mass per area", "$.numerics.negligibleAmount", "\"1 ng\"", "$.numerics.negligibleAmount", "mass per area" },
 
         // Partition basis.
         { "unknown partition basis", "$.partitionBasis", "\"weight\"", "$.partitionBasis", "expected \"volume\" or \"mass\"; got \"weight\"" },

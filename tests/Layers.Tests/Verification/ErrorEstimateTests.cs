@@ -73,6 +73,33 @@ public sealed class ErrorEstimateTests
         Assert.False(result.NumericalError.Figures.Single(figure => figure.Figure.Path == "$.faces.right.transferredMassPerAreaKgPerSquareMeter[0]").Figure.IsNegligible);
     }
 
+    [Fact]
+    public void A_run_that_cannot_close_its_shortfall_lists_the_figures_and_says_why_the_refinement_stopped()
+    {
+        // The membrane's first arrival is 25 % off on the first mesh at 1e-4 and falls fourfold per level: it would
+        // need about seven levels, beyond the work limit of a run.
+        var result = Simulator.Run(ClosedFormFigures.Get("membrane").Case);
+        var error = result.NumericalError!;
+
+        Assert.False(error.MeetsAccuracy);
+        Assert.Contains(error.AboveAccuracy, figure => figure.Figure.Path == "$.faces.right.transferredMassPerAreaKgPerSquareMeter[0]");
+        Assert.Contains("work limit", error.RefinementStopped, StringComparison.Ordinal);
+        Assert.True(error.Solves.Count > 2, "the run refined before it stopped");
+    }
+
+    [Fact]
+    public void A_fixed_cell_count_is_estimated_but_not_refined()
+    {
+        var (simulation, _) = ClosedFormFigures.Get("membrane");
+        var result = Simulator.Run(simulation with { Numerics = new NumericsSettings(new CellCountMesh(40), new SolverOptions { RelativeTolerance = 1e-4 }) });
+        var error = result.NumericalError!;
+
+        Assert.Equal(2, error.Solves.Count);
+        Assert.InRange(error.Solves[^1].Cells, 40, 80);
+        Assert.False(error.MeetsAccuracy);
+        Assert.Contains("numerics.cells", error.RefinementStopped, StringComparison.Ordinal);
+    }
+
     private static List<(FigureError Figure, double Exact, double Actual)> Compared(string name, double accuracy)
     {
         var (simulation, exact) = ClosedFormFigures.Get(name);

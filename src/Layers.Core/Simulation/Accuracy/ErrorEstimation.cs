@@ -55,12 +55,14 @@ internal static class ErrorEstimation
         }
 
         var summary = Compare(fine, coarse, solves);
-        while (simulation.Numerics.ErrorControl == ErrorControl.EstimateAndRefine && !summary.MeetsAccuracy)
+        string? stopped = simulation.Numerics.ErrorControl == ErrorControl.EstimateAndRefine ? null : "the case fixes its mesh (numerics.cells)";
+        while (stopped is null && !summary.MeetsAccuracy)
         {
             var shortfall = WorstShortfall(summary);
             var jump = LevelsToClose(shortfall, Work(fine), MaximumLevels - level);
             if (jump == 0)
             {
+                stopped = "the next refinement would exceed the work limit of a run";
                 break;
             }
 
@@ -68,6 +70,7 @@ internal static class ErrorEstimation
             var target = below.Completed ? AtLevel(level + jump) : below;
             if (!target.Completed)
             {
+                stopped = "a finer solve did not complete (" + target.FailureReason + ")";
                 break;
             }
 
@@ -84,11 +87,12 @@ internal static class ErrorEstimation
             // error of lower order (a moving front's), and further levels would not pay for themselves either.
             if (!summary.MeetsAccuracy && WorstShortfall(summary) > shortfall / 2)
             {
+                stopped = "a refinement did not halve the worst shortfall (an error of lower order, such as a moving front's)";
                 break;
             }
         }
 
-        return fine with { NumericalError = summary };
+        return fine with { NumericalError = summary.MeetsAccuracy ? summary : summary with { RefinementStopped = stopped } };
     }
 
     /// <summary>Every key figure of <paramref name="fine"/> with its estimated error from the comparison with <paramref name="coarse"/>.</summary>
