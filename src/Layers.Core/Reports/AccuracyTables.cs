@@ -26,8 +26,7 @@ public static class AccuracyTables
         var above = error.AboveAccuracy.Count;
         return above == 0
             ? $"within {accuracy} ({worst})"
-            : $"{above} figure{(above == 1 ? string.Empty : "s")} above {accuracy} ({worst}; see below)"
-                + (error.RefinementStopped is { } stopped ? $"; refinement stopped: {stopped}" : string.Empty);
+            : $"{above} figure{(above == 1 ? string.Empty : "s")} above {accuracy} ({worst}; see below)";
     }
 
     /// <summary>The figures whose estimated error exceeds the accuracy, worst first; null when there are none.</summary>
@@ -52,6 +51,11 @@ public static class AccuracyTables
             .ToList();
         var title = $"Estimated numerical error above the accuracy {error.Accuracy.ToString("0.#e0", CultureInfo.InvariantCulture)}"
             + (error.AboveAccuracy.Count > MostRows ? $" ({MostRows} worst of {error.AboveAccuracy.Count}; all in summary.json)" : string.Empty);
+        if (error.RefinementStopped is { } stopped)
+        {
+            title += $"; refinement stopped: {stopped}";
+        }
+
         return new TextTable(title, ["figure", "value", "estimated error"], rows);
     }
 

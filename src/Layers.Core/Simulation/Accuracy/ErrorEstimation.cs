@@ -55,14 +55,14 @@ internal static class ErrorEstimation
         }
 
         var summary = Compare(fine, coarse, solves);
-        string? stopped = simulation.Numerics.ErrorControl == ErrorControl.EstimateAndRefine ? null : "the case fixes its mesh (numerics.cells)";
+        string? stopped = simulation.Numerics.ErrorControl == ErrorControl.EstimateAndRefine ? null : "the mesh is fixed by numerics.cells";
         while (stopped is null && !summary.MeetsAccuracy)
         {
             var shortfall = WorstShortfall(summary);
             var jump = LevelsToClose(shortfall, Work(fine), MaximumLevels - level);
             if (jump == 0)
             {
-                stopped = "the next refinement would exceed the work limit of a run";
+                stopped = "the next refinement would exceed the work limit";
                 break;
             }
 
@@ -70,7 +70,7 @@ internal static class ErrorEstimation
             var target = below.Completed ? AtLevel(level + jump) : below;
             if (!target.Completed)
             {
-                stopped = "a finer solve did not complete (" + target.FailureReason + ")";
+                stopped = "a finer solve failed: " + target.FailureReason;
                 break;
             }
 
@@ -87,7 +87,7 @@ internal static class ErrorEstimation
             // error of lower order (a moving front's), and further levels would not pay for themselves either.
             if (!summary.MeetsAccuracy && WorstShortfall(summary) > shortfall / 2)
             {
-                stopped = "a refinement did not halve the worst shortfall (an error of lower order, such as a moving front's)";
+                stopped = "a refinement did not halve the worst shortfall";
                 break;
             }
         }
