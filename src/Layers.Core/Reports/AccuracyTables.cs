@@ -29,6 +29,26 @@ public static class AccuracyTables
             : $"{above} figure{(above == 1 ? string.Empty : "s")} above {accuracy} ({worst}; see below)";
     }
 
+    /// <summary>The key-figures line of the independent check: how far the exact method and the run agree, or why it did not apply.</summary>
+    public static string CrossCheck(CrossCheckSummary check)
+    {
+        ArgumentNullException.ThrowIfNull(check);
+        if (check.NotApplicable is { } reason)
+        {
+            return $"not applicable: {reason}";
+        }
+
+        if (check.LargestRelativeDifference is not { } largest)
+        {
+            return "no figure above the floor to compare";
+        }
+
+        var disagreements = check.Disagreements.Count;
+        return disagreements == 0
+            ? $"the exact method agrees to {Relative(largest)} over {check.Figures.Count} figures"
+            : $"{disagreements} of {check.Figures.Count} figures differ from the exact method by more than the accuracy and their estimate (largest {Relative(largest)}; summary.json crossCheck)";
+    }
+
     /// <summary>The figures whose estimated error exceeds the accuracy, worst first; null when there are none.</summary>
     public static TextTable? Shortfalls(SimulationResult result)
     {

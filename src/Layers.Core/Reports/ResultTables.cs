@@ -96,6 +96,11 @@ public static class ResultTables
             Add("numerical error", AccuracyTables.Summary(error));
         }
 
+        if (result.CrossCheck is { } check)
+        {
+            Add("independent check", AccuracyTables.CrossCheck(check));
+        }
+
         return new TextTable("Key figures", ["quantity", "value"], rows);
     }
 

@@ -38,6 +38,7 @@ public static class SummaryJson
             SummaryJsonDiffusionCell.Write(json, result);
             WriteSolver(json, result);
             SummaryJsonNumericalError.Write(json, result);
+            SummaryJsonCrossCheck.Write(json, result);
             json.WriteEndObject();
         }
 

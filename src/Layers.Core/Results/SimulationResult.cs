@@ -43,6 +43,12 @@ public sealed record SimulationResult
     /// </summary>
     public NumericalErrorSummary? NumericalError { get; init; }
 
+    /// <summary>
+    /// The run checked against the exact method where the case allows it (and why not where it does not); null when
+    /// the error was not estimated or the run did not complete.
+    /// </summary>
+    public CrossCheckSummary? CrossCheck { get; init; }
+
     /// <summary>The food-contact assessment, for a case with food-contact settings that ran to its end.</summary>
     public FoodContactResult? FoodContact { get; init; }
 

@@ -21,9 +21,13 @@ public static class Simulator
     public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
     {
         ArgumentNullException.ThrowIfNull(simulation);
-        return simulation.Numerics.ErrorControl == ErrorControl.None
-            ? Solve(simulation, cancellation)
-            : ErrorEstimation.Run(simulation, solved => Solve(solved, cancellation));
+        if (simulation.Numerics.ErrorControl == ErrorControl.None)
+        {
+            return Solve(simulation, cancellation);
+        }
+
+        var result = ErrorEstimation.Run(simulation, solved => Solve(solved, cancellation));
+        return result.Completed ? result with { CrossCheck = ExactCrossCheck.Of(result) } : result;
     }
 
     /// <summary>One solve at the case's own numerics.</summary>
