@@ -227,6 +227,18 @@ public static class SummaryJson
         }
     }
 
+    internal static void WriteNullable(Utf8JsonWriter json, string key, string? text)
+    {
+        if (text is null)
+        {
+            json.WriteNull(key);
+        }
+        else
+        {
+            json.WriteString(key, text);
+        }
+    }
+
     internal static void WriteNullable(Utf8JsonWriter json, string key, double? value)
     {
         json.WritePropertyName(key);

@@ -20,14 +20,7 @@ internal static class SummaryJsonCrossCheck
 
         json.WriteStartObject();
         json.WriteString("method", Method);
-        if (check.NotApplicable is { } reason)
-        {
-            json.WriteString("notApplicable", reason);
-        }
-        else
-        {
-            json.WriteNull("notApplicable");
-        }
+        SummaryJson.WriteNullable(json, "notApplicable", check.NotApplicable);
 
         json.WriteNumber("figuresCompared", check.Figures.Count);
         SummaryJson.WriteNullable(json, "largestRelativeDifference", check.LargestRelativeDifference);

@@ -38,10 +38,10 @@ internal static class SummaryJsonNumericalError
         }
 
         json.WriteEndArray();
-        WriteText(json, "unavailable", error.Unavailable);
+        SummaryJson.WriteNullable(json, "unavailable", error.Unavailable);
 
         json.WriteBoolean("meetsAccuracy", error.MeetsAccuracy);
-        WriteText(json, "refinementStopped", error.RefinementStopped);
+        SummaryJson.WriteNullable(json, "refinementStopped", error.RefinementStopped);
 
         SummaryJson.WriteNullable(json, "worstRelativeError", error.WorstRelativeError);
         json.WriteStartArray("figures");
@@ -66,17 +66,5 @@ internal static class SummaryJsonNumericalError
 
         json.WriteEndArray();
         json.WriteEndObject();
-    }
-
-    private static void WriteText(Utf8JsonWriter json, string key, string? text)
-    {
-        if (text is null)
-        {
-            json.WriteNull(key);
-        }
-        else
-        {
-            json.WriteString(key, text);
-        }
     }
 }
