@@ -1,5 +1,6 @@
 using Layers.Core.Analytics;
 using Layers.Core.Domain;
+using Layers.Core.Laplace;
 using Layers.Core.Results;
 using Layers.Core.Simulation;
 
@@ -31,6 +32,7 @@ public static class VerificationSuite
         results.Add(SteadyThreeLayers(cancellation));
         results.Add(ClosedEquilibrium(cancellation));
         results.Add(Laminate(cancellation));
+        results.AddRange(MultiLayerStacks(cancellation));
         return results;
     }
 
@@ -132,6 +134,53 @@ public static class VerificationSuite
             "Frisch, J. Phys. Chem. 61 (1957) 93, time-lag integral (from memory); " + Crank + ", ch. 12, laminates",
             "lag time, s",
             expected, result.Permeation!.LagTimeSeconds ?? double.NaN, DefaultTolerance);
+    }
+
+    /// <summary>
+    /// Multi-layer stacks with partition jumps over decades, each solved both ways: by the finite volumes and by the
+    /// exact solution of the stack in the Laplace domain (src/Layers.Core/Laplace), two methods that share nothing but
+    /// the case (invented stacks).
+    /// </summary>
+    private static IEnumerable<BenchmarkResult> MultiLayerStacks(CancellationToken cancellation)
+    {
+        const string exact = "exact solution in the Laplace domain: transfer matrices of a composite wall (Carslaw and Jaeger, "
+            + "Conduction of Heat in Solids, 2nd ed. (1959), ch. 12, from memory) inverted on Talbot's contour (Talbot, "
+            + "J. Inst. Maths Applics 23 (1979) 97, from memory)";
+
+        var laminate = Case(
+            new ClosedFace(),
+            new CompartmentFace("food", 1e-3 / 0.06, 1, 0.2, 0, 1e-6),
+            10 * 86400,
+            [Layer("print", 12e-6, 5e-14, 2, 0), Layer("adhesive", 3e-6, 2e-12, 1.5, 0), Layer("core", 40e-6, 1e-13, 1, 800), Layer("barrier", 8e-6, 3e-14, 50, 0), Layer("sealant", 25e-6, 8e-14, 1, 0)]);
+        var result = Simulator.Run(laminate, cancellation);
+        yield return new BenchmarkResult(
+            "five-layer laminate into a food compartment with a film, K 0.2 to 50", exact, "amount received by the food at 10 d, kg/m2",
+            LaplaceSolution.For(laminate).At(laminate.DurationSeconds).Right!.TransferredIntoMediumPerArea,
+            result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea,
+            DefaultTolerance);
+
+        var membrane = Case(
+            new BathFace("donor", 5, 1, 2e-6),
+            new BathFace("receiver", 0, 1, 5e-6),
+            6 * 3600,
+            [Layer("adhesive", 20e-6, 1e-11, 3, 0), Layer("membrane", 50e-6, 5e-12, 0.1, 0), Layer("backing", 10e-6, 2e-11, 8, 0), Layer("skin", 15e-6, 1e-12, 0.5, 0)]);
+        result = Simulator.Run(membrane, cancellation);
+        yield return new BenchmarkResult(
+            "four layers between a donor and a receiver, films on both faces", exact, "amount received at 6 h, kg/m2",
+            LaplaceSolution.For(membrane).At(membrane.DurationSeconds).Right!.TransferredIntoMediumPerArea,
+            result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea,
+            DefaultTolerance);
+
+        var plies = Enumerable.Range(0, 10)
+            .Select(i => Layer($"ply {i + 1}", 5e-6, i % 2 == 0 ? 1e-13 : 4e-12, i % 2 == 0 ? 1 : 20, i < 2 ? 100 : 0))
+            .ToArray();
+        var closed = Case(new ClosedFace(), new ClosedFace(), 2 * 86400, plies);
+        result = Simulator.Run(closed, cancellation);
+        yield return new BenchmarkResult(
+            "ten closed plies, K alternating 1 and 20, the first two loaded", exact, "mass per area in the last ply at 2 d, kg/m2",
+            LaplaceSolution.For(closed).At(closed.DurationSeconds).LayerMassPerArea[^1],
+            result.Reports[^1].Sample.LayerMassPerArea[^1],
+            DefaultTolerance);
     }
 
     private static BenchmarkCurve Curve(SimulationResult result, string xLabel, string yLabel, double timeScale, Func<StateSample, double> computed, Func<double, double> analytic)
