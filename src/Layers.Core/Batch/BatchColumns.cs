@@ -14,7 +14,7 @@ public static class BatchColumns
     public static IReadOnlyList<string> Names { get; } =
     [
         "case", "file", "parameters", "status", "finalState", .. NamedResults.InBatchSummary.Select(result => NamedResults.SummaryKey(result)!),
-        "worstMassBalanceError", "limit", "limitVerdict", "message",
+        "worstMassBalanceError", "worstEstimatedError", "figuresAboveAccuracy", "limit", "limitVerdict", "message",
     ];
 
     /// <summary>
@@ -24,7 +24,7 @@ public static class BatchColumns
     public static bool HoldsNumbers(int column) => NumberColumns.Contains(Names[column]);
 
     private static HashSet<string> NumberColumns { get; } =
-        new([.. NamedResults.InBatchSummary.Select(result => NamedResults.SummaryKey(result)!), "worstMassBalanceError"], StringComparer.Ordinal);
+        new([.. NamedResults.InBatchSummary.Select(result => NamedResults.SummaryKey(result)!), "worstMassBalanceError", "worstEstimatedError", "figuresAboveAccuracy"], StringComparer.Ordinal);
 
     /// <summary>The cells of a row, in the order of <see cref="Names"/>; numbers in invariant culture, G10.</summary>
     public static IReadOnlyList<string> Cells(BatchRow row)
@@ -35,6 +35,8 @@ public static class BatchColumns
             row.Name, row.File, Parameters(row), StatusName(row.Status), results?.FinalState ?? string.Empty,
             .. NamedResults.InBatchSummary.Select(result => Number(results?.Pick(result))),
             Number(results?.WorstMassBalanceError),
+            Number(results?.WorstEstimatedError),
+            Number(results?.FiguresAboveAccuracy),
             row.Limit is { } limit ? $"{limit.Quantity} <= {CsvText.Number(limit.LimitSi)}" : string.Empty,
             row.Limit is { } check ? (check.Exceeded ? "exceeded" : "within") : string.Empty,
             row.Message,

@@ -11,6 +11,11 @@ namespace Layers.Core.Batch;
 /// <param name="LagTimeSeconds">Lag time of the amount received; null when not a permeation case or not reached.</param>
 /// <param name="TimeTo90PercentSeconds">Time for the whole system to go 90 % of the way to its final state; null when not reached.</param>
 /// <param name="WorstMassBalanceError">Largest relative mass balance error.</param>
+/// <param name="WorstEstimatedError">
+/// Largest estimated relative error over the case's key figures above their floor (summary.json numericalError); null
+/// without an estimate.
+/// </param>
+/// <param name="FiguresAboveAccuracy">How many key figures the run lists above its accuracy; null without an estimate.</param>
 public sealed record BatchKeyResults(
     string FinalState,
     double? LeftReceivedKgPerSquareMeter,
@@ -18,7 +23,9 @@ public sealed record BatchKeyResults(
     double? SteadyFluxKgPerSquareMeterSecond,
     double? LagTimeSeconds,
     double? TimeTo90PercentSeconds,
-    double WorstMassBalanceError)
+    double WorstMassBalanceError,
+    double? WorstEstimatedError = null,
+    int? FiguresAboveAccuracy = null)
 {
     /// <summary>The key results of a solved case.</summary>
     public static BatchKeyResults From(SimulationResult result)
@@ -32,7 +39,9 @@ public sealed record BatchKeyResults(
             result.Permeation?.SteadyFluxKgPerSquareMeterSecond,
             result.Permeation?.LagTimeSeconds,
             result.FinalState.System.NinetyPercent,
-            result.WorstMassBalanceError);
+            result.WorstMassBalanceError,
+            result.NumericalError?.WorstRelativeError,
+            result.NumericalError?.AboveAccuracy.Count);
     }
 
     /// <summary>The value of a named result, or null for one the batch summary does not list.</summary>

@@ -104,6 +104,8 @@ public static class BatchSummaryJson
             }
 
             json.WriteNumber("worstMassBalanceError", results.WorstMassBalanceError);
+            SummaryJson.WriteNullable(json, "worstEstimatedError", results.WorstEstimatedError);
+            SummaryJson.WriteNullable(json, "figuresAboveAccuracy", results.FiguresAboveAccuracy);
             json.WriteEndObject();
         }
         else
@@ -129,7 +131,8 @@ public static class BatchSummaryJson
 
     private static BatchKeyResults ReadResults(JsonElement results)
     {
-        double? Optional(NamedResult result) => results.GetProperty(NamedResults.SummaryKey(result)!) is { ValueKind: JsonValueKind.Number } value ? value.GetDouble() : null;
+        double? Number(string key) => results.TryGetProperty(key, out var value) && value.ValueKind == JsonValueKind.Number ? value.GetDouble() : null;
+        double? Optional(NamedResult result) => Number(NamedResults.SummaryKey(result)!);
         return new BatchKeyResults(
             results.GetProperty("finalState").GetString()!,
             Optional(NamedResult.LeftReceived),
@@ -137,6 +140,8 @@ public static class BatchSummaryJson
             Optional(NamedResult.SteadyFlux),
             Optional(NamedResult.LagTime),
             Optional(NamedResult.TimeTo90Percent),
-            results.GetProperty("worstMassBalanceError").GetDouble());
+            results.GetProperty("worstMassBalanceError").GetDouble(),
+            Number("worstEstimatedError"),
+            (int?)Number("figuresAboveAccuracy"));
     }
 }

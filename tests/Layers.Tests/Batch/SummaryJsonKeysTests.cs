@@ -30,4 +30,20 @@ public sealed class SummaryJsonKeysTests
         Assert.Contains("except that the case name is under `name` rather than `case`", docs, StringComparison.Ordinal);
         Assert.Contains("`{ quantity, limit, value, exceeded }`", docs, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Each_case_of_a_batch_carries_its_accuracy_status_as_its_own_summary_json_gives_it()
+    {
+        using var temp = new TempFolder();
+        temp.WriteFile(Path.Combine("in", "one.json"), CaseJson.Minimal);
+        Assert.Equal(ExitCodes.Success, CliRun.Invoke("run", temp.Combine("in"), "--out", temp.Combine("out"), "--no-plots", "-q").ExitCode);
+        using var batch = JsonDocument.Parse(File.ReadAllText(temp.Combine("out", "summary.json")));
+        using var single = JsonDocument.Parse(File.ReadAllText(temp.Combine("out", "one", "summary.json")));
+        var results = batch.RootElement.GetProperty("cases")[0].GetProperty("results");
+        var error = single.RootElement.GetProperty("numericalError");
+
+        Assert.Equal(error.GetProperty("worstRelativeError").GetDouble(), results.GetProperty("worstEstimatedError").GetDouble());
+        var above = error.GetProperty("figures").EnumerateArray().Count(figure => figure.GetProperty("withinAccuracy").ValueKind == JsonValueKind.False);
+        Assert.Equal(above, results.GetProperty("figuresAboveAccuracy").GetInt32());
+    }
 }
