@@ -87,7 +87,7 @@ public sealed class FiniteVolumeAgreementTests(ITestOutputHelper output)
             + Math.Abs(last.Left?.TransferredIntoMediumPerArea ?? 0) + Math.Abs(last.Right?.TransferredIntoMediumPerArea ?? 0);
     }
 
-    private static SimulationCase RandomCase(Random random, NumericsSettings numerics)
+    internal static SimulationCase RandomCase(Random random, NumericsSettings numerics)
     {
         var count = random.Next(2, 51);
         var layers = new Layer[count];

@@ -2,6 +2,7 @@ using System.Globalization;
 using Layers.Core.Domain;
 using Layers.Core.Results;
 using Layers.Core.Simulation;
+using Layers.Core.TimeStepping;
 
 namespace Layers.Tests.Verification;
 
@@ -98,6 +99,28 @@ public sealed class ErrorEstimateTests
         Assert.InRange(error.Solves[^1].Cells, 40, 80);
         Assert.False(error.MeetsAccuracy);
         Assert.Contains("numerics.cells", error.RefinementStopped, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_run_cancelled_while_it_estimates_or_refines_is_cancelled_not_reported_at_the_level_it_reached()
+    {
+        // The first solve completes; every solve after it sees the cancellation.
+        var simulation = ClosedFormFigures.Get("membrane").Case;
+        using var source = new CancellationTokenSource();
+        var solves = 0;
+        var result = ErrorEstimation.Run(simulation, solved =>
+        {
+            var run = Simulator.Run(solved with { Numerics = solved.Numerics with { ErrorControl = ErrorControl.None } }, source.Token);
+            if (++solves == 1)
+            {
+                source.Cancel();
+            }
+
+            return run;
+        });
+
+        Assert.Equal(StopReason.Cancelled, result.Statistics.StopReason);
+        Assert.Equal(2, solves);
     }
 
     private static List<(FigureError Figure, double Exact, double Actual)> Compared(string name, double accuracy)

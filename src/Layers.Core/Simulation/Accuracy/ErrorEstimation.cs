@@ -1,5 +1,6 @@
 using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.TimeStepping;
 
 namespace Layers.Core.Simulation;
 
@@ -40,11 +41,21 @@ internal static class ErrorEstimation
         }
 
         var coarse = AtLevel(-1);
+        if (WasCancelled(coarse))
+        {
+            return coarse;
+        }
+
         var solves = new List<SolveRecord> { Record(coarse), Record(fine) };
         if (!coarse.Completed)
         {
             // The coarse mesh cannot carry the case; compare with a finer solve instead, and report that one.
             var finer = AtLevel(1);
+            if (WasCancelled(finer))
+            {
+                return finer;
+            }
+
             if (!finer.Completed)
             {
                 return fine with { NumericalError = Unavailable(fine, solves, "the comparison solves on a coarser and a finer mesh did not complete") };
@@ -68,6 +79,12 @@ internal static class ErrorEstimation
 
             var below = jump == 1 ? fine : AtLevel(level + jump - 1);
             var target = below.Completed ? AtLevel(level + jump) : below;
+            if (WasCancelled(target))
+            {
+                // A run cancelled while it refines is cancelled, not reported at the level it had reached.
+                return target;
+            }
+
             if (!target.Completed)
             {
                 stopped = "a finer solve failed: " + target.FailureReason;
@@ -142,6 +159,8 @@ internal static class ErrorEstimation
 
     private static NumericalErrorSummary Unavailable(SimulationResult fine, IReadOnlyList<SolveRecord> solves, string reason) =>
         new(fine.Case.Numerics.Accuracy, NegligibleFloor.AmountPerArea(fine), [], [.. solves], reason);
+
+    private static bool WasCancelled(SimulationResult result) => result.Statistics.StopReason == StopReason.Cancelled;
 
     private static double Work(SimulationResult result) => (double)result.Grid.CellCount * result.Statistics.AcceptedSteps;
 
