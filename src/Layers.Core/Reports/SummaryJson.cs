@@ -144,13 +144,8 @@ public static class SummaryJson
             json.WriteStartObject();
             json.WriteNumber("depthMeters", readings[i].DepthMeters);
             json.WriteString("layer", readings[i].LayerName);
-            json.WriteStartArray("concentrationKgPerCubicMeter");
-            foreach (var report in result.Reports)
-            {
-                WriteNullable(json, report.Depths[i].ConcentrationKgPerCubicMeter);
-            }
-
-            json.WriteEndArray();
+            var reading = i;
+            WriteReportSeries(json, "concentrationKgPerCubicMeter", result, report => report.Depths[reading].ConcentrationKgPerCubicMeter);
             json.WriteEndObject();
         }
 

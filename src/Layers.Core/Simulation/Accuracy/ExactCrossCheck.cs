@@ -114,20 +114,16 @@ public static class ExactCrossCheck
         }
 
         var inside = solution.ConcentrationsAt([.. readings.Select(reading => reading.DepthMeters)], report.Sample.TimeSeconds);
-        var edges = simulation.Stack.Layers.Select(layer => layer.ThicknessMeters).Prepend(0.0).ToArray();
-        for (var i = 1; i < edges.Length; i++)
-        {
-            edges[i] += edges[i - 1];
-        }
-
-        var slack = DepthReadings.OnEdgeRelative * edges[^1];
+        var slack = DepthReadings.OnEdgeRelative * report.Profiles[^1].PositionsMeters[^1];
         for (var r = 0; r < readings.Count; r++)
         {
+            // A reading on its layer's edge takes the interface value of that side, as the profile's edge values do.
             var reading = readings[r];
+            var edges = report.Profiles[reading.LayerIndex].PositionsMeters;
             var k = simulation.Stack.Layers[reading.LayerIndex].PartitionCoefficient;
-            var value = Math.Abs(reading.DepthMeters - edges[reading.LayerIndex]) <= slack
+            var value = Math.Abs(reading.DepthMeters - edges[0]) <= slack
                 ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex]
-                : Math.Abs(reading.DepthMeters - edges[reading.LayerIndex + 1]) <= slack
+                : Math.Abs(reading.DepthMeters - edges[^1]) <= slack
                     ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex + 1]
                     : inside[r];
             values[$"$.depths[{r}].concentrationKgPerCubicMeter[{index}]"] = value;
