@@ -21,7 +21,7 @@ internal static class BatchRun
 
         var rows = BatchProgressDisplay.Run(collection.Items, settings, output, error, progress => BatchRunner.Run(
             collection.Items,
-            new BatchRunOptions(settings.OutputRoot, settings.Jobs) { Access = settings.Access },
+            new BatchRunOptions(settings.OutputRoot, settings.Jobs) { Access = settings.Access, CheckExactByFiniteVolumes = settings.CheckEveryCase },
             (result, item) => CaseFiles.Build(result, settings with { CasePath = item.File }, cancellation),
             progress,
             cancellation));

@@ -58,6 +58,11 @@ internal static class RunCommand
         command.Options.Add(linearTime);
         command.Options.Add(jobs);
         command.Options.Add(recursive);
+        var checkEveryCase = new Option<bool>("--check-every-case")
+        {
+            Description = "In a batch, also solve each case the exact method served by the finite volumes and compare the two (a single case always is; it costs the finite volumes' time).",
+        };
+        command.Options.Add(checkEveryCase);
         command.Options.Add(shard);
         var allowOutside = CaseArgument.AllowOutsideFilesOption();
         command.Options.Add(allowOutside);
@@ -90,6 +95,7 @@ internal static class RunCommand
                     !parseResult.GetValue(linearTime)),
                 Jobs = parseResult.GetValue(jobs),
                 Recursive = parseResult.GetValue(recursive),
+                CheckEveryCase = parseResult.GetValue(checkEveryCase),
                 Access = CaseArgument.Access(parseResult, allowOutside),
                 Shard = parseResult.GetValue(shard) is { } text && ShardSpec.TryParse(text, out var part, out _) ? part : null,
             };

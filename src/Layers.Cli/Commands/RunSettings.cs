@@ -38,4 +38,7 @@ internal sealed record RunSettings(string CasePath, string OutputRoot)
 
     /// <summary>The part of the batch to run; null for all of it.</summary>
     public ShardSpec? Shard { get; init; }
+
+    /// <summary>In a batch, also solve each case the exact method served by the finite volumes and compare (a single case always is).</summary>
+    public bool CheckEveryCase { get; init; }
 }

@@ -65,7 +65,7 @@ public static class BatchRunner
         Func<SimulationResult, BatchItem, IReadOnlyDictionary<string, byte[]>> buildFiles,
         CancellationToken cancellation)
     {
-        var request = new CaseRunRequest(item.File, item.Name, options.OutputRoot) { Json = item.Json, Errors = item.Errors, Access = options.Access };
+        var request = new CaseRunRequest(item.File, item.Name, options.OutputRoot) { Json = item.Json, Errors = item.Errors, Access = options.Access, CheckExactByFiniteVolumes = options.CheckExactByFiniteVolumes };
         CaseRunOutcome outcome;
         try
         {

@@ -48,7 +48,7 @@ public static class CaseRun
         }
 
         var clock = Stopwatch.StartNew();
-        var result = Simulator.Run(simulation, cancellation);
+        var result = Simulator.Run(simulation, request.CheckExactByFiniteVolumes, cancellation);
         var seconds = clock.Elapsed.TotalSeconds;
         phaseEnded?.Invoke(CaseRunPhase.Solve);
         if (result.Statistics.StopReason == StopReason.Cancelled)

@@ -14,6 +14,12 @@ public sealed record CaseRunRequest(string File, string Name, string OutputRoot)
     /// <summary>Problems found before reading (an unreadable file, a broken sweep); when any, the case is invalid.</summary>
     public IReadOnlyList<CaseError> Errors { get; init; } = [];
 
+    /// <summary>
+    /// Whether a case the exact method solves is also solved by the finite volumes and compared (the independent check;
+    /// <see cref="Simulation.Simulator.Run(Domain.SimulationCase, bool, CancellationToken)"/>): on for a single run, off in a batch unless asked for.
+    /// </summary>
+    public bool CheckExactByFiniteVolumes { get; init; } = true;
+
     /// <summary>Which files the case may name (its measured data).</summary>
     public CaseFileAccess Access { get; init; } = CaseFileAccess.InsideCaseFolder;
 }

@@ -3,6 +3,7 @@ using System.Text;
 using System.Text.Json;
 using Layers.Core.Files;
 using Layers.Core.Domain;
+using Layers.Core.Laplace;
 using Layers.Core.Simulation;
 using Layers.Core.Units;
 
@@ -22,7 +23,7 @@ public static class CaseReader
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
-    private static readonly string[] NumericsKeys = ["accuracy", "cells", "minimumCellsPerLayer", "negligibleAmount", "relativeTolerance"];
+    private static readonly string[] NumericsKeys = ["accuracy", "cells", "method", "minimumCellsPerLayer", "negligibleAmount", "relativeTolerance"];
 
     // Standard JSON only, as docs/case-format.md promises: a case file must also open in editors, schema
     // validators and scripts, which reject comments and trailing commas.
@@ -155,7 +156,7 @@ public static class CaseReader
             return null;
         }
 
-        return new SimulationCase
+        var simulation = new SimulationCase
         {
             Title = title,
             Stack = new LayerStack(layers),
@@ -171,6 +172,16 @@ public static class CaseReader
             FoodContact = foodSettings,
             PermeationTest = permeationTest,
         };
+        if (numerics.Method == SolutionMethod.Laplace && LaplaceApplicability.Of(simulation) is { IsApplicable: false } applicability)
+        {
+            context.Errors.Add(new CaseError(
+                root.PathOf("numerics") + ".method",
+                "\"laplace\" needs a case the exact method can serve, but " + string.Join("; ", applicability.Reasons)
+                + "; use \"auto\" or \"finiteVolume\""));
+            return null;
+        }
+
+        return simulation;
     }
 
     /// <summary>The duration: given, or with food-contact stages their sum (then it must not be given as well).</summary>
@@ -261,6 +272,7 @@ public static class CaseReader
         {
             Accuracy = settings.Accuracy,
             NegligibleAmountPerArea = NegligibleAmount(numerics),
+            Method = ReadMethod(numerics),
         };
         foreach (var (setting, message) in settings.Problems())
         {
@@ -268,6 +280,23 @@ public static class CaseReader
         }
 
         return settings;
+    }
+
+    private static SolutionMethod ReadMethod(JsonFields numerics)
+    {
+        switch (numerics.Text("method"))
+        {
+            case null:
+            case "auto":
+                return SolutionMethod.Auto;
+            case "finiteVolume":
+                return SolutionMethod.FiniteVolume;
+            case "laplace":
+                return SolutionMethod.Laplace;
+            default:
+                numerics.Error("method", $"must be \"auto\", \"finiteVolume\" or \"laplace\"; got \"{numerics.Written("method")}\"");
+                return SolutionMethod.Auto;
+        }
     }
 
     private static double? NegligibleAmount(JsonFields numerics)

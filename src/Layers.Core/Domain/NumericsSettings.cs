@@ -76,6 +76,12 @@ public sealed record NumericsSettings(GridOptions Grid, SolverOptions Solver)
     /// </summary>
     public ErrorControl ErrorControl { get; init; } = Grid is CellCountMesh ? ErrorControl.EstimateOnly : ErrorControl.EstimateAndRefine;
 
+    /// <summary>
+    /// Which method solves the case: by default the exact method where it applies (<see cref="SolutionMethod.Auto"/>);
+    /// a fixed mesh (<see cref="FixedCells"/>) asks for the finite volumes.
+    /// </summary>
+    public SolutionMethod Method { get; init; } = SolutionMethod.Auto;
+
     /// <summary>The numerics of every case that names none: the mesh and tolerance for <see cref="DefaultAccuracy"/>.</summary>
     public static NumericsSettings Default { get; } = ForAccuracy(DefaultAccuracy);
 
@@ -133,6 +139,7 @@ public sealed record NumericsSettings(GridOptions Grid, SolverOptions Solver)
         new(new CellCountMesh(totalCells), new SolverOptions { RelativeTolerance = relativeTolerance })
         {
             ErrorControl = ErrorControl.None,
+            Method = SolutionMethod.FiniteVolume,
         };
 
     /// <summary>Lists every setting outside its admissible range, as (setting, message) pairs.</summary>

@@ -53,15 +53,7 @@ public sealed class LaplaceSolution
             return Initial();
         }
 
-        var n = _stack.LayerCount;
-        var values = _contour.Invert(3 * (n + 1) + (2 * QuantitiesPerFace) - 1, Transforms, timeSeconds);
-        return new LaplaceSnapshot(
-            timeSeconds,
-            values[..n],
-            values[n..((2 * n) + 1)],
-            values[((2 * n) + 1)..((3 * n) + 2)],
-            FaceValues(Side.Left, values.AsSpan((3 * n) + 2, QuantitiesPerFace)),
-            FaceValues(Side.Right, values.AsSpan((3 * n) + 2 + QuantitiesPerFace, QuantitiesPerFace)));
+        return Snapshot(timeSeconds, _contour.Invert(SnapshotQuantities, Transforms, timeSeconds));
     }
 
     /// <summary>
@@ -184,9 +176,42 @@ public sealed class LaplaceSolution
         return TimeSearch.FirstCrossing(time => measure(At(time)), target, searchUpToSeconds);
     }
 
-    private void Transforms(Complex s, Complex[] transformed)
+    /// <summary>
+    /// The transformed solution on the contour of time t &gt; 0, solved once, from which any number of quantities at that
+    /// time are inverted (<see cref="LaplaceInstant"/>).
+    /// </summary>
+    public LaplaceInstant InstantAt(double timeSeconds)
     {
-        var state = _stack.Solve(s);
+        var states = new TransformedState[_contour.EvaluationsPerTime];
+        for (var k = 0; k < states.Length; k++)
+        {
+            states[k] = _stack.Solve(_contour.Node(k, timeSeconds));
+        }
+
+        return new LaplaceInstant(this, _contour, _stack.Partition, states, timeSeconds);
+    }
+
+    /// <summary>The snapshot from the inverted values of <see cref="Transforms(TransformedState, Complex[])"/>.</summary>
+    internal LaplaceSnapshot Snapshot(double timeSeconds, double[] values)
+    {
+        var n = _stack.LayerCount;
+        return new LaplaceSnapshot(
+            timeSeconds,
+            values[..n],
+            values[n..((2 * n) + 1)],
+            values[((2 * n) + 1)..((3 * n) + 2)],
+            FaceValues(Side.Left, values.AsSpan((3 * n) + 2, QuantitiesPerFace)),
+            FaceValues(Side.Right, values.AsSpan((3 * n) + 2 + QuantitiesPerFace, QuantitiesPerFace)));
+    }
+
+    /// <summary>How many quantities a snapshot inverts.</summary>
+    internal int SnapshotQuantities => (3 * (_stack.LayerCount + 1)) + (2 * QuantitiesPerFace) - 1;
+
+    private void Transforms(Complex s, Complex[] transformed) => Transforms(_stack.Solve(s), transformed);
+
+    /// <summary>The transformed quantities of a snapshot, from the transformed solution at one s.</summary>
+    internal void Transforms(TransformedState state, Complex[] transformed)
+    {
         var n = _stack.LayerCount;
         for (var j = 0; j < n; j++)
         {

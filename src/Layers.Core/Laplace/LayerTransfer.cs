@@ -76,4 +76,27 @@ internal readonly struct LayerTransfer
         var fromRight = Complex.Exp(-_q * remaining) * depthMeters * ScaledExponentials.Phi(2 * _q * depthMeters) / (length * _phiOfTwoQl);
         return initialOverS + ((left - initialOverS) * fromLeft) + ((right - initialOverS) * fromRight);
     }
+
+    /// <summary>
+    /// Transformed integral of u from depth x1 to depth x2 inside the layer (0 &lt;= x1 &lt;= x2 &lt;= L), in scaled form.
+    /// </summary>
+    /// <remarks>
+    /// The integral of sinh(q (L - xi)) / sinh(q L) over [x1, x2] is [cosh(q (L - x1)) - cosh(q (L - x2))] / (q sinh(q L));
+    /// with w = x2 - x1, each difference of exponentials is e^(-a) (b - a) phi(b - a), which gives
+    /// w phi(q w) e^(-q x1) (2L - x1 - x2) phi(q (2L - x1 - x2)) / (2 L phi(2 q L)), and for sinh(q xi) / sinh(q L) the
+    /// mirror image w phi(q w) e^(-q (L - x2)) (x1 + x2) phi(q (x1 + x2)) / (2 L phi(2 q L)). For small q they tend to
+    /// w (2L - x1 - x2) / (2L) and w (x1 + x2) / (2L), the integrals of the straight lines; over the whole layer their
+    /// sum is L phi(q L) / (1 + E), as in <see cref="IntegralOfU"/>.
+    /// </remarks>
+    public Complex IntegralOfUBetween(double fromMeters, double toMeters, Complex left, Complex right, Complex initialOverS)
+    {
+        var length = _thicknessMeters;
+        var width = toMeters - fromMeters;
+        var common = width * ScaledExponentials.Phi(_q * width) / (2 * length * _phiOfTwoQl);
+        var towardLeft = (2 * length) - fromMeters - toMeters;
+        var towardRight = fromMeters + toMeters;
+        var fromLeft = common * Complex.Exp(-_q * fromMeters) * towardLeft * ScaledExponentials.Phi(_q * towardLeft);
+        var fromRight = common * Complex.Exp(-_q * (length - toMeters)) * towardRight * ScaledExponentials.Phi(_q * towardRight);
+        return (width * initialOverS) + ((left - initialOverS) * fromLeft) + ((right - initialOverS) * fromRight);
+    }
 }

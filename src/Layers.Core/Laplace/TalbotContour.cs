@@ -106,6 +106,18 @@ public sealed class TalbotContour
         return sums;
     }
 
+    /// <summary>
+    /// Inverts several transforms at once at time t &gt; 0 from values already computed at each evaluation point:
+    /// <paramref name="transformsAtNode"/> fills, for evaluation k (at s = <see cref="Node"/>(k, t)), the transformed
+    /// values of all <paramref name="count"/> quantities.
+    /// </summary>
+    public double[] InvertByNode(int count, Action<int, Complex[]> transformsAtNode, double timeSeconds)
+    {
+        ArgumentNullException.ThrowIfNull(transformsAtNode);
+        var k = 0;
+        return Invert(count, (_, values) => transformsAtNode(k++, values), timeSeconds);
+    }
+
     private static void RequirePositive(double timeSeconds)
     {
         if (!(timeSeconds > 0) || double.IsInfinity(timeSeconds))

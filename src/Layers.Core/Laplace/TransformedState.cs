@@ -91,4 +91,8 @@ internal sealed class TransformedState
     /// <summary>Transformed u at depth xi inside a layer.</summary>
     public Complex ValueInLayer(int layer, double depthMeters)
         => _layers[layer].ValueAt(depthMeters, _nodes[layer], _nodes[layer + 1], _initialOverS[layer]);
+
+    /// <summary>Transformed integral of u from depth x1 to x2 inside a layer (depths from the layer's left face).</summary>
+    public Complex IntegralInLayer(int layer, double fromMeters, double toMeters)
+        => _layers[layer].IntegralOfUBetween(fromMeters, toMeters, _nodes[layer], _nodes[layer + 1], _initialOverS[layer]);
 }

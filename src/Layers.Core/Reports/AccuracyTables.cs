@@ -1,4 +1,5 @@
 using System.Globalization;
+using Layers.Core.Domain;
 using Layers.Core.Results;
 
 namespace Layers.Core.Reports;
@@ -29,6 +30,14 @@ public static class AccuracyTables
             : $"{above} figure{(above == 1 ? string.Empty : "s")} above {accuracy} ({worst}; see below)";
     }
 
+    /// <summary>The key-figures line of the method: which one solved the case, and why.</summary>
+    public static string Method(SimulationResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        var method = result.Method == SolutionMethod.Laplace ? "exact, in the Laplace domain" : "finite volumes";
+        return result.MethodReason.Length == 0 ? method : $"{method} ({result.MethodReason})";
+    }
+
     /// <summary>The key-figures line of the independent check: how far the exact method and the run agree, or why it did not apply.</summary>
     public static string CrossCheck(CrossCheckSummary check)
     {
@@ -44,9 +53,10 @@ public static class AccuracyTables
         }
 
         var disagreements = check.Disagreements.Count;
+        var other = check.CheckedBy == SolutionMethod.FiniteVolume ? "the finite volumes" : "the exact method";
         return disagreements == 0
-            ? $"the exact method agrees to {Relative(largest)} over {check.Figures.Count} figures"
-            : $"{disagreements} of {check.Figures.Count} figures differ from the exact method by more than the accuracy and their estimate (largest {Relative(largest)}; summary.json crossCheck)";
+            ? $"{other} {(check.CheckedBy == SolutionMethod.FiniteVolume ? "agree" : "agrees")} to {Relative(largest)} over {check.Figures.Count} figures"
+            : $"{disagreements} of {check.Figures.Count} figures differ from {other} by more than the accuracy and the estimates (largest {Relative(largest)}; summary.json crossCheck)";
     }
 
     /// <summary>The figures whose estimated error exceeds the accuracy, worst first; null when there are none.</summary>

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Net;
 using System.Text;
+using Layers.Core.Domain;
 using Layers.Core.Results;
 
 namespace Layers.Core.Reports;
@@ -86,8 +87,11 @@ public static class HtmlReport
             }
         }
 
-        yield return string.Create(CultureInfo.InvariantCulture,
-            $"Numerics: finite volumes ({result.Grid.CellCount} cells, graded toward interfaces), TR-BDF2 time steps ({result.Statistics.AcceptedSteps} accepted, relative tolerance {result.Case.Numerics.Solver.RelativeTolerance:G2}); worst mass-balance error {result.WorstMassBalanceError:G2}.");
+        yield return result.Method == SolutionMethod.Laplace
+            ? string.Create(CultureInfo.InvariantCulture,
+                $"Numerics: the exact solution in the Laplace domain, inverted on a Talbot contour ({result.MethodReason}); profiles read at {result.Grid.CellCount} places; worst mass-balance error {result.WorstMassBalanceError:G2}.")
+            : string.Create(CultureInfo.InvariantCulture,
+                $"Numerics: finite volumes ({result.Grid.CellCount} cells, graded toward interfaces), TR-BDF2 time steps ({result.Statistics.AcceptedSteps} accepted, relative tolerance {result.Case.Numerics.Solver.RelativeTolerance:G2}); worst mass-balance error {result.WorstMassBalanceError:G2}.");
     }
 
     private static void AppendTable(StringBuilder html, TextTable table)

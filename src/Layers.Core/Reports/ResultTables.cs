@@ -91,6 +91,7 @@ public static class ResultTables
         }
 
         Add("mass balance (worst relative error)", result.WorstMassBalanceError.ToString("G2", System.Globalization.CultureInfo.InvariantCulture));
+        Add("method", AccuracyTables.Method(result));
         if (result.NumericalError is { } error)
         {
             Add("numerical error", AccuracyTables.Summary(error));
@@ -99,6 +100,10 @@ public static class ResultTables
         if (result.CrossCheck is { } check)
         {
             Add("independent check", AccuracyTables.CrossCheck(check));
+        }
+        else if (result.Method == SolutionMethod.Laplace && result.NumericalError is not null)
+        {
+            Add("independent check", "not run (in a batch, --check-every-case runs it)");
         }
 
         return new TextTable("Key figures", ["quantity", "value"], rows);

@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Json;
 using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.Simulation;
 
 namespace Layers.Core.Reports;
 
@@ -184,7 +185,22 @@ public static class SummaryJson
     {
         var statistics = result.Statistics;
         json.WriteStartObject("solver");
+        if (result.Method == SolutionMethod.Laplace)
+        {
+            json.WriteString("solutionMethod", "laplace");
+            json.WriteString("method", "exact solution in the Laplace domain, inverted on a Talbot contour; profiles read at the cell centres of the case's mesh");
+            json.WriteString("methodReason", result.MethodReason);
+            json.WriteNumber("contourPoints", ExactEstimation.ContourPoints);
+            json.WriteNumber("cells", result.Grid.CellCount);
+            json.WriteNumber("wallSeconds", statistics.WallSeconds);
+            json.WriteString("stopReason", JsonNamingPolicy.CamelCase.ConvertName(statistics.StopReason.ToString()));
+            json.WriteEndObject();
+            return;
+        }
+
+        json.WriteString("solutionMethod", "finiteVolume");
         json.WriteString("method", "finite volumes in u = c/K, TR-BDF2 with adaptive steps");
+        json.WriteString("methodReason", result.MethodReason);
         json.WriteNumber("cells", result.Grid.CellCount);
         json.WriteNumber("unknowns", statistics.Unknowns);
         json.WriteNumber("acceptedSteps", statistics.AcceptedSteps);

@@ -1,5 +1,7 @@
 using System.Text.Json;
+using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.Simulation;
 
 namespace Layers.Core.Reports;
 
@@ -26,7 +28,7 @@ internal static class SummaryJsonNumericalError
         json.WriteStartObject();
         json.WriteNumber("accuracy", error.Accuracy);
         json.WriteNumber("negligibleAmountKgPerSquareMeter", error.NegligibleAmountPerArea);
-        json.WriteString("method", Method);
+        json.WriteString("method", result.Method == SolutionMethod.Laplace ? ExactEstimation.Description : Method);
         json.WriteStartArray("solves");
         foreach (var solve in error.Solves)
         {

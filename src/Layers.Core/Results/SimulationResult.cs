@@ -49,6 +49,12 @@ public sealed record SimulationResult
     /// </summary>
     public CrossCheckSummary? CrossCheck { get; init; }
 
+    /// <summary>The method that solved the case: the finite volumes or the exact method in the Laplace domain.</summary>
+    public SolutionMethod Method { get; init; } = SolutionMethod.FiniteVolume;
+
+    /// <summary>Why that method solved the case, in words (what <c>numerics.method</c> asked for, or why the exact method could not).</summary>
+    public string MethodReason { get; init; } = string.Empty;
+
     /// <summary>The food-contact assessment, for a case with food-contact settings that ran to its end.</summary>
     public FoodContactResult? FoodContact { get; init; }
 

@@ -15,12 +15,45 @@ public static class Simulator
     public const double HorizonFactor = 1000;
 
     /// <summary>
-    /// Solves a validated case, with the error of its key figures estimated and controlled as its numerics say
-    /// (<see cref="NumericsSettings.ErrorControl"/>).
+    /// Solves a validated case by the method its numerics choose (<see cref="MethodChoice"/>), with the error of its key
+    /// figures estimated (and, for the finite volumes, controlled) as its numerics say (<see cref="NumericsSettings.ErrorControl"/>),
+    /// and checked by the other method where it applies.
     /// </summary>
-    public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default)
+    /// <param name="simulation">The case.</param>
+    /// <param name="checkExactByFiniteVolumes">
+    /// Whether a case the exact method solved is also solved by the finite volumes and compared (the independent
+    /// check of a single run; a study that solves a case many times leaves it out). A case the finite volumes solved is
+    /// always checked by the exact method where it applies: that check costs a few per cent.
+    /// </param>
+    /// <param name="cancellation">Ends the run early with a cancelled result.</param>
+    public static SimulationResult Run(SimulationCase simulation, bool checkExactByFiniteVolumes, CancellationToken cancellation = default)
     {
         ArgumentNullException.ThrowIfNull(simulation);
+        var choice = MethodChoice.For(simulation);
+        if (choice.Method == SolutionMethod.Laplace)
+        {
+            var exact = ExactEstimation.Run(simulation, cancellation);
+            var fallback = simulation.Numerics.Method == SolutionMethod.Auto ? ExactEstimation.WhyNotKept(exact) : null;
+            if (fallback is null)
+            {
+                var check = checkExactByFiniteVolumes && exact.Completed && exact.NumericalError is { Unavailable: null }
+                    ? FiniteVolumeCheck.Of(exact, solved => Solve(solved, cancellation))
+                    : null;
+                return exact with { MethodReason = choice.Reason, CrossCheck = check };
+            }
+
+            choice = new MethodChoice(SolutionMethod.FiniteVolume, fallback);
+        }
+
+        return RunFiniteVolumes(simulation, cancellation) with { MethodReason = choice.Reason };
+    }
+
+    /// <summary>Solves a validated case as <see cref="Run(SimulationCase, bool, CancellationToken)"/> does, with the independent check.</summary>
+    public static SimulationResult Run(SimulationCase simulation, CancellationToken cancellation = default) => Run(simulation, true, cancellation);
+
+    /// <summary>The finite volumes, with the error estimated and controlled as the numerics say, checked by the exact method where it applies.</summary>
+    private static SimulationResult RunFiniteVolumes(SimulationCase simulation, CancellationToken cancellation)
+    {
         if (simulation.Numerics.ErrorControl == ErrorControl.None)
         {
             return Solve(simulation, cancellation);
@@ -83,13 +116,19 @@ public static class Simulator
 
     /// <summary>
     /// Solves a case up to its duration and no further, and returns only the integral quantities at its output
-    /// times: the lean form of <see cref="Run"/> for callers that solve one case many times (fitting), with no
+    /// times: the lean form of <see cref="Run(SimulationCase, CancellationToken)"/> for callers that solve one case many times (fitting), with no
     /// search for the times to equilibrium and no food-contact assessment.
     /// </summary>
     public static (IReadOnlyList<StateSample> Samples, SolverStatistics Statistics) RunTimeSeries(
         SimulationCase simulation,
         CancellationToken cancellation = default)
     {
+        ArgumentNullException.ThrowIfNull(simulation);
+        if (MethodChoice.For(simulation).Method == SolutionMethod.Laplace)
+        {
+            return (ExactRun.TimeSeries(simulation, ExactEstimation.ContourPoints), new SolverStatistics { StopReason = StopReason.Completed });
+        }
+
         var (model, _, sampling, recorder, stages) = Assemble(simulation);
         var statistics = StagedIntegration.Run(
             stages, model.InitialState, OutputSchedule.For(simulation), simulation.DurationSeconds,

@@ -188,7 +188,7 @@ public static class DesignSolver
                 throw new StopException(StudyStatus.Invalid, $"with {settings.Input.Write(value)} at {settings.Input.Path} the case is invalid", read.Errors);
             }
 
-            var run = Simulator.Run(simulation, cancellation);
+            var run = Simulator.Run(simulation, checkExactByFiniteVolumes: false, cancellation);
             if (run.Statistics.StopReason == StopReason.Cancelled)
             {
                 throw new StopException(StudyStatus.Cancelled, "cancelled");

@@ -74,7 +74,7 @@ public static class UncertaintyRunner
         {
             Parallel.For(0, settings.Samples, options, i =>
             {
-                var run = Simulator.Run(cases[i]!, cancellation);
+                var run = Simulator.Run(cases[i]!, checkExactByFiniteVolumes: false, cancellation);
                 if (run.Completed)
                 {
                     samples[i] = Extract(run, series, settings);

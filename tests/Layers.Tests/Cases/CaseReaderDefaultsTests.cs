@@ -118,9 +118,10 @@ public sealed class CaseReaderDefaultsTests
         // docs/case-format.md, $.numerics: one default, accuracy 1e-4, whoever builds the case; the mesh is the same
         // for the same stack (a case built in code used to get 240 shared cells at tolerance 1e-6 instead).
         var read = ReadValid(CaseJson.Minimal);
-        var built = Cases.Make(read.Left, read.Right, read.DurationSeconds, read.ReportTimesSeconds, layers: [.. read.Stack.Layers]);
+        var built = Cases.Make(read.Left, read.Right, read.DurationSeconds, read.ReportTimesSeconds, numerics: NumericsSettings.Default, layers: [.. read.Stack.Layers]);
 
         Assert.Equal(read.Numerics, built.Numerics);
+        Assert.Equal(SolutionMethod.Auto, read.Numerics.Method);
         Assert.Equal(GridBuilder.Build(read).WidthsMeters.ToArray(), GridBuilder.Build(built).WidthsMeters.ToArray());
     }
 

@@ -50,7 +50,7 @@ public sealed class FiniteVolumeAgreementTests(ITestOutputHelper output)
     private static double WorstDisagreement(int seed, double accuracy, out SimulationCase simulation)
     {
         // One solve at the accuracy's mesh and tolerance: the test measures the discretisation, not the refinement.
-        simulation = RandomCase(new Random(seed), NumericsSettings.ForAccuracy(accuracy) with { ErrorControl = ErrorControl.None });
+        simulation = RandomCase(new Random(seed), NumericsSettings.ForAccuracy(accuracy) with { ErrorControl = ErrorControl.None, Method = SolutionMethod.FiniteVolume });
         var result = Simulator.Run(simulation);
         Assert.True(result.Completed, result.FailureReason);
         var solution = LaplaceSolution.For(simulation);

@@ -34,8 +34,10 @@ public sealed partial class SummaryKeysTests
 
         var documented = DocumentedKeys();
         var leaves = documented.Where(key => !documented.Any(other => other.StartsWith(key + ".", StringComparison.Ordinal))).ToHashSet();
-        // A null written where an object is documented (permeation in a closed case) is not an undocumented key.
-        var writtenLeaves = written.Where(key => !documented.Any(other => other.StartsWith(key + ".", StringComparison.Ordinal)));
+        // A null written where an object is documented (permeation in a closed case), or an empty list where its items
+        // are (the solves of a run of the exact method), is not an undocumented key.
+        var writtenLeaves = written.Where(key => !documented.Any(other =>
+            other.StartsWith(key + ".", StringComparison.Ordinal) || other.StartsWith(key + "[].", StringComparison.Ordinal)));
 
         Assert.Empty(writtenLeaves.Except(leaves));
         Assert.Empty(leaves.Except(written));

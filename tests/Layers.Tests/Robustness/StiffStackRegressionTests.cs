@@ -50,7 +50,7 @@ public sealed class StiffStackRegressionTests
             Cases.Closed,
             Cases.Compartment(0.01),
             durationSeconds,
-            numerics: NumericsSettings.Default with { ErrorControl = ErrorControl.None },
+            numerics: NumericsSettings.Default with { ErrorControl = ErrorControl.None, Method = SolutionMethod.FiniteVolume },
             layers: [Cases.Layer("a", 100e-6, 1e-13, 1, 1e-3), Cases.Layer("b", 100e-6, 1e-12)]);
 
         var result = Simulator.Run(simulation);

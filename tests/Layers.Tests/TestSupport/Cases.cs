@@ -23,8 +23,14 @@ internal static class Cases
             Right = right,
             DurationSeconds = duration,
             ReportTimesSeconds = reports ?? [duration],
-            Numerics = numerics ?? NumericsSettings.Default,
+            Numerics = numerics ?? FiniteVolumes,
         };
+
+    /// <summary>
+    /// The default numerics with the finite volumes: most tests built in code exercise them (the tests of the exact
+    /// method's runs ask for it, or for the automatic choice, themselves).
+    /// </summary>
+    public static NumericsSettings FiniteVolumes { get; } = NumericsSettings.Default with { Method = SolutionMethod.FiniteVolume };
 
     /// <summary>
     /// A fixed mesh of 240 shared cells at step tolerance 1e-6, for checks tighter than the default accuracy target

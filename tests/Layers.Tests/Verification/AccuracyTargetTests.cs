@@ -26,7 +26,7 @@ public sealed class AccuracyTargetTests
             new CompartmentFace("solution", alpha * thickness, 1, 1, 0, null),
             reports[^1],
             reports,
-            NumericsSettings.ForAccuracy(accuracy),
+            NumericsSettings.ForAccuracy(accuracy) with { Method = SolutionMethod.FiniteVolume },
             Cases.Layer("sheet", thickness, diffusivity, 1, c0));
 
         var result = Simulator.Run(simulation);

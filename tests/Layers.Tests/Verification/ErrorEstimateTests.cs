@@ -126,7 +126,7 @@ public sealed class ErrorEstimateTests
     private static List<(FigureError Figure, double Exact, double Actual)> Compared(string name, double accuracy)
     {
         var (simulation, exact) = ClosedFormFigures.Get(name);
-        var result = Simulator.Run(simulation with { Numerics = NumericsSettings.ForAccuracy(accuracy) });
+        var result = Simulator.Run(simulation with { Numerics = NumericsSettings.ForAccuracy(accuracy) with { Method = SolutionMethod.FiniteVolume } });
         Assert.True(result.Completed, result.FailureReason);
         var figures = result.NumericalError!.Figures.ToDictionary(figure => figure.Figure.Path, StringComparer.Ordinal);
         return [.. exact.Select(pair =>

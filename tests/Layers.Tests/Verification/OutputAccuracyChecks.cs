@@ -100,7 +100,7 @@ internal static class OutputAccuracyChecks
             Cases.Bath(0),
             reports[^1],
             reports,
-            NumericsSettings.ForAccuracy(accuracy),
+            NumericsSettings.ForAccuracy(accuracy) with { Method = SolutionMethod.FiniteVolume },
             Cases.Layer("membrane", MembraneThickness, MembraneDiffusivity, MembranePartition));
         return Completed(Simulator.Run(simulation));
     }
@@ -118,7 +118,7 @@ internal static class OutputAccuracyChecks
             Cases.Closed,
             end,
             MediaTimeFractions.Select(fraction => fraction * end).ToArray(),
-            NumericsSettings.ForAccuracy(accuracy),
+            NumericsSettings.ForAccuracy(accuracy) with { Method = SolutionMethod.FiniteVolume },
             Cases.Layer("first", MediumThickness, FirstDiffusivity, FirstPartition, LoadedConcentration),
             Cases.Layer("second", MediumThickness, SecondDiffusivity, 1)) with { ReportDepthsMeters = depths };
         return Completed(Simulator.Run(simulation));

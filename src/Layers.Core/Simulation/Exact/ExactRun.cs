@@ -1,0 +1,161 @@
+using System.Diagnostics;
+using Layers.Core.Analytics;
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.Laplace;
+using Layers.Core.Results;
+using Layers.Core.TimeStepping;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// One solve of a case by the exact method in the Laplace domain (src/Layers.Core/Laplace), reported in the same
+/// result as the finite volumes': the integral quantities at every output time, the profiles at the report times (at
+/// the places the case's mesh would show), the times to 50/90/99 % of the final state found on the inverted solution,
+/// the steady flux and lag time from the transform's small-s expansion (docs/numerics.md, "Choosing the method").
+/// </summary>
+internal static class ExactRun
+{
+    /// <summary>Solves a case the exact method can serve, on a contour of the given number of points.</summary>
+    public static SimulationResult Solve(SimulationCase simulation, int contourPoints, CancellationToken cancellation)
+    {
+        var clock = Stopwatch.StartNew();
+        var model = DiscreteModel.Build(simulation);
+        var stages = StageSystem.For(simulation, model.Grid, model.System);
+        var final = FinalStateTarget.ForStages(model, stages);
+        var observables = new Observables(model, stages, final);
+        var solution = LaplaceSolution.For(simulation, contourPoints);
+        var distance = new ExactDistance(model, final);
+        var sampler = new ExactSampler(model, solution, observables, distance);
+        var samples = new List<StateSample> { observables.Sample(0, model.InitialState, default) };
+        var reports = new List<ReportPoint>();
+        foreach (var time in OutputSchedule.For(simulation))
+        {
+            if (cancellation.IsCancellationRequested)
+            {
+                return Stopped(simulation, model, samples, reports, final, clock, StopReason.Cancelled, "the run was cancelled");
+            }
+
+            var instant = solution.InstantAt(time);
+            var sample = sampler.Sample(instant);
+            samples.Add(sample);
+            if (OutputSchedule.IsReportTime(simulation, time))
+            {
+                reports.Add(sampler.Report(sample, instant.Snapshot));
+            }
+        }
+
+        samples = InversionNoise.Clear(samples);
+        reports = InversionNoise.Clear(reports, samples);
+        var horizon = simulation.DurationSeconds * Simulator.HorizonFactor;
+        var summary = new FinalStateSummary(
+            final.Kind,
+            [.. Enumerable.Range(0, simulation.Stack.Count).Select(layer => final.LayerEdges(simulation, layer))],
+            final.MediumConcentration(model.System, simulation.Left, Side.Left),
+            final.MediumConcentration(model.System, simulation.Right, Side.Right),
+            SystemTimes(distance, solution, horizon, [.. samples.Select(sample => (sample.TimeSeconds, sample.FractionOfFinalState))]),
+            CompartmentTimes(sampler, solution, Side.Left, horizon, samples),
+            CompartmentTimes(sampler, solution, Side.Right, horizon, samples),
+            horizon);
+        var worst = samples.Max(sample => Math.Abs(sample.MassBalanceError));
+        var lowest = samples.Min(sample => sampler.LowestAmountRelative(sample));
+        var (reason, failure) = SelfChecks.Judge(worst, lowest);
+        return new SimulationResult
+        {
+            Case = simulation,
+            Grid = model.Grid,
+            TimeSeries = samples,
+            Reports = reports,
+            FinalState = summary,
+            Permeation = Permeation(simulation, final, samples[^1], solution),
+            WorstMassBalanceError = worst,
+            DiffusionCell = DiffusionCellAnalysis.Of(simulation, samples, new SamplingEvents(model)),
+            Statistics = Statistics(model, clock, reason),
+            FailureReason = failure,
+            Method = SolutionMethod.Laplace,
+        };
+    }
+
+    /// <summary>The integral quantities at the output times up to the duration, and nothing else (fitting).</summary>
+    public static IReadOnlyList<StateSample> TimeSeries(SimulationCase simulation, int contourPoints)
+    {
+        var model = DiscreteModel.Build(simulation);
+        var stages = StageSystem.For(simulation, model.Grid, model.System);
+        var final = FinalStateTarget.ForStages(model, stages);
+        var observables = new Observables(model, stages, final);
+        var solution = LaplaceSolution.For(simulation, contourPoints);
+        var distance = new ExactDistance(model, final);
+        var sampler = new ExactSampler(model, solution, observables, distance);
+        var samples = new List<StateSample> { observables.Sample(0, model.InitialState, default) };
+        foreach (var time in OutputSchedule.For(simulation))
+        {
+            samples.Add(sampler.Sample(solution.InstantAt(time)));
+        }
+
+        return InversionNoise.Clear(samples);
+    }
+
+    /// <summary>
+    /// Times for the whole system to go 50/90/99 % of the way, on the finite volumes' measure in its limit of fine cells
+    /// (<see cref="ExactDistance"/>).
+    /// </summary>
+    private static ThresholdTimes SystemTimes(ExactDistance distance, LaplaceSolution solution, double horizon, IReadOnlyList<(double, double)> known)
+    {
+        if (distance.StartsAtFinalState)
+        {
+            return new ThresholdTimes(0, 0, 0);
+        }
+
+        var times = FirstCrossings.Find(time => distance.FractionOfFinalState(solution.InstantAt(time)), ThresholdTimes.Levels, horizon, known);
+        return new ThresholdTimes(times[0], times[1], times[2]);
+    }
+
+    /// <summary>Times for a compartment's content to go 50/90/99 % of the way to its final content, or null when it does not change.</summary>
+    private static ThresholdTimes? CompartmentTimes(ExactSampler sampler, LaplaceSolution solution, Side side, double horizon, List<StateSample> samples)
+    {
+        if (sampler.CompartmentFraction(side, solution.At(horizon)) is null)
+        {
+            return null;
+        }
+
+        var known = samples.Select(sample => (sample.TimeSeconds, (side == Side.Left ? sample.Left : sample.Right)!.FractionOfEquilibrium!.Value)).ToList();
+        var times = FirstCrossings.Find(time => sampler.CompartmentFraction(side, solution.At(time))!.Value, ThresholdTimes.Levels, horizon, known);
+        return new ThresholdTimes(times[0], times[1], times[2]);
+    }
+
+    /// <summary>Steady permeation between two baths: the steady flux, the flux at the end, the lag time of the exact line.</summary>
+    private static PermeationSummary? Permeation(SimulationCase simulation, FinalStateTarget final, StateSample last, LaplaceSolution solution)
+    {
+        if (final.Kind != FinalStateKind.SteadyPermeation || simulation.Left.HasFiniteVolume || simulation.Right.HasFiniteVolume)
+        {
+            return null;
+        }
+
+        var flux = final.Steady!.FluxKgPerSquareMeterSecond;
+        var receiving = flux > 0 ? Side.Right : Side.Left;
+        var atEnd = flux == 0 ? 0 : (receiving == Side.Right ? last.Right : last.Left)!.FluxIntoMediumKgPerSquareMeterSecond;
+        return new PermeationSummary(flux, atEnd, solution.SteadyLine(receiving)?.LagTimeSeconds, SingleMembrane.LagTimeSeconds(simulation));
+    }
+
+    private static SolverStatistics Statistics(DiscreteModel model, Stopwatch clock, StopReason reason) => new()
+    {
+        Unknowns = model.System.NodeCount,
+        WallSeconds = clock.Elapsed.TotalSeconds,
+        StopReason = reason,
+    };
+
+    private static SimulationResult Stopped(
+        SimulationCase simulation, DiscreteModel model, List<StateSample> samples, List<ReportPoint> reports, FinalStateTarget final, Stopwatch clock, StopReason reason, string failure)
+        => new()
+        {
+            Case = simulation,
+            Grid = model.Grid,
+            TimeSeries = samples,
+            Reports = reports,
+            FinalState = new FinalStateSummary(final.Kind, [], null, null, new ThresholdTimes(null, null, null), null, null, simulation.DurationSeconds),
+            WorstMassBalanceError = 0,
+            Statistics = Statistics(model, clock, reason),
+            FailureReason = failure,
+            Method = SolutionMethod.Laplace,
+        };
+}

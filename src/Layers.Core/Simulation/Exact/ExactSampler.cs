@@ -1,0 +1,170 @@
+using Layers.Core.Discretization;
+using Layers.Core.Domain;
+using Layers.Core.Laplace;
+using Layers.Core.Results;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// Turns the exact solution at one time into the records the finite volumes report: the integral quantities, the
+/// profiles at the places the case's mesh would show (each layer's edges and its cell centres) and the concentrations
+/// at the depths the case names, all read from the exact solution rather than reconstructed from cells.
+/// </summary>
+internal sealed class ExactSampler
+{
+    private readonly SimulationCase _case;
+    private readonly DiscreteModel _model;
+    private readonly LaplaceSolution _solution;
+    private readonly Observables _observables;
+    private readonly ExactDistance _distance;
+    private readonly double _initialMass;
+    private readonly double[] _centres;
+    private readonly double[] _state;
+
+    public ExactSampler(DiscreteModel model, LaplaceSolution solution, Observables observables, ExactDistance distance)
+    {
+        _case = model.Case;
+        _model = model;
+        _solution = solution;
+        _observables = observables;
+        _distance = distance;
+        _initialMass = model.System.TotalMass(model.InitialState);
+        _centres = model.Grid.CentresMeters.ToArray();
+        _state = (double[])model.InitialState.Clone();
+    }
+
+    /// <summary>
+    /// A compartment's fraction of the way to its final content at the snapshot's time (the finite volumes' measure of
+    /// its node), or null where the face has no compartment or its content does not change.
+    /// </summary>
+    public double? CompartmentFraction(Side side, LaplaceSnapshot snapshot)
+    {
+        var node = _model.System.CompartmentNode(side);
+        if (node < 0)
+        {
+            return null;
+        }
+
+        _state[node] = snapshot.Face(side)!.MediumMassPerArea!.Value / _model.System.Capacity[node];
+        return _observables.CompartmentFraction(side, _state);
+    }
+
+    /// <summary>The integral quantities at the instant's time.</summary>
+    public StateSample Sample(LaplaceInstant instant)
+    {
+        var snapshot = instant.Snapshot;
+        var contents = snapshot.StackMassPerArea;
+        var fromBaths = 0.0;
+        foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            if (snapshot.Face(side) is not { } face)
+            {
+                continue;
+            }
+
+            // What baths and removals gave to the system: a bath gives what the stack did not send into it; a removal
+            // takes what it removed.
+            contents += face.MediumMassPerArea ?? 0;
+            fromBaths -= face.MediumMassPerArea is null ? face.TransferredIntoMediumPerArea : face.RemovedPerArea;
+        }
+
+        var reference = Math.Max(Math.Abs(_initialMass), Math.Abs(fromBaths));
+        var imbalance = contents - _initialMass - fromBaths;
+        return new StateSample(
+            snapshot.TimeSeconds,
+            snapshot.LayerMassPerArea,
+            Face(Side.Left, snapshot),
+            Face(Side.Right, snapshot),
+            _distance.FractionOfFinalState(instant),
+            reference > 0 ? imbalance / reference : 0);
+    }
+
+    /// <summary>The lowest amount held by a layer or compartment, relative to the mass balance's reference (0 when none is negative).</summary>
+    public double LowestAmountRelative(StateSample sample)
+    {
+        var lowest = Math.Min(0, sample.LayerMassPerArea.Min());
+        foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            var node = _model.System.CompartmentNode(side);
+            var face = side == Side.Left ? sample.Left : sample.Right;
+            if (node >= 0 && face is not null)
+            {
+                lowest = Math.Min(lowest, face.ConcentrationKgPerCubicMeter * _model.System.Capacity[node] / _model.System.PartitionCoefficient[node]);
+            }
+        }
+
+        return _initialMass > 0 ? lowest / _initialMass : lowest;
+    }
+
+    /// <summary>The full result at a report time: the sample, the exact profiles and the named depths.</summary>
+    public ReportPoint Report(StateSample sample, LaplaceSnapshot snapshot)
+    {
+        var time = snapshot.TimeSeconds;
+        var inside = _solution.ConcentrationsAt(_centres, time);
+        var grid = _model.Grid;
+        var stack = _case.Stack;
+        var profiles = new List<LayerProfile>(stack.Count);
+        for (var layer = 0; layer < stack.Count; layer++)
+        {
+            var first = grid.FirstCell(layer);
+            var count = grid.CellsIn(layer);
+            var k = stack.Layers[layer].PartitionCoefficient;
+            var positions = new double[count + 2];
+            var concentrations = new double[count + 2];
+            positions[0] = stack.LeftEdgeMeters(layer);
+            concentrations[0] = k * snapshot.ContinuousValueAtInterfaces[layer];
+            for (var i = 0; i < count; i++)
+            {
+                positions[i + 1] = _centres[first + i];
+                concentrations[i + 1] = inside[first + i];
+            }
+
+            positions[^1] = positions[0] + stack.Layers[layer].ThicknessMeters;
+            concentrations[^1] = k * snapshot.ContinuousValueAtInterfaces[layer + 1];
+            profiles.Add(new LayerProfile(layer, stack.Layers[layer].Name, positions, concentrations));
+        }
+
+        return new ReportPoint(sample, profiles) { Depths = Depths(profiles, snapshot) };
+    }
+
+    /// <summary>
+    /// The named depths, one reading per layer they touch (as the finite volumes report them), each from the exact
+    /// solution: on a layer's edge the interface value of that side, inside it the inverted profile.
+    /// </summary>
+    private IReadOnlyList<DepthReading> Depths(List<LayerProfile> profiles, LaplaceSnapshot snapshot)
+    {
+        var readings = DepthReadings.Read(profiles, _case.ReportDepthsMeters);
+        if (readings.Count == 0)
+        {
+            return readings;
+        }
+
+        var inside = _solution.ConcentrationsAt([.. readings.Select(reading => reading.DepthMeters)], snapshot.TimeSeconds);
+        var slack = DepthReadings.OnEdgeRelative * _case.Stack.TotalThicknessMeters;
+        return [.. readings.Select((reading, r) =>
+        {
+            var edges = profiles[reading.LayerIndex].PositionsMeters;
+            var k = _case.Stack.Layers[reading.LayerIndex].PartitionCoefficient;
+            var value = Math.Abs(reading.DepthMeters - edges[0]) <= slack
+                ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex]
+                : Math.Abs(reading.DepthMeters - edges[^1]) <= slack
+                    ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex + 1]
+                    : inside[r];
+            return reading with { ConcentrationKgPerCubicMeter = value };
+        })];
+    }
+
+    private FaceSample? Face(Side side, LaplaceSnapshot snapshot)
+    {
+        if (snapshot.Face(side) is not { } face)
+        {
+            return null;
+        }
+
+        return new FaceSample(
+            face.TransferredIntoMediumPerArea,
+            face.ConcentrationKgPerCubicMeter,
+            face.FluxIntoMediumKgPerSquareMeterSecond,
+            CompartmentFraction(side, snapshot));
+    }
+}
