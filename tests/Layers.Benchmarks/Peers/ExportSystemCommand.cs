@@ -45,7 +45,7 @@ public static class ExportSystemCommand
 
     private static string Describe(SweepPoint? chosen, string setting) => chosen is null
         ? "no setting meets the target"
-        : Invariant($"{setting} {chosen.Setting:0.#e0}{(chosen.AbsoluteScale is { } scale ? $" atol scale {scale:0e0}" : "")}, error {chosen.Error:0.0e0}, {chosen.BestSeconds * 1e3:0.000} ms");
+        : Invariant($"{setting} {(chosen.AbsoluteScale is { } scale ? Invariant($"{chosen.Setting:0e0} atol scale {scale:0e0}") : Invariant($"{chosen.Setting:0}"))}, error {chosen.Error:0.0e0}, {chosen.BestSeconds * 1e3:0.000} ms");
 
     private static string Invariant(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
 }
