@@ -7,7 +7,8 @@ namespace Layers.Benchmarks;
 
 /// <summary>
 /// One warm solve of each fixed case in cases/, through Simulator.Run: at the case's own settings (the defaults) and
-/// at the accuracy settings of <c>numerics.accuracy</c> that issue #8's targets are stated for.
+/// at the accuracy settings of <c>numerics.accuracy</c> that issue #8's targets are stated for, by each method
+/// (<c>numerics.method</c>), without the other method's independent check, so that each method's own cost shows.
 /// </summary>
 [Config(typeof(SolveConfig))]
 public class SolveBenchmarks
@@ -22,6 +23,10 @@ public class SolveBenchmarks
     [Params("1e-3", "3e-4", "1e-4")]
     public string Accuracy { get; set; } = "default";
 
+    /// <summary><c>numerics.method</c> of the run: "auto" takes the exact method where the case allows it.</summary>
+    [Params("finiteVolume", "auto")]
+    public string Method { get; set; } = "auto";
+
     /// <summary>The cases benchmarked.</summary>
     public static IEnumerable<string> CaseNames => BenchmarkCases.Names;
 
@@ -29,14 +34,16 @@ public class SolveBenchmarks
     [GlobalSetup]
     public void Setup()
     {
-        _case = BenchmarkCases.Load(Case, Accuracy);
-        var result = Simulator.Run(_case);
-        Console.WriteLine($"// {Case} at accuracy {Accuracy}: {result.Statistics}");
+        var loaded = BenchmarkCases.Load(Case, Accuracy);
+        var method = Method == "auto" ? SolutionMethod.Auto : SolutionMethod.FiniteVolume;
+        _case = loaded with { Numerics = loaded.Numerics with { Method = method } };
+        var result = Simulator.Run(_case, checkExactByFiniteVolumes: false);
+        Console.WriteLine($"// {Case} at accuracy {Accuracy}, {Method}: {result.Method} ({result.MethodReason}) {result.Statistics}");
     }
 
     /// <summary>Mesh, assemble, integrate and collect results: everything a run reports.</summary>
     [Benchmark]
-    public SimulationResult Solve() => Simulator.Run(_case);
+    public SimulationResult Solve() => Simulator.Run(_case, checkExactByFiniteVolumes: false);
 
     /// <summary>
     /// The lean solve to the duration and no further (what sweeps and fits call): the amounts at the output times,
