@@ -117,16 +117,10 @@ public static class ExactCrossCheck
         var slack = DepthReadings.OnEdgeRelative * report.Profiles[^1].PositionsMeters[^1];
         for (var r = 0; r < readings.Count; r++)
         {
-            // A reading on its layer's edge takes the interface value of that side, as the profile's edge values do.
             var reading = readings[r];
             var edges = report.Profiles[reading.LayerIndex].PositionsMeters;
             var k = simulation.Stack.Layers[reading.LayerIndex].PartitionCoefficient;
-            var value = Math.Abs(reading.DepthMeters - edges[0]) <= slack
-                ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex]
-                : Math.Abs(reading.DepthMeters - edges[^1]) <= slack
-                    ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex + 1]
-                    : inside[r];
-            values[$"$.depths[{r}].concentrationKgPerCubicMeter[{index}]"] = value;
+            values[$"$.depths[{r}].concentrationKgPerCubicMeter[{index}]"] = ExactDepthValue.Of(reading, (edges[0], edges[^1]), k, snapshot, inside[r], slack);
         }
     }
 }

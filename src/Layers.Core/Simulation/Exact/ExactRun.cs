@@ -20,14 +20,9 @@ internal static class ExactRun
     public static SimulationResult Solve(SimulationCase simulation, int contourPoints, CancellationToken cancellation)
     {
         var clock = Stopwatch.StartNew();
-        var model = DiscreteModel.Build(simulation);
-        var stages = StageSystem.For(simulation, model.Grid, model.System);
-        var final = FinalStateTarget.ForStages(model, stages);
-        var observables = new Observables(model, stages, final);
-        var solution = LaplaceSolution.For(simulation, contourPoints);
-        var distance = new ExactDistance(model, final);
-        var sampler = new ExactSampler(model, solution, observables, distance);
-        var samples = new List<StateSample> { observables.Sample(0, model.InitialState, default) };
+        var sampler = ExactSampler.For(simulation, contourPoints);
+        var (model, final, solution) = (sampler.Model, sampler.Final, sampler.Solution);
+        var samples = new List<StateSample> { sampler.Initial() };
         var reports = new List<ReportPoint>();
         foreach (var time in OutputSchedule.For(simulation))
         {
@@ -53,7 +48,7 @@ internal static class ExactRun
             [.. Enumerable.Range(0, simulation.Stack.Count).Select(layer => final.LayerEdges(simulation, layer))],
             final.MediumConcentration(model.System, simulation.Left, Side.Left),
             final.MediumConcentration(model.System, simulation.Right, Side.Right),
-            SystemTimes(distance, solution, horizon, [.. samples.Select(sample => (sample.TimeSeconds, sample.FractionOfFinalState))]),
+            SystemTimes(sampler.Distance, solution, horizon, [.. samples.Select(sample => (sample.TimeSeconds, sample.FractionOfFinalState))]),
             CompartmentTimes(sampler, solution, Side.Left, horizon, samples),
             CompartmentTimes(sampler, solution, Side.Right, horizon, samples),
             horizon);
@@ -79,17 +74,11 @@ internal static class ExactRun
     /// <summary>The integral quantities at the output times up to the duration, and nothing else (fitting).</summary>
     public static IReadOnlyList<StateSample> TimeSeries(SimulationCase simulation, int contourPoints)
     {
-        var model = DiscreteModel.Build(simulation);
-        var stages = StageSystem.For(simulation, model.Grid, model.System);
-        var final = FinalStateTarget.ForStages(model, stages);
-        var observables = new Observables(model, stages, final);
-        var solution = LaplaceSolution.For(simulation, contourPoints);
-        var distance = new ExactDistance(model, final);
-        var sampler = new ExactSampler(model, solution, observables, distance);
-        var samples = new List<StateSample> { observables.Sample(0, model.InitialState, default) };
+        var sampler = ExactSampler.For(simulation, contourPoints);
+        var samples = new List<StateSample> { sampler.Initial() };
         foreach (var time in OutputSchedule.For(simulation))
         {
-            samples.Add(sampler.Sample(solution.InstantAt(time)));
+            samples.Add(sampler.Sample(sampler.Solution.InstantAt(time)));
         }
 
         return InversionNoise.Clear(samples);

@@ -21,17 +21,42 @@ internal sealed class ExactSampler
     private readonly double[] _centres;
     private readonly double[] _state;
 
-    public ExactSampler(DiscreteModel model, LaplaceSolution solution, Observables observables, ExactDistance distance)
+    private ExactSampler(DiscreteModel model, LaplaceSolution solution, Observables observables, FinalStateTarget final)
     {
         _case = model.Case;
         _model = model;
         _solution = solution;
         _observables = observables;
-        _distance = distance;
+        _distance = new ExactDistance(model, final);
         _initialMass = model.System.TotalMass(model.InitialState);
         _centres = model.Grid.CentresMeters.ToArray();
         _state = (double[])model.InitialState.Clone();
+        Final = final;
     }
+
+    /// <summary>The case's mesh and system: the places of the profiles, the nodes the fractions are measured on.</summary>
+    public DiscreteModel Model => _model;
+
+    /// <summary>The state the case tends to.</summary>
+    public FinalStateTarget Final { get; }
+
+    /// <summary>The exact solution sampled.</summary>
+    public LaplaceSolution Solution => _solution;
+
+    /// <summary>The whole system's distance from its final state.</summary>
+    public ExactDistance Distance => _distance;
+
+    /// <summary>The sampler of a case the exact method can serve, inverting on a contour of the given number of points.</summary>
+    public static ExactSampler For(SimulationCase simulation, int contourPoints)
+    {
+        var model = DiscreteModel.Build(simulation);
+        var stages = StageSystem.For(simulation, model.Grid, model.System);
+        var final = FinalStateTarget.ForStages(model, stages);
+        return new ExactSampler(model, LaplaceSolution.For(simulation, contourPoints), new Observables(model, stages, final), final);
+    }
+
+    /// <summary>The integral quantities at t = 0, from the initial state (the flux of a jump is infinite there; the mesh's face link gives a finite value).</summary>
+    public StateSample Initial() => _observables.Sample(0, _model.InitialState, default);
 
     /// <summary>
     /// A compartment's fraction of the way to its final content at the snapshot's time (the finite volumes' measure of
@@ -145,12 +170,7 @@ internal sealed class ExactSampler
         {
             var edges = profiles[reading.LayerIndex].PositionsMeters;
             var k = _case.Stack.Layers[reading.LayerIndex].PartitionCoefficient;
-            var value = Math.Abs(reading.DepthMeters - edges[0]) <= slack
-                ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex]
-                : Math.Abs(reading.DepthMeters - edges[^1]) <= slack
-                    ? k * snapshot.ContinuousValueAtInterfaces[reading.LayerIndex + 1]
-                    : inside[r];
-            return reading with { ConcentrationKgPerCubicMeter = value };
+            return reading with { ConcentrationKgPerCubicMeter = ExactDepthValue.Of(reading, (edges[0], edges[^1]), k, snapshot, inside[r], slack) };
         })];
     }
 
