@@ -32,9 +32,8 @@ public static class Simulator
         var choice = MethodChoice.For(simulation);
         if (choice.Method == SolutionMethod.Laplace)
         {
-            var exact = ExactEstimation.Run(simulation, cancellation);
-            var fallback = simulation.Numerics.Method == SolutionMethod.Auto ? ExactEstimation.WhyNotKept(exact) : null;
-            if (fallback is null)
+            var (exact, fallback) = RunExact(simulation, cancellation);
+            if (fallback is null && exact is not null)
             {
                 var check = checkExactByFiniteVolumes && exact.Completed && exact.NumericalError is { Unavailable: null }
                     ? FiniteVolumeCheck.Of(exact, solved => Solve(solved, cancellation))
@@ -42,10 +41,33 @@ public static class Simulator
                 return exact with { MethodReason = choice.Reason, CrossCheck = check };
             }
 
-            choice = new MethodChoice(SolutionMethod.FiniteVolume, fallback);
+            choice = new MethodChoice(SolutionMethod.FiniteVolume, fallback!);
         }
 
         return RunFiniteVolumes(simulation, cancellation) with { MethodReason = choice.Reason };
+    }
+
+    /// <summary>
+    /// The exact method's run and, under "auto", why it is not kept (null to keep it): it failed its own checks, missed
+    /// the accuracy, or met a value it could not represent (an exception of arithmetic or arguments deep in an extreme
+    /// stack), in which case the finite volumes take over instead of the run failing.
+    /// </summary>
+    private static (SimulationResult? Exact, string? Fallback) RunExact(SimulationCase simulation, CancellationToken cancellation)
+    {
+        if (simulation.Numerics.Method == SolutionMethod.Laplace)
+        {
+            return (ExactEstimation.Run(simulation, cancellation), null);
+        }
+
+        try
+        {
+            var exact = ExactEstimation.Run(simulation, cancellation);
+            return (exact, ExactEstimation.WhyNotKept(exact));
+        }
+        catch (Exception problem) when (problem is ArithmeticException or ArgumentException or InvalidOperationException)
+        {
+            return (null, "the exact method could not solve this case (" + problem.Message + ")");
+        }
     }
 
     /// <summary>Solves a validated case as <see cref="Run(SimulationCase, bool, CancellationToken)"/> does, with the independent check.</summary>

@@ -33,6 +33,25 @@ public sealed class ExtremeInputsTests
         }
     }
 
+    [Theory]
+    [MemberData(nameof(Scenarios))]
+    public void Extreme_but_valid_cases_complete_by_the_method_auto_chooses_with_mass_conserved(string scenario)
+    {
+        var built = Catalogue()[scenario]();
+        var simulation = built with { Numerics = NumericsSettings.Default };
+
+        var result = Simulator.Run(simulation, checkExactByFiniteVolumes: false);
+
+        Assert.True(result.Completed, $"{result.Method} ({result.MethodReason}): {result.FailureReason}");
+        Assert.True(result.WorstMassBalanceError < 1e-9, $"mass balance {result.WorstMassBalanceError:G3}");
+        var scale = simulation.Stack.Layers.Max(layer => layer.InitialContinuousVariable);
+        foreach (var profile in result.Reports.SelectMany(report => report.Profiles))
+        {
+            var k = simulation.Stack.Layers[profile.LayerIndex].PartitionCoefficient;
+            Assert.All(profile.ConcentrationsKgPerCubicMeter, c => Assert.True(c / k >= -1e-9 * scale, $"negative {c:G3}"));
+        }
+    }
+
     private static Dictionary<string, Func<SimulationCase>> Catalogue() => new(StringComparer.Ordinal)
     {
         ["partition coefficients 1e-8 and 1e8"] = () => Make(1e6, Cases.Closed, Cases.Closed, Cases.Layer("a", 1e-4, 1e-12, 1e-8, 1), Cases.Layer("b", 1e-4, 1e-12, 1e8)),
