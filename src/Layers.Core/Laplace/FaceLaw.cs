@@ -56,9 +56,6 @@ internal sealed class FaceLaw
         _ => throw new ArgumentException($"Unknown face kind {condition.KindName}.", nameof(condition)),
     };
 
-    /// <summary>The fixed face value u_bath / s of a bath without film.</summary>
-    public Complex FixedValue(Complex s) => MediumValue / s;
-
     /// <summary>Y(s), m/s.</summary>
     public Complex Admittance(Complex s) => Condition switch
     {

@@ -28,6 +28,22 @@ internal static class LadderNetwork
     {
         var n = shunt.Length;
         var x = new Complex[n];
+        Solve(series, shunt, source, heldLeft, heldRight, x, new Complex[n], new Complex[n]);
+        return x;
+    }
+
+    /// <summary>The same into <paramref name="x"/>, with the caller's scratch for the pivots and reduced sources (n values each).</summary>
+    public static void Solve(
+        ReadOnlySpan<Complex> series,
+        ReadOnlySpan<Complex> shunt,
+        ReadOnlySpan<Complex> source,
+        Complex? heldLeft,
+        Complex? heldRight,
+        Span<Complex> x,
+        Span<Complex> pivot,
+        Span<Complex> reduced)
+    {
+        var n = shunt.Length;
         var first = 0;
         var last = n - 1;
         if (heldLeft is { } left)
@@ -43,8 +59,6 @@ internal static class LadderNetwork
         }
 
         // delta[i]: admittance to ground of node i and everything left of it; reduced[i]: the source carried along.
-        var pivot = new Complex[n];
-        var reduced = new Complex[n];
         var toGround = Complex.Zero;
         var carried = Complex.Zero;
         for (var i = first; i <= last; i++)
@@ -61,9 +75,10 @@ internal static class LadderNetwork
                 }
                 else
                 {
-                    var through = series[i - 1] + toGround;
-                    delta += series[i - 1] * toGround / through;
-                    j += series[i - 1] * carried / through;
+                    // H / (H + delta) once: the share of the link in the series pair.
+                    var share = series[i - 1] / (series[i - 1] + toGround);
+                    delta += share * toGround;
+                    j += share * carried;
                 }
             }
 
@@ -85,7 +100,5 @@ internal static class LadderNetwork
             var coupled = i < last ? series[i] * x[i + 1] : Complex.Zero;
             x[i] = (reduced[i] + coupled) / pivot[i];
         }
-
-        return x;
     }
 }

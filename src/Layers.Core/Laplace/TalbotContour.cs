@@ -65,6 +65,9 @@ public sealed class TalbotContour
     /// <summary>The value of s at evaluation k for time t.</summary>
     public Complex Node(int k, double timeSeconds) => _nodes[k] / timeSeconds;
 
+    /// <summary>The factor of evaluation k at time t: the real f(t) is the sum over k of Im[factor F(s_k)].</summary>
+    public Complex Factor(int k, double timeSeconds) => _weights[k] / timeSeconds;
+
     /// <summary>Inverts a real function's transform F at time t &gt; 0.</summary>
     public double Invert(Func<Complex, Complex> transform, double timeSeconds)
     {
