@@ -21,15 +21,14 @@ internal readonly struct LayerTransfer
     private readonly double _thicknessMeters;
     private readonly Complex _q;
 
-    /// <summary>The layer at s, given sqrt(s) (shared by the layers) and the layer's 1/sqrt(D), P = D K and K.</summary>
-    public LayerTransfer(Complex sqrtS, Complex inverseS, double thicknessMeters, double inverseRootDiffusivity, double permeability, double partition)
+    /// <summary>The layer at s, given sqrt(s) and 1/s (shared by the layers) and the layer's 1/sqrt(D), P/L and 1/K.</summary>
+    public LayerTransfer(Complex sqrtS, Complex inverseS, double thicknessMeters, double inverseRootDiffusivity, double conductance, double inversePartition)
     {
         _thicknessMeters = thicknessMeters;
         _q = sqrtS * inverseRootDiffusivity;
         var ql = _q * thicknessMeters;
         Decay = ScaledExponentials.Exp(-ql);
-        var conductance = permeability / thicknessMeters;
-        if (Complex.Abs(ql) >= ClosedFormFrom)
+        if ((ql.Real * ql.Real) + (ql.Imaginary * ql.Imaginary) >= ClosedFormFrom * ClosedFormFrom)
         {
             // phi(2x) = (1 - E^2) / (2x) and phi(x) = (1 - E) / x with E computed once; with r = x / (1 - E^2):
             // G = (P/L) r (1 + E^2), H = (P/L) r 2E, T = (P/L) r (1 - E)^2, the forms below at one division.
@@ -55,7 +54,7 @@ internal readonly struct LayerTransfer
         }
 
         // tanh(q L / 2) / q = L phi(q L) / (1 + E) = T / (K s), since (P/L) (q L)^2 = K L s: no further division by q.
-        ContentFactor = Storage * inverseS / partition;
+        ContentFactor = Storage * inverseS * inversePartition;
     }
 
     /// <summary>E = e^(-q L), of modulus at most 1.</summary>

@@ -20,6 +20,8 @@ internal sealed class StackTransform
     private readonly double[] _thickness;
     private readonly double[] _inverseRootDiffusivity;
     private readonly double[] _partition;
+    private readonly double[] _conductance;
+    private readonly double[] _inversePartition;
     private readonly double[] _permeability;
     private readonly double[] _initialValue;
 
@@ -31,6 +33,8 @@ internal sealed class StackTransform
         _inverseRootDiffusivity = [.. layers.Select(layer => 1 / Math.Sqrt(layer.DiffusivitySquareMetersPerSecond))];
         _partition = [.. layers.Select(layer => layer.PartitionCoefficient)];
         Partition = _partition;
+        _conductance = [.. layers.Select(layer => layer.DiffusivitySquareMetersPerSecond * layer.PartitionCoefficient / layer.ThicknessMeters)];
+        _inversePartition = [.. layers.Select(layer => 1 / layer.PartitionCoefficient)];
         _permeability = [.. layers.Select(layer => layer.DiffusivitySquareMetersPerSecond * layer.PartitionCoefficient)];
         _initialValue = [.. layers.Select(layer => layer.InitialContinuousVariable)];
         Left = FaceLaw.For(simulation.Left);
@@ -42,6 +46,9 @@ internal sealed class StackTransform
 
     /// <summary>Partition coefficient of each layer.</summary>
     public IReadOnlyList<double> Partition { get; }
+
+    /// <summary>Partition coefficient of layer j, without the list interface (read once per layer and s).</summary>
+    public double PartitionOf(int layer) => _partition[layer];
 
     public FaceLaw Left { get; }
 
@@ -77,7 +84,7 @@ internal sealed class StackTransform
         source[0] = Complex.Zero;
         for (var j = 0; j < n; j++)
         {
-            var layer = new LayerTransfer(rootS, inverseS, _thickness[j], _inverseRootDiffusivity[j], _permeability[j], _partition[j]);
+            var layer = new LayerTransfer(rootS, inverseS, _thickness[j], _inverseRootDiffusivity[j], _conductance[j], _inversePartition[j]);
             layers[j] = layer;
             var start = _initialValue[j] * inverseS;
             initialOverS[j] = start;
@@ -96,16 +103,14 @@ internal sealed class StackTransform
         state.RightSource = Complex.Zero;
         if (!Left.IsFixedValue)
         {
-            state.LeftAdmittance = Left.Admittance(s);
-            state.LeftSource = Left.Source(s);
+            (state.LeftAdmittance, state.LeftSource) = Left.AdmittanceAndSource(s, inverseS);
             shunt[0] += state.LeftAdmittance;
             source[0] += state.LeftSource;
         }
 
         if (!Right.IsFixedValue)
         {
-            state.RightAdmittance = Right.Admittance(s);
-            state.RightSource = Right.Source(s);
+            (state.RightAdmittance, state.RightSource) = Right.AdmittanceAndSource(s, inverseS);
             shunt[n] += state.RightAdmittance;
             source[n] += state.RightSource;
         }

@@ -66,7 +66,7 @@ internal sealed class TransformedState
 
     /// <summary>Transformed mass per area of layer j: K times the integral of u.</summary>
     public Complex LayerMass(int layer)
-        => _stack.Partition[layer] * Layers[layer].IntegralOfU(Nodes[layer], Nodes[layer + 1], InitialOverS[layer]);
+        => _stack.PartitionOf(layer) * Layers[layer].IntegralOfU(Nodes[layer], Nodes[layer + 1], InitialOverS[layer]);
 
     /// <summary>
     /// Transformed flux in +x at node i, kg/m2/s. It can be read from the layer on either side of the node or, at an
