@@ -76,7 +76,7 @@ internal static class LadderNetwork
                 else
                 {
                     // H / (H + delta) once: the share of the link in the series pair.
-                    var share = series[i - 1] / (series[i - 1] + toGround);
+                    var share = Divide(series[i - 1], series[i - 1] + toGround);
                     delta += share * toGround;
                     j += share * carried;
                 }
@@ -98,7 +98,23 @@ internal static class LadderNetwork
         for (var i = last; i >= first; i--)
         {
             var coupled = i < last ? series[i] * x[i + 1] : Complex.Zero;
-            x[i] = (reduced[i] + coupled) / pivot[i];
+            x[i] = Divide(reduced[i] + coupled, pivot[i]);
         }
+    }
+
+    // a / b as a conj(b) / |b|^2, one real division instead of Smith's three; admittances stay far inside the range
+    // where |b|^2 neither overflows nor underflows, and outside it the library's scaled division is used.
+    private static Complex Divide(Complex a, Complex b)
+    {
+        var squared = (b.Real * b.Real) + (b.Imaginary * b.Imaginary);
+        if (!(squared > 1e-280 && squared < 1e280))
+        {
+            return a / b;
+        }
+
+        var inverse = 1 / squared;
+        return new Complex(
+            ((a.Real * b.Real) + (a.Imaginary * b.Imaginary)) * inverse,
+            ((a.Imaginary * b.Real) - (a.Real * b.Imaginary)) * inverse);
     }
 }
