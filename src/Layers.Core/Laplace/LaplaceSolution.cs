@@ -1,5 +1,4 @@
 using System.Numerics;
-using System.Runtime.InteropServices;
 using Layers.Core.Domain;
 
 namespace Layers.Core.Laplace;
@@ -70,7 +69,7 @@ public sealed class LaplaceSolution
         RequirePositive(timeSeconds);
         var state = new TransformedState(_stack);
         var transformed = new Complex[QuantityCount];
-        var sums = new double[2 * QuantityCount];
+        var sums = new double[QuantityCount];
         for (var k = 0; k < _contour.EvaluationsPerTime; k++)
         {
             _stack.Solve(_contour.Node(k, timeSeconds), state);
@@ -78,7 +77,7 @@ public sealed class LaplaceSolution
             Accumulate(_contour.Factor(k, timeSeconds), transformed, sums);
         }
 
-        return Snapshot(timeSeconds, Combine(sums));
+        return Snapshot(timeSeconds, sums);
     }
 
     /// <summary>
@@ -108,7 +107,7 @@ public sealed class LaplaceSolution
             var contour = HyperbolicContour.ForWindow(positive[first], positive[last] / positive[first], _windowTolerance);
             for (var i = first; i <= last; i++)
             {
-                sums[i] = new double[2 * QuantityCount];
+                sums[i] = new double[QuantityCount];
             }
 
             for (var k = 0; k < contour.Evaluations; k++)
@@ -128,7 +127,7 @@ public sealed class LaplaceSolution
         var snapshots = new LaplaceSnapshot[positive.Length];
         for (var i = 0; i < positive.Length; i++)
         {
-            snapshots[i] = Snapshot(positive[i], Combine(sums[i]));
+            snapshots[i] = Snapshot(positive[i], sums[i]);
         }
 
         return [.. timesSeconds.Select(time => time == 0 ? Initial() : snapshots[Array.BinarySearch(positive, time)])];
@@ -139,46 +138,16 @@ public sealed class LaplaceSolution
     // The error asked of the window contours for a Talbot contour of the given points (see For).
     private static double WindowToleranceFor(int contourPoints) => Math.Max(1e-15, Math.Pow(10, -3.0 * contourPoints / 8));
 
-    // Im[factor F] = Re(factor) Im(F) + Im(factor) Re(F), gathered as two partial sums per quantity laid out as the
-    // real and imaginary parts of F are, so that one vector multiply-add serves two quantities at a time.
-    private static void Accumulate(Complex factor, ReadOnlySpan<Complex> transformed, Span<double> partialSums)
+    // sum += Im[factor F] for every quantity.
+    private static void Accumulate(Complex factor, ReadOnlySpan<Complex> transformed, Span<double> sums)
     {
-        var values = MemoryMarshal.Cast<Complex, double>(transformed);
-        var width = Vector<double>.Count;
-        var i = 0;
-        if (Vector.IsHardwareAccelerated && width % 2 == 0)
-        {
-            Span<double> pattern = stackalloc double[width];
-            for (var j = 0; j < width; j += 2)
-            {
-                pattern[j] = factor.Imaginary;
-                pattern[j + 1] = factor.Real;
-            }
-
-            var weights = new Vector<double>(pattern);
-            for (; i <= values.Length - width; i += width)
-            {
-                (new Vector<double>(partialSums[i..]) + (new Vector<double>(values[i..]) * weights)).CopyTo(partialSums[i..]);
-            }
-        }
-
-        for (; i < values.Length; i += 2)
-        {
-            partialSums[i] += factor.Imaginary * values[i];
-            partialSums[i + 1] += factor.Real * values[i + 1];
-        }
-    }
-
-    // The two partial sums of each quantity added.
-    private static double[] Combine(double[] partialSums)
-    {
-        var sums = new double[partialSums.Length / 2];
+        var real = factor.Real;
+        var imaginary = factor.Imaginary;
         for (var q = 0; q < sums.Length; q++)
         {
-            sums[q] = partialSums[2 * q] + partialSums[(2 * q) + 1];
+            var value = transformed[q];
+            sums[q] += (real * value.Imaginary) + (imaginary * value.Real);
         }
-
-        return sums;
     }
 
     private static void RequirePositive(double timeSeconds)
