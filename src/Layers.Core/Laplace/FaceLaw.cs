@@ -56,24 +56,25 @@ internal sealed class FaceLaw
         _ => throw new ArgumentException($"Unknown face kind {condition.KindName}.", nameof(condition)),
     };
 
-    /// <summary>The fixed face value u_bath / s of a bath without film.</summary>
-    public Complex FixedValue(Complex s) => MediumValue / s;
-
-    /// <summary>Y(s), m/s.</summary>
-    public Complex Admittance(Complex s) => Condition switch
+    /// <summary>
+    /// The admittance Y(s), m/s, and the source Y(s) g(s), the flux the medium would give a face held at u = 0,
+    /// transformed; given 1/s, with one complex division for a compartment.
+    /// </summary>
+    public (Complex Admittance, Complex Source) AdmittanceAndSource(Complex s, Complex inverseS)
     {
-        BathFace => 1 / FilmResistance,
-        CompartmentFace => Capacity * (s + RemovalRate) / (1 + (FilmResistance * Capacity * (s + RemovalRate))),
-        _ => Complex.Zero,
-    };
-
-    /// <summary>Y(s) g(s), the flux the medium would give a face held at u = 0, transformed.</summary>
-    public Complex Source(Complex s) => Condition switch
-    {
-        BathFace => MediumValue / (FilmResistance * s),
-        CompartmentFace => Capacity * MediumValue / (1 + (FilmResistance * Capacity * (s + RemovalRate))),
-        _ => Complex.Zero,
-    };
+        switch (Condition)
+        {
+            case BathFace:
+                var conductance = 1 / FilmResistance;
+                return (conductance, conductance * MediumValue * inverseS);
+            case CompartmentFace:
+                var shifted = s + RemovalRate;
+                var share = Capacity / (1 + (FilmResistance * Capacity * shifted));
+                return (share * shifted, share * MediumValue);
+            default:
+                return (Complex.Zero, Complex.Zero);
+        }
+    }
 
     // The film law of the finite volumes, J = k K (u_bulk - u_surface): a resistance 1/(k K) in series.
     private static double Film(double? filmCoefficient, double partitionCoefficient)

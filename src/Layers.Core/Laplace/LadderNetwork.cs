@@ -28,6 +28,22 @@ internal static class LadderNetwork
     {
         var n = shunt.Length;
         var x = new Complex[n];
+        Solve(series, shunt, source, heldLeft, heldRight, x, new Complex[n], new Complex[n]);
+        return x;
+    }
+
+    /// <summary>The same into <paramref name="x"/>, with the caller's scratch for the pivots and reduced sources (n values each).</summary>
+    public static void Solve(
+        ReadOnlySpan<Complex> series,
+        ReadOnlySpan<Complex> shunt,
+        ReadOnlySpan<Complex> source,
+        Complex? heldLeft,
+        Complex? heldRight,
+        Span<Complex> x,
+        Span<Complex> pivot,
+        Span<Complex> reduced)
+    {
+        var n = shunt.Length;
         var first = 0;
         var last = n - 1;
         if (heldLeft is { } left)
@@ -43,8 +59,6 @@ internal static class LadderNetwork
         }
 
         // delta[i]: admittance to ground of node i and everything left of it; reduced[i]: the source carried along.
-        var pivot = new Complex[n];
-        var reduced = new Complex[n];
         var toGround = Complex.Zero;
         var carried = Complex.Zero;
         for (var i = first; i <= last; i++)
@@ -61,9 +75,10 @@ internal static class LadderNetwork
                 }
                 else
                 {
-                    var through = series[i - 1] + toGround;
-                    delta += series[i - 1] * toGround / through;
-                    j += series[i - 1] * carried / through;
+                    // H / (H + delta) once: the share of the link in the series pair.
+                    var share = Divide(series[i - 1], series[i - 1] + toGround);
+                    delta += share * toGround;
+                    j += share * carried;
                 }
             }
 
@@ -83,9 +98,23 @@ internal static class LadderNetwork
         for (var i = last; i >= first; i--)
         {
             var coupled = i < last ? series[i] * x[i + 1] : Complex.Zero;
-            x[i] = (reduced[i] + coupled) / pivot[i];
+            x[i] = Divide(reduced[i] + coupled, pivot[i]);
+        }
+    }
+
+    // a / b as a conj(b) / |b|^2, one real division instead of Smith's three; admittances stay far inside the range
+    // where |b|^2 neither overflows nor underflows, and outside it the library's scaled division is used.
+    private static Complex Divide(Complex a, Complex b)
+    {
+        var squared = (b.Real * b.Real) + (b.Imaginary * b.Imaginary);
+        if (!(squared > 1e-280 && squared < 1e280))
+        {
+            return a / b;
         }
 
-        return x;
+        var inverse = 1 / squared;
+        return new Complex(
+            ((a.Real * b.Real) + (a.Imaginary * b.Imaginary)) * inverse,
+            ((a.Imaginary * b.Real) - (a.Real * b.Imaginary)) * inverse);
     }
 }

@@ -29,7 +29,7 @@ public sealed class LaplaceInstant
 
     /// <summary>The integral quantities at this time (as <see cref="LaplaceSolution.At"/> gives them).</summary>
     public LaplaceSnapshot Snapshot => _snapshot ??= _solution.Snapshot(
-        TimeSeconds, _contour.InvertByNode(_solution.SnapshotQuantities, (k, transformed) => _solution.Transforms(_states[k], transformed), TimeSeconds));
+        TimeSeconds, _contour.InvertByNode(_solution.QuantityCount, (k, transformed) => _solution.Transforms(_states[k], transformed), TimeSeconds));
 
     /// <summary>
     /// u = c / K at places given by layer and depth from that layer's left face (0 to its thickness), kg/m3: the variable

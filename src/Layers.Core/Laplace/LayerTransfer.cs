@@ -15,27 +15,46 @@ namespace Layers.Core.Laplace;
 /// </remarks>
 internal readonly struct LayerTransfer
 {
+    // From |q L| = 1/2 on, phi(q L) and phi(2 q L) are both outside their series radius and follow from E alone.
+    private const double ClosedFormFrom = 0.5;
+
     private readonly double _thicknessMeters;
     private readonly Complex _q;
-    private readonly Complex _phiOfQl;
-    private readonly Complex _phiOfTwoQl;
 
-    public LayerTransfer(Complex s, double thicknessMeters, double diffusivity, double permeability)
+    /// <summary>The layer at s, given sqrt(s) and 1/s (shared by the layers) and the layer's 1/sqrt(D), P/L and 1/K.</summary>
+    public LayerTransfer(Complex sqrtS, Complex inverseS, double thicknessMeters, double inverseRootDiffusivity, double conductance, double inversePartition)
     {
         _thicknessMeters = thicknessMeters;
-        _q = Complex.Sqrt(s / diffusivity);
+        _q = sqrtS * inverseRootDiffusivity;
         var ql = _q * thicknessMeters;
-        Decay = Complex.Exp(-ql);
-        _phiOfQl = ScaledExponentials.Phi(ql);
-        _phiOfTwoQl = ScaledExponentials.Phi(2 * ql);
-        var conductance = permeability / thicknessMeters;
+        Decay = ScaledExponentials.Exp(-ql);
+        if ((ql.Real * ql.Real) + (ql.Imaginary * ql.Imaginary) >= ClosedFormFrom * ClosedFormFrom)
+        {
+            // phi(2x) = (1 - E^2) / (2x) and phi(x) = (1 - E) / x with E computed once; with r = x / (1 - E^2):
+            // G = (P/L) r (1 + E^2), H = (P/L) r 2E, T = (P/L) r (1 - E)^2, the forms below at one division.
+            var decaySquared = Decay * Decay;
+            var oneMinusSquare = Complex.One - decaySquared;
+            var scaled = conductance * ql / oneMinusSquare;
+            var oneMinusDecay = Complex.One - Decay;
+            Self = scaled * (1 + decaySquared);
+            Cross = 2 * scaled * Decay;
+            Storage = scaled * oneMinusDecay * oneMinusDecay;
+        }
+        else
+        {
+            var phiOfQl = ScaledExponentials.Phi(ql);
+            var phiOfTwoQl = ScaledExponentials.Phi(2 * ql);
 
-        // coth(x) = (1 + E^2) / (2 x phi(2x)) and csch(x) = E / (x phi(2x)), times P q = (P/L) x.
-        Self = conductance * (1 + (Decay * Decay)) / (2 * _phiOfTwoQl);
-        Cross = conductance * Decay / _phiOfTwoQl;
+            // coth(x) = (1 + E^2) / (2 x phi(2x)) and csch(x) = E / (x phi(2x)), times P q = (P/L) x.
+            Self = conductance * (1 + (Decay * Decay)) / (2 * phiOfTwoQl);
+            Cross = conductance * Decay / phiOfTwoQl;
 
-        // tanh(x/2) = x phi(x) / (1 + E): no cancellation of G - H when x is small.
-        Storage = conductance * ql * ql * _phiOfQl / (1 + Decay);
+            // tanh(x/2) = x phi(x) / (1 + E): no cancellation of G - H when x is small.
+            Storage = conductance * ql * ql * phiOfQl / (1 + Decay);
+        }
+
+        // tanh(q L / 2) / q = L phi(q L) / (1 + E) = T / (K s), since (P/L) (q L)^2 = K L s: no further division by q.
+        ContentFactor = Storage * inverseS * inversePartition;
     }
 
     /// <summary>E = e^(-q L), of modulus at most 1.</summary>
@@ -50,6 +69,9 @@ internal readonly struct LayerTransfer
     /// <summary>T = G - H = P q tanh(q L / 2), m/s: what the layer takes up when both faces rise together.</summary>
     public Complex Storage { get; }
 
+    /// <summary>tanh(q L / 2) / q, m: the integral of u over the layer per unit rise of both faces.</summary>
+    public Complex ContentFactor { get; }
+
     /// <summary>Transformed flux in +x at the left face, from the face values of u and the layer's u0 / s.</summary>
     public Complex FluxAtLeft(Complex left, Complex right, Complex initialOverS)
         => (Self * (left - right)) + (Storage * (right - initialOverS));
@@ -62,18 +84,18 @@ internal readonly struct LayerTransfer
     /// Transformed integral of u over the layer: L u0/s + (a + b) tanh(q L / 2) / q, with tanh(x/2)/q = L phi(x) / (1 + E).
     /// </summary>
     public Complex IntegralOfU(Complex left, Complex right, Complex initialOverS)
-        => (_thicknessMeters * initialOverS)
-            + ((left - initialOverS + right - initialOverS) * _thicknessMeters * _phiOfQl / (1 + Decay));
+        => (_thicknessMeters * initialOverS) + ((left - initialOverS + right - initialOverS) * ContentFactor);
 
     /// <summary>Transformed u at depth xi from the layer's left face, 0 &lt;= xi &lt;= L.</summary>
     public Complex ValueAt(double depthMeters, Complex left, Complex right, Complex initialOverS)
     {
         var length = _thicknessMeters;
         var remaining = length - depthMeters;
+        var phiOfTwoQl = PhiOfTwoQl();
 
         // sinh(q (L - xi)) / sinh(q L) = e^(-q xi) (L - xi) phi(2 q (L - xi)) / (L phi(2 q L)), and the mirror image.
-        var fromLeft = Complex.Exp(-_q * depthMeters) * remaining * ScaledExponentials.Phi(2 * _q * remaining) / (length * _phiOfTwoQl);
-        var fromRight = Complex.Exp(-_q * remaining) * depthMeters * ScaledExponentials.Phi(2 * _q * depthMeters) / (length * _phiOfTwoQl);
+        var fromLeft = Complex.Exp(-_q * depthMeters) * remaining * ScaledExponentials.Phi(2 * _q * remaining) / (length * phiOfTwoQl);
+        var fromRight = Complex.Exp(-_q * remaining) * depthMeters * ScaledExponentials.Phi(2 * _q * depthMeters) / (length * phiOfTwoQl);
         return initialOverS + ((left - initialOverS) * fromLeft) + ((right - initialOverS) * fromRight);
     }
 
@@ -92,11 +114,18 @@ internal readonly struct LayerTransfer
     {
         var length = _thicknessMeters;
         var width = toMeters - fromMeters;
-        var common = width * ScaledExponentials.Phi(_q * width) / (2 * length * _phiOfTwoQl);
+        var common = width * ScaledExponentials.Phi(_q * width) / (2 * length * PhiOfTwoQl());
         var towardLeft = (2 * length) - fromMeters - toMeters;
         var towardRight = fromMeters + toMeters;
         var fromLeft = common * Complex.Exp(-_q * fromMeters) * towardLeft * ScaledExponentials.Phi(_q * towardLeft);
         var fromRight = common * Complex.Exp(-_q * (length - toMeters)) * towardRight * ScaledExponentials.Phi(_q * towardRight);
         return (width * initialOverS) + ((left - initialOverS) * fromLeft) + ((right - initialOverS) * fromRight);
+    }
+
+    /// <summary>phi(2 q L), from E outside the series radius (as the constructor forms it).</summary>
+    private Complex PhiOfTwoQl()
+    {
+        var ql = _q * _thicknessMeters;
+        return Complex.Abs(ql) >= ClosedFormFrom ? (Complex.One - (Decay * Decay)) / (2 * ql) : ScaledExponentials.Phi(2 * ql);
     }
 }

@@ -14,7 +14,9 @@ namespace Layers.Core.Laplace;
 /// round-trip tests on transforms with known inverses). Its error falls about like e^(-1.36 N); round-off grows like
 /// e^(max Re z) = e^(0.171 N) times the machine epsilon, so N = 32 (16 evaluations of F for a real f, by conjugate
 /// symmetry) is near the best double precision can do: 1e-10 or better relative to the size of f on the transforms of
-/// the round-trip tests, and 32 and 48 points agree to about 1e-13 on random stacks.
+/// the round-trip tests. On random three-layer stacks its values are within 5e-8 of each figure's largest value of a
+/// round-off-level inversion (1e-10 typically; the fluxes at the earliest times are the worst). For many times at
+/// once see <see cref="HyperbolicContour"/>.
 /// </remarks>
 public sealed class TalbotContour
 {
@@ -64,6 +66,9 @@ public sealed class TalbotContour
 
     /// <summary>The value of s at evaluation k for time t.</summary>
     public Complex Node(int k, double timeSeconds) => _nodes[k] / timeSeconds;
+
+    /// <summary>The factor of evaluation k at time t: the real f(t) is the sum over k of Im[factor F(s_k)].</summary>
+    public Complex Factor(int k, double timeSeconds) => _weights[k] / timeSeconds;
 
     /// <summary>Inverts a real function's transform F at time t &gt; 0.</summary>
     public double Invert(Func<Complex, Complex> transform, double timeSeconds)

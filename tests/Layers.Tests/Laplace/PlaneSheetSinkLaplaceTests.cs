@@ -34,6 +34,26 @@ public sealed class PlaneSheetSinkLaplaceTests
         }
     }
 
+    [Theory]
+    [InlineData(1e-3, 1e-10)]
+    [InlineData(1e-6, 1e-18)]
+    public void Fraction_released_at_all_times_at_once_matches_Crank_to_1e_8(double thickness, double diffusivity)
+    {
+        // The same times through AtTimes: eight decades, so several windows of hyperbolic contours, each with times at
+        // its ends and inside.
+        var solution = LaplaceSolution.For(Sheet(thickness, diffusivity, Cases.Bath(0)));
+        double[] taus = [1e-7, 3e-7, 1e-6, 1e-4, 0.01, 0.03, 0.1, 0.5, 1, 2, 5];
+        var snapshots = solution.AtTimes([.. taus.Select(tau => tau * thickness * thickness / diffusivity)]);
+        var initial = InitialConcentration * thickness;
+        for (var i = 0; i < taus.Length; i++)
+        {
+            var expected = PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, snapshots[i].TimeSeconds);
+            Tolerance.Absolute(expected, 1 - (snapshots[i].LayerMassPerArea[0] / initial), 1e-8, $"M_t/M_inf from the sheet at tau {taus[i]} (Crank eq. 4.18/4.20)");
+            Tolerance.Absolute(expected, snapshots[i].Right!.TransferredIntoMediumPerArea / initial, 1e-8, $"M_t/M_inf received by the sink at tau {taus[i]}");
+            Tolerance.Absolute(1 - expected, snapshots[i].LayerMassPerArea[0] / initial, 1e-8, $"the sheet's remaining fraction at tau {taus[i]}");
+        }
+    }
+
     [Fact]
     public void Profile_matches_Crank_to_1e_8()
     {

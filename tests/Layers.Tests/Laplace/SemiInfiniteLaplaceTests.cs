@@ -54,4 +54,33 @@ public sealed class SemiInfiniteLaplaceTests
         var firstSide = solution.ConcentrationAtFace(0, Layers.Core.Domain.Side.Right, time);
         Tolerance.Relative(k1Over2 * TwoSemiInfiniteMedia.Concentration(d1, d2, k1Over2, c0, 0, time), firstSide, 1e-8, "c on the first side of the contact");
     }
+
+    [Theory]
+    [InlineData(1e-13, 4e-13, 5.0)]
+    [InlineData(1e-12, 1e-14, 0.02)]
+    [InlineData(1e-9, 1e-17, 1e6)]
+    [InlineData(1e-17, 1e-9, 1e-6)]
+    public void Amounts_and_contact_flux_over_a_window_of_times_match_to_1e_8(double d1, double d2, double k1Over2)
+    {
+        // Five times over two decades through AtTimes (one hyperbolic contour, or two): the media are semi-infinite
+        // to round-off up to the last time, as above.
+        const double c0 = 300;
+        const double last = 3600;
+        var thickness1 = 12 * Math.Sqrt(d1 * last);
+        var thickness2 = 12 * Math.Sqrt(d2 * last);
+        var simulation = Cases.Make(
+            Cases.Closed,
+            Cases.Closed,
+            last,
+            layers: [Cases.Layer("first", thickness1, d1, k1Over2, c0), Cases.Layer("second", thickness2, d2, 1)]);
+        double[] times = [36, 100, 600, 1800, last];
+        var snapshots = LaplaceSolution.For(simulation).AtTimes(times);
+        for (var i = 0; i < times.Length; i++)
+        {
+            var expected = TwoSemiInfiniteMedia.MassPerAreaTransferred(d1, d2, k1Over2, c0, times[i]);
+            Tolerance.Relative(expected, snapshots[i].LayerMassPerArea[1], 1e-8, $"mass transferred into the second medium at {times[i]} s");
+            Tolerance.Relative(c0 * thickness1 - expected, snapshots[i].LayerMassPerArea[0], 1e-8, $"mass left in the first medium at {times[i]} s");
+            Tolerance.Relative(expected / (2 * times[i]), snapshots[i].FluxAtInterfaces[1], 1e-8, $"flux across the contact at {times[i]} s");
+        }
+    }
 }
