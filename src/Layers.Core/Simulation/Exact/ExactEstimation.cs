@@ -7,8 +7,9 @@ namespace Layers.Core.Simulation;
 
 /// <summary>
 /// The exact method with the error of its key figures estimated: the case inverted on the contour of
-/// <see cref="ContourPoints"/> points and again on one of <see cref="ComparisonContourPoints"/>; the difference of
-/// the two (never below the round-off of <see cref="ErrorEstimation.RoundOff"/>) is each figure's estimate. The
+/// <see cref="ContourPoints"/> points and its key figures again on one of <see cref="ComparisonContourPoints"/>
+/// (<see cref="ExactRun.Comparison"/>); the difference of the two (never below the round-off of
+/// <see cref="ErrorEstimation.RoundOff"/>) is each figure's estimate. The
 /// contour's error falls geometrically with its points, so the difference bounds the error of the finer inversion
 /// many times over where the inversion converges, and shows where it does not: a figure deep in a diffusion tail, far
 /// below the largest values of its transform, where the inversion's round-off is large beside it.
@@ -33,11 +34,12 @@ internal static class ExactEstimation
             return fine;
         }
 
-        var coarse = ExactRun.Solve(simulation, ComparisonContourPoints, cancellation);
-        if (coarse.Statistics.StopReason == StopReason.Cancelled)
+        if (cancellation.IsCancellationRequested)
         {
-            return coarse;
+            return fine with { Statistics = fine.Statistics with { StopReason = StopReason.Cancelled }, FailureReason = "the run was cancelled" };
         }
+
+        var coarse = ExactRun.Comparison(simulation, ComparisonContourPoints, fine);
 
         var error = coarse.Completed
             ? ErrorEstimation.Compare(fine, coarse, [])

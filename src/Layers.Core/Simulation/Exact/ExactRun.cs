@@ -71,6 +71,65 @@ internal static class ExactRun
         };
     }
 
+    /// <summary>
+    /// The key figures of a case again on a contour of another size, for the error estimate of <paramref name="fine"/>
+    /// (<see cref="ExactEstimation"/>): the report times and the end of the duration only, and each time to a level
+    /// moved from the fine run's by Newton's step on this contour's fraction, t - (F(t) - level) / F'(t), which is the
+    /// root this contour would give to first order.
+    /// </summary>
+    public static SimulationResult Comparison(SimulationCase simulation, int contourPoints, SimulationResult fine)
+    {
+        var sampler = ExactSampler.For(simulation, contourPoints);
+        var solution = sampler.Solution;
+        var samples = new List<StateSample> { sampler.Initial() };
+        var reports = new List<ReportPoint>();
+        foreach (var time in simulation.ReportTimesSeconds.Append(simulation.DurationSeconds).Distinct())
+        {
+            var instant = solution.InstantAt(time);
+            var sample = sampler.Sample(instant);
+            samples.Add(sample);
+            if (OutputSchedule.IsReportTime(simulation, time))
+            {
+                reports.Add(sampler.Report(sample, instant.Snapshot));
+            }
+        }
+
+        var final = fine.FinalState;
+        var summary = final with
+        {
+            System = Moved(final.System, time => sampler.Distance.FractionOfFinalState(solution.InstantAt(time))),
+            LeftCompartment = final.LeftCompartment is { } left ? Moved(left, time => sampler.CompartmentFraction(Side.Left, solution.At(time))!.Value) : null,
+            RightCompartment = final.RightCompartment is { } right ? Moved(right, time => sampler.CompartmentFraction(Side.Right, solution.At(time))!.Value) : null,
+        };
+        return fine with
+        {
+            TimeSeries = samples,
+            Reports = reports,
+            FinalState = summary,
+            Permeation = Permeation(simulation, sampler.Final, samples[^1], solution),
+            NumericalError = null,
+        };
+    }
+
+    /// <summary>Each time moved by Newton's step on <paramref name="fraction"/> toward its level (0 and null stay).</summary>
+    private static ThresholdTimes Moved(ThresholdTimes times, Func<double, double> fraction)
+    {
+        double? Move(double? time, double level)
+        {
+            if (time is not { } t || t <= 0)
+            {
+                return time;
+            }
+
+            const double step = 1e-4;
+            var slope = (fraction(t * (1 + step)) - fraction(t * (1 - step))) / (2 * step * t);
+            return slope > 0 ? t - ((fraction(t) - level) / slope) : t;
+        }
+
+        var levels = ThresholdTimes.Levels;
+        return new ThresholdTimes(Move(times.Half, levels[0]), Move(times.NinetyPercent, levels[1]), Move(times.NinetyNinePercent, levels[2]));
+    }
+
     /// <summary>The integral quantities at the output times up to the duration, and nothing else (fitting).</summary>
     public static IReadOnlyList<StateSample> TimeSeries(SimulationCase simulation, int contourPoints)
     {
