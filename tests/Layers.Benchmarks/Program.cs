@@ -26,6 +26,11 @@ internal static class Program
             return Peers.ExportSystemCommand.Run(folder, Console.Out);
         }
 
+        if (args.Length > 0 && args[0] == "method-costs")
+        {
+            return MethodCosts.Run(Console.Out);
+        }
+
         BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
         return 0;
     }
