@@ -278,7 +278,7 @@ public sealed class LaplaceSolution
             return null;
         }
 
-        return TimeSearch.FirstCrossing(
+        return FirstCrossings.First(
             time => (At(time).Face(side)!.MediumMassPerArea!.Value - initial) / (final - initial), fraction, searchUpToSeconds);
     }
 
@@ -290,7 +290,7 @@ public sealed class LaplaceSolution
     public double? FirstTimeReaching(Func<LaplaceSnapshot, double> measure, double target, double searchUpToSeconds)
     {
         ArgumentNullException.ThrowIfNull(measure);
-        return TimeSearch.FirstCrossing(time => measure(At(time)), target, searchUpToSeconds);
+        return FirstCrossings.First(time => measure(At(time)), target, searchUpToSeconds);
     }
 
     /// <summary>

@@ -1,9 +1,9 @@
 using MathNet.Numerics.RootFinding;
 
-namespace Layers.Core.Simulation;
+namespace Layers.Core.Laplace;
 
 /// <summary>
-/// The first times a quantity of the exact solution reaches each of several levels: one scan on log t shared by all
+/// The first times a quantity of the exact solution reaches each of several levels (or one): one scan on log t shared by all
 /// levels, then Brent's method on log t inside each level's first bracket.
 /// </summary>
 /// <remarks>
@@ -73,6 +73,21 @@ internal static class FirstCrossings
         }
 
         return times;
+    }
+
+    /// <summary>
+    /// The first time in (0, upTo] where the quantity crosses one level from the side it starts on (the value twelve
+    /// decades before the end): upward for a quantity that starts below it, downward for one that starts above; null
+    /// when it does not.
+    /// </summary>
+    public static double? First(Func<double, double> value, double level, double upToSeconds)
+    {
+        ArgumentNullException.ThrowIfNull(value);
+        var start = Math.Exp(Math.Log(upToSeconds) - (ScanDecades * Math.Log(10)));
+        var initial = value(start);
+        return initial == level ? start
+            : initial < level ? Find(value, [level], upToSeconds)[0]
+            : Find(time => -value(time), [-level], upToSeconds)[0];
     }
 
     /// <summary>A level reached before the scan starts: step down a decade at a time until it is not, then bracket.</summary>
