@@ -12,12 +12,13 @@ namespace Layers.Core.Simulation;
 /// <remarks>
 /// u - u_final is smooth inside a layer, so the integral of its magnitude is the sum of the magnitudes of its exact
 /// integrals between its zeros. The zeros are found on the inverted solution: its values at five evenly spaced places
-/// in each layer give the sign changes, and false position with the Illinois rule, halving every third round, places
-/// them to 1e-6 of their layer, each round one inversion for all zeros at once (an error delta in a zero changes D by
-/// about |u'| delta^2). The number of sign
-/// changes of u - u_final never grows in time for a diffusion equation (Sturm's zero-number argument), and it starts
-/// at most at the interfaces; two zeros closer than a quarter of a layer, which the sampling would miss, take a
-/// narrow dip that diffusion smooths out first.
+/// in each layer (the edges from the interface values) give the sign changes; a bracket that holds a zero of the last
+/// time asked is first narrowed around it; false position with the Illinois rule, halving every fourth round, then
+/// places each zero to 1e-6 of its layer or where |u - u_final| is round-off, each round one inversion for all zeros at
+/// once (an error delta in a zero changes D by about |u'| delta^2). The number of sign changes of u - u_final never
+/// grows in time for a diffusion equation (Sturm's zero-number argument), and it starts at most at the interfaces; two
+/// zeros closer than a quarter of a layer, which the sampling would miss, take a narrow dip that diffusion smooths out
+/// first.
 /// </remarks>
 internal sealed class ExactDistance
 {
