@@ -71,7 +71,7 @@ internal static class VerifyCommand
     }
 
     private static TextTable Table(IReadOnlyList<BenchmarkResult> results) => new(
-        $"Analytic benchmarks at fixed numerics ({VerificationSuite.BenchmarkSettings})",
+        $"Analytic benchmarks at fixed numerics ({VerificationSuite.BenchmarkSettings}); \"{VerificationSuite.ExactSuffix.Trim()}\": the exact method, held to {VerificationSuite.ExactTolerance:0e0}",
         ["benchmark", "source", "quantity", "analytic", "computed", "rel. error", "verdict"],
         results.Select(result => (IReadOnlyList<string>)
         [

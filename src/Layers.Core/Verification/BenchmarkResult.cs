@@ -5,7 +5,7 @@ namespace Layers.Core.Verification;
 /// <param name="Source">The published source of the analytic value (book, chapter, equation).</param>
 /// <param name="Quantity">What is compared, with its unit.</param>
 /// <param name="Analytic">The analytic value.</param>
-/// <param name="Computed">The value the solver computed at <see cref="VerificationSuite.BenchmarkNumerics"/>.</param>
+/// <param name="Computed">The value the solver computed: by the finite volumes at <see cref="VerificationSuite.BenchmarkNumerics"/>, or by the exact method where the name ends with <see cref="VerificationSuite.ExactSuffix"/>.</param>
 /// <param name="Tolerance">Largest accepted relative error.</param>
 /// <param name="Curve">Computed and analytic values over time, for an overlay plot, when the benchmark has one.</param>
 public sealed record BenchmarkResult(

@@ -21,119 +21,126 @@ public static class VerificationSuite
     public static IReadOnlyList<BenchmarkResult> Run(CancellationToken cancellation = default)
     {
         var results = new List<BenchmarkResult>();
-        results.AddRange(PlaneSheet(cancellation));
-        foreach (var (alpha, k) in new[] { (0.1, 1000.0), (1.0, 1.0), (10.0, 1.0) })
+        foreach (var pass in new[] { FiniteVolumes, Exact })
         {
-            results.Add(LimitedVolume(alpha, k, cancellation));
+            results.AddRange(PlaneSheet(pass, cancellation));
+            foreach (var (alpha, k) in new[] { (0.1, 1000.0), (1.0, 1.0), (10.0, 1.0) })
+            {
+                results.Add(LimitedVolume(pass, alpha, k, cancellation));
+            }
+
+            results.AddRange(Membrane(pass, cancellation));
+            results.Add(SemiInfiniteMedia(pass, cancellation));
+            results.Add(SteadyThreeLayers(pass, cancellation));
+            results.Add(ClosedEquilibrium(pass, cancellation));
+            results.Add(Laminate(pass, cancellation));
+            if (pass == FiniteVolumes)
+            {
+                results.AddRange(MultiLayerStacks(cancellation));
+            }
         }
 
-        results.AddRange(Membrane(cancellation));
-        results.Add(SemiInfiniteMedia(cancellation));
-        results.Add(SteadyThreeLayers(cancellation));
-        results.Add(ClosedEquilibrium(cancellation));
-        results.Add(Laminate(cancellation));
-        results.AddRange(MultiLayerStacks(cancellation));
         return results;
     }
 
-    private static IEnumerable<BenchmarkResult> PlaneSheet(CancellationToken cancellation)
+    private static IEnumerable<BenchmarkResult> PlaneSheet(Pass pass, CancellationToken cancellation)
     {
         const double thickness = 100e-6, diffusivity = 1e-13, c0 = 900;
         var scale = thickness * thickness / diffusivity;
-        var result = Simulator.Run(Case(new ClosedFace(), new BathFace("sink", 0, 1, null), 0.5 * scale, [Layer("sheet", thickness, diffusivity, 1, c0)]), cancellation);
+        var result = Simulator.Run(Case(pass, new ClosedFace(), new BathFace("sink", 0, 1, null), 0.5 * scale, [Layer("sheet", thickness, diffusivity, 1, c0)]), cancellation);
         double Released(StateSample sample) => sample.Right!.TransferredIntoMediumPerArea / (c0 * thickness);
         var curve = Curve(result, "D t / L^2 [-]", "M_t / M_0 [-]", scale, Released, t => PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, t));
         yield return new BenchmarkResult(
-            "plane sheet into a perfect sink", $"{Crank}, eq. 4.18", "fraction released at D t/L^2 = 0.5",
-            PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, 0.5 * scale), Released(result.Reports[^1].Sample), DefaultTolerance, curve);
+            "plane sheet into a perfect sink" + pass.Suffix, $"{Crank}, eq. 4.18", "fraction released at D t/L^2 = 0.5",
+            PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, 0.5 * scale), Released(result.Reports[^1].Sample), pass.Tolerance, curve);
         var half = Bisect(t => PlaneSheetIntoSink.FractionReleased(diffusivity, thickness, t) - 0.5, 0, scale);
         yield return new BenchmarkResult(
-            "plane sheet into a perfect sink", $"{Crank}, eq. 4.18 solved for 50 %", "time to release half, s",
-            half, result.FinalState.System.Half!.Value, DefaultTolerance);
+            "plane sheet into a perfect sink" + pass.Suffix, $"{Crank}, eq. 4.18 solved for 50 %", "time to release half, s",
+            half, result.FinalState.System.Half!.Value, pass.Tolerance);
     }
 
-    private static BenchmarkResult LimitedVolume(double alpha, double kSheet, CancellationToken cancellation)
+    private static BenchmarkResult LimitedVolume(Pass pass, double alpha, double kSheet, CancellationToken cancellation)
     {
         const double thickness = 50e-6, diffusivity = 4e-14, c0 = 920;
         var volumePerArea = alpha * kSheet * thickness;
         var scale = thickness * thickness / diffusivity;
-        var simulation = Case(new ClosedFace(), new CompartmentFace("solution", volumePerArea, 1, 1, 0, null), 0.3 * scale, [Layer("sheet", thickness, diffusivity, kSheet, c0)]);
+        var simulation = Case(pass, new ClosedFace(), new CompartmentFace("solution", volumePerArea, 1, 1, 0, null), 0.3 * scale, [Layer("sheet", thickness, diffusivity, kSheet, c0)]);
         var result = Simulator.Run(simulation, cancellation);
         double Analytic(double t) => PlaneSheetIntoLimitedVolume.TransferredMassPerArea(diffusivity, thickness, c0, volumePerArea, kSheet, t);
         var curve = Curve(result, "D t / L^2 [-]", "mass in solution [kg/m2]", scale, sample => sample.Right!.TransferredIntoMediumPerArea, Analytic);
         return new BenchmarkResult(
-            FormattableString.Invariant($"plane sheet in a limited volume, alpha {alpha}, K {kSheet}"),
+            FormattableString.Invariant($"plane sheet in a limited volume, alpha {alpha}, K {kSheet}") + pass.Suffix,
             $"{Crank}, eq. 4.37 (from memory), roots of tan q = -alpha q",
             "mass in the solution at D t/L^2 = 0.3, kg/m2",
-            Analytic(0.3 * scale), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, DefaultTolerance, curve);
+            Analytic(0.3 * scale), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, pass.Tolerance, curve);
     }
 
-    private static IEnumerable<BenchmarkResult> Membrane(CancellationToken cancellation)
+    private static IEnumerable<BenchmarkResult> Membrane(Pass pass, CancellationToken cancellation)
     {
         const double thickness = 20e-6, diffusivity = 3e-13, k = 4, donor = 5;
         var scale = thickness * thickness / diffusivity;
-        var result = Simulator.Run(Case(new BathFace("source", donor, 1, null), new BathFace("sink", 0, 1, null), 2 * scale, [Layer("membrane", thickness, diffusivity, k, 0)]), cancellation);
+        var result = Simulator.Run(Case(pass, new BathFace("source", donor, 1, null), new BathFace("sink", 0, 1, null), 2 * scale, [Layer("membrane", thickness, diffusivity, k, 0)]), cancellation);
         double Analytic(double t) => MembraneTimeLag.CumulativeMassPerArea(diffusivity, thickness, k, donor, t);
         var curve = Curve(result, "D t / L^2 [-]", "Q [kg/m2]", scale, sample => sample.Right!.TransferredIntoMediumPerArea, Analytic);
         yield return new BenchmarkResult(
-            "membrane between a source and a sink", $"Daynes-Barrer; {Crank}, eq. 4.24a (from memory)", "cumulative amount Q at D t/L^2 = 2, kg/m2",
-            Analytic(2 * scale), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, DefaultTolerance, curve);
+            "membrane between a source and a sink" + pass.Suffix, $"Daynes-Barrer; {Crank}, eq. 4.24a (from memory)", "cumulative amount Q at D t/L^2 = 2, kg/m2",
+            Analytic(2 * scale), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, pass.Tolerance, curve);
         yield return new BenchmarkResult(
-            "membrane between a source and a sink", $"Daynes-Barrer; {Crank}, eq. 4.24c (from memory)", "lag time L^2/(6D), s",
-            MembraneTimeLag.LagTimeSeconds(diffusivity, thickness), result.Permeation!.LagTimeSeconds ?? double.NaN, DefaultTolerance);
+            "membrane between a source and a sink" + pass.Suffix, $"Daynes-Barrer; {Crank}, eq. 4.24c (from memory)", "lag time L^2/(6D), s",
+            MembraneTimeLag.LagTimeSeconds(diffusivity, thickness), result.Permeation!.LagTimeSeconds ?? double.NaN, pass.Tolerance);
     }
 
-    private static BenchmarkResult SemiInfiniteMedia(CancellationToken cancellation)
+    private static BenchmarkResult SemiInfiniteMedia(Pass pass, CancellationToken cancellation)
     {
         const double d1 = 1e-13, d2 = 4e-13, k = 5, c0 = 300, thickness = 400e-6;
         var time = Math.Pow(thickness / 8, 2) / d2;
-        var result = Simulator.Run(Case(new ClosedFace(), new ClosedFace(), time, [Layer("first", thickness, d1, k, c0), Layer("second", thickness, d2, 1, 0)]), cancellation);
+        var result = Simulator.Run(Case(pass, new ClosedFace(), new ClosedFace(), time, [Layer("first", thickness, d1, k, c0), Layer("second", thickness, d2, 1, 0)]), cancellation);
         return new BenchmarkResult(
-            "two semi-infinite media with a partition coefficient", $"{Crank}, ch. 3, composite media (section from memory); Carslaw and Jaeger, Conduction of Heat in Solids, 2nd ed., ch. 2",
+            "two semi-infinite media with a partition coefficient" + pass.Suffix, $"{Crank}, ch. 3, composite media (section from memory); Carslaw and Jaeger, Conduction of Heat in Solids, 2nd ed., ch. 2",
             "mass transferred into the second medium, kg/m2",
-            TwoSemiInfiniteMedia.MassPerAreaTransferred(d1, d2, k, c0, time), result.Reports[^1].Sample.LayerMassPerArea[1], DefaultTolerance);
+            TwoSemiInfiniteMedia.MassPerAreaTransferred(d1, d2, k, c0, time), result.Reports[^1].Sample.LayerMassPerArea[1], pass.Tolerance);
     }
 
-    private static BenchmarkResult SteadyThreeLayers(CancellationToken cancellation)
+    private static BenchmarkResult SteadyThreeLayers(Pass pass, CancellationToken cancellation)
     {
         var layers = new[] { Layer("outer", 30e-6, 2e-12, 0.05, 0), Layer("core", 200e-6, 5e-11, 20, 0), Layer("inner", 10e-6, 1e-13, 3, 0) };
         double kLeft = 1, kRight = 0.5, filmLeft = 2e-6, filmRight = 5e-7, cLeft = 8, cRight = 0.5;
         var total = (1 / (filmLeft * kLeft)) + (1 / (filmRight * kRight)) + layers.Sum(layer => layer.ResistanceSecondsPerMeter);
         var storage = layers.Sum(layer => layer.ThicknessMeters * layer.PartitionCoefficient);
-        var simulation = Case(new BathFace("left", cLeft, kLeft, filmLeft), new BathFace("right", cRight, kRight, filmRight), 40 * total * storage, layers);
+        var simulation = Case(pass, new BathFace("left", cLeft, kLeft, filmLeft), new BathFace("right", cRight, kRight, filmRight), 40 * total * storage, layers);
         var result = Simulator.Run(simulation, cancellation);
         return new BenchmarkResult(
-            "three layers with films between two baths, steady state",
+            "three layers with films between two baths, steady state" + pass.Suffix,
             $"series-resistance (two-resistance) law; {Crank}, ch. 12 (section from memory); Cussler, Diffusion, 3rd ed., ch. 13",
             "steady flux, kg/(m2 s)",
-            ((cLeft / kLeft) - (cRight / kRight)) / total, result.Permeation!.FluxAtEndKgPerSquareMeterSecond, DefaultTolerance);
+            ((cLeft / kLeft) - (cRight / kRight)) / total, result.Permeation!.FluxAtEndKgPerSquareMeterSecond, pass.Tolerance);
     }
 
-    private static BenchmarkResult ClosedEquilibrium(CancellationToken cancellation)
+    private static BenchmarkResult ClosedEquilibrium(Pass pass, CancellationToken cancellation)
     {
         var layers = new[] { Layer("a", 20e-6, 1e-12, 0.01, 0), Layer("b", 60e-6, 3e-13, 1, 500), Layer("c", 5e-6, 1e-14, 100, 20) };
         var compartment = new CompartmentFace("medium", 2e-3, 1, 0.5, 1, null);
         var capacity = layers.Sum(layer => layer.ThicknessMeters * layer.PartitionCoefficient) + (2e-3 * 0.5);
         var mass = layers.Sum(layer => layer.InitialMassPerArea) + compartment.InitialMassPerArea;
         var slowest = layers.Max(layer => layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond);
-        var result = Simulator.Run(Case(new ClosedFace(), compartment, 40 * slowest, layers), cancellation);
+        var result = Simulator.Run(Case(pass, new ClosedFace(), compartment, 40 * slowest, layers), cancellation);
         return new BenchmarkResult(
-            "closed system of three layers and a compartment",
+            "closed system of three layers and a compartment" + pass.Suffix,
             $"partition equilibrium with conservation of mass; {Crank}, eq. 4.37 as t -> infinity (from memory)",
             "compartment concentration at equilibrium, kg/m3",
-            0.5 * mass / capacity, result.Reports[^1].Sample.Right!.ConcentrationKgPerCubicMeter, DefaultTolerance);
+            0.5 * mass / capacity, result.Reports[^1].Sample.Right!.ConcentrationKgPerCubicMeter, pass.Tolerance);
     }
 
-    private static BenchmarkResult Laminate(CancellationToken cancellation)
+    private static BenchmarkResult Laminate(Pass pass, CancellationToken cancellation)
     {
         var layers = new[] { Layer("first", 30e-6, 1e-12, 1, 0), Layer("second", 60e-6, 1e-13, 10, 0) };
         var expected = LaminateTimeLag.Seconds(new LayerStack(layers));
-        var result = Simulator.Run(Case(new BathFace("source", 1, 1, null), new BathFace("sink", 0, 1, null), 3 * expected, layers), cancellation);
+        var result = Simulator.Run(Case(pass, new BathFace("source", 1, 1, null), new BathFace("sink", 0, 1, null), 3 * expected, layers), cancellation);
         return new BenchmarkResult(
-            "two-layer laminate between a source and a sink",
+            "two-layer laminate between a source and a sink" + pass.Suffix,
             "Frisch, J. Phys. Chem. 61 (1957) 93, time-lag integral (from memory); " + Crank + ", ch. 12, laminates",
             "lag time, s",
-            expected, result.Permeation!.LagTimeSeconds ?? double.NaN, DefaultTolerance);
+            expected, result.Permeation!.LagTimeSeconds ?? double.NaN, pass.Tolerance);
     }
 
     /// <summary>
@@ -215,7 +222,9 @@ public static class VerificationSuite
     private static Layer Layer(string name, double thickness, double diffusivity, double k, double c0)
         => new(name, thickness, diffusivity, k, c0);
 
-    private static SimulationCase Case(FaceCondition left, FaceCondition right, double duration, Layer[] layers) => new()
+    private static SimulationCase Case(FaceCondition left, FaceCondition right, double duration, Layer[] layers) => Case(FiniteVolumes, left, right, duration, layers);
+
+    private static SimulationCase Case(Pass pass, FaceCondition left, FaceCondition right, double duration, Layer[] layers) => new()
     {
         Title = "verification",
         Stack = new LayerStack(layers),
@@ -223,8 +232,27 @@ public static class VerificationSuite
         Right = right,
         DurationSeconds = duration,
         ReportTimesSeconds = [duration],
-        Numerics = BenchmarkNumerics,
+        Numerics = pass.Numerics,
     };
+
+    /// <summary>The finite volumes at <see cref="BenchmarkNumerics"/>, held to <see cref="DefaultTolerance"/>.</summary>
+    private static Pass FiniteVolumes => new(BenchmarkNumerics, string.Empty, DefaultTolerance);
+
+    /// <summary>
+    /// The exact method in the Laplace domain (<c>numerics.method</c> "laplace", what "auto" chooses for these cases),
+    /// held to <see cref="ExactTolerance"/>.
+    /// </summary>
+    private static Pass Exact => new(
+        NumericsSettings.Default with { Method = SolutionMethod.Laplace, ErrorControl = ErrorControl.None }, ExactSuffix, ExactTolerance);
+
+    /// <summary>Relative tolerance of the exact method's benchmarks: what issue #19 asks of the method.</summary>
+    public const double ExactTolerance = 1e-8;
+
+    /// <summary>What the name of a benchmark solved by the exact method ends with.</summary>
+    public const string ExactSuffix = " (exact method)";
+
+    /// <summary>A run of the benchmarks: the numerics, what the names end with, the tolerance.</summary>
+    private sealed record Pass(NumericsSettings Numerics, string Suffix, double Tolerance);
 
     /// <summary>
     /// The numerics every benchmark runs at: 240 shared cells and step tolerance 1e-6, the settings the published
