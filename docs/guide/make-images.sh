@@ -14,4 +14,4 @@ for demo in laminate-fatty-food patch-on-skin diffusion-cell-membrane two-liquid
 done
 dotnet run --project src/Layers.Cli -- fit cases/membrane-time-lag.json --data cases/membrane-time-lag-measured.csv \
   --estimate '$.layers[0].diffusionCoefficient' --estimate '$.layers[0].partitionCoefficient' --out "$out" --quiet
-cp "$out/membrane-time-lag-fit/fit.png" docs/guide/membrane-time-lag-fit.png
+cp "$out/membrane-time-lag.fit/fit.png" docs/guide/membrane-time-lag-fit.png

@@ -37,7 +37,7 @@ internal static class FitCommand
         face.AcceptOnlyFromAmong("left", "right");
         var outputRoot = new Option<string>("--out", "-o")
         {
-            Description = "Folder that receives the sub-folder <case name>-fit.",
+            Description = "Folder that receives the sub-folder <case name>.fit.",
             DefaultValueFactory = _ => "results",
         };
         var quiet = new Option<bool>("--quiet", "-q") { Description = "Print nothing on success (errors still go to stderr)." };
@@ -85,7 +85,7 @@ internal static class FitCommand
             return ExitCodes.InvalidInput;
         }
 
-        var request = new CaseRunRequest(settings.CasePath, Path.GetFileNameWithoutExtension(settings.CasePath) + "-fit", settings.OutputRoot);
+        var request = new CaseRunRequest(settings.CasePath, Path.GetFileNameWithoutExtension(settings.CasePath) + ".fit", settings.OutputRoot);
         var run = StudyRun.Finish(request, token => CaseFitter.Run(prepared, token), (outcome, token) => Files(outcome.Result!, settings.Plots, token), cancellation);
         if (CaseOutcomeReport.Failure(settings.CasePath, run.Run, error) is { } failed)
         {

@@ -132,7 +132,7 @@ public sealed class StudyRunTests
         cancellation.Cancel();
 
         var fit = CaseFitter.Run(prepared, cancellation.Token);
-        var run = StudyRun.Finish(new CaseRunRequest(casePath, "membrane-time-lag-fit", temp.Path), _ => fit, (_, _) => new Dictionary<string, byte[]> { ["fit.json"] = [1] }, CancellationToken.None);
+        var run = StudyRun.Finish(new CaseRunRequest(casePath, "membrane-time-lag.fit", temp.Path), _ => fit, (_, _) => new Dictionary<string, byte[]> { ["fit.json"] = [1] }, CancellationToken.None);
 
         Assert.Equal(StudyStatus.Cancelled, fit.Status);
         Assert.Null(fit.Result);

@@ -129,7 +129,7 @@ public sealed partial class FoodContactCommandsTests
         Assert.Equal(ExitCodes.Success, uncertainty.ExitCode);
         Assert.Equal(ExitCodes.Success, fit.ExitCode);
 
-        foreach (var file in new[] { temp.Combine("food-study.uncertainty", "uncertainty.json"), temp.Combine("food-fit-fit", "fit.json") })
+        foreach (var file in new[] { temp.Combine("food-study.uncertainty", "uncertainty.json"), temp.Combine("food-fit.fit", "fit.json") })
         {
             using var json = JsonDocument.Parse(File.ReadAllText(file));
             Assert.Contains(FoodContactTables.Caution, json.RootElement.GetProperty("caution").GetString(), StringComparison.Ordinal);
@@ -149,7 +149,7 @@ public sealed partial class FoodContactCommandsTests
             "-e", "$.layers[0].diffusionCoefficient", "--no-plots", "--out", temp.Path);
 
         Assert.DoesNotContain(FoodContactTables.Caution, outcome.Output, StringComparison.Ordinal);
-        using var json = JsonDocument.Parse(File.ReadAllText(temp.Combine("membrane-time-lag-fit", "fit.json")));
+        using var json = JsonDocument.Parse(File.ReadAllText(temp.Combine("membrane-time-lag.fit", "fit.json")));
         Assert.Empty(json.RootElement.GetProperty("notes").EnumerateArray());
     }
 

@@ -19,7 +19,7 @@ public sealed class FitCommandTests
         var outcome = CliRun.Invoke("fit", Case, "--data", Data, "-e", "$.layers[0].diffusionCoefficient", "-e", "$.layers[0].partitionCoefficient", "--out", temp.Path);
 
         Assert.Equal(ExitCodes.Success, outcome.ExitCode);
-        var folder = temp.Combine("membrane-time-lag-fit");
+        var folder = temp.Combine("membrane-time-lag.fit");
         Assert.All(new[] { "fit.json", "fit-points.csv", "fit-curve.csv", "fitted-case.json", "fit.png" }, name => Assert.True(File.Exists(Path.Combine(folder, name)), name));
         Assert.Contains("95 % interval", outcome.Output);
         Assert.Contains("Estimated inputs hold for this model", outcome.Output);
