@@ -33,38 +33,38 @@ public static class Simulator
         if (choice.Method == SolutionMethod.Laplace)
         {
             var (exact, fallback) = RunExact(simulation, cancellation);
-            if (fallback is null && exact is not null)
+            if (exact is not null)
             {
                 var check = checkExactByFiniteVolumes && exact.Completed && exact.NumericalError is { Unavailable: null }
                     ? FiniteVolumeCheck.Of(exact, solved => Solve(solved, cancellation))
                     : null;
-                return exact with { MethodReason = choice.Reason, CrossCheck = check };
+
+                // A run cancelled while the finite volumes check it is cancelled, not reported without its check.
+                return cancellation.IsCancellationRequested && check is not null
+                    ? exact with { Statistics = exact.Statistics with { StopReason = StopReason.Cancelled }, FailureReason = "the run was cancelled", MethodReason = choice.Reason }
+                    : exact with { MethodReason = choice.Reason, CrossCheck = check };
             }
 
-            choice = new MethodChoice(SolutionMethod.FiniteVolume, fallback!);
+            choice = new MethodChoice(SolutionMethod.FiniteVolume, fallback);
         }
 
         return RunFiniteVolumes(simulation, cancellation) with { MethodReason = choice.Reason };
     }
 
     /// <summary>
-    /// The exact method's run and, under "auto", why it is not kept (null to keep it): it failed its own checks, missed
-    /// the accuracy, or met a value it could not represent (an exception of arithmetic or arguments deep in an extreme
-    /// stack), in which case the finite volumes take over instead of the run failing.
+    /// The exact method's run, or, under "auto", null with why it is not kept: it failed its own checks, missed the
+    /// accuracy, or met a value it could not represent (an exception of arithmetic or arguments deep in an extreme stack),
+    /// in which case the finite volumes take over instead of the run failing.
     /// </summary>
-    private static (SimulationResult? Exact, string? Fallback) RunExact(SimulationCase simulation, CancellationToken cancellation)
+    private static (SimulationResult? Exact, string Fallback) RunExact(SimulationCase simulation, CancellationToken cancellation)
     {
-        if (simulation.Numerics.Method == SolutionMethod.Laplace)
-        {
-            return (ExactEstimation.Run(simulation, cancellation), null);
-        }
-
+        var auto = simulation.Numerics.Method == SolutionMethod.Auto;
         try
         {
             var exact = ExactEstimation.Run(simulation, cancellation);
-            return (exact, ExactEstimation.WhyNotKept(exact));
+            return (auto ? ExactEstimation.WhyNotKept(exact) : null) is { } reason ? (null, reason) : (exact, string.Empty);
         }
-        catch (Exception problem) when (problem is ArithmeticException or ArgumentException or InvalidOperationException)
+        catch (Exception problem) when (auto && problem is ArithmeticException or ArgumentException or InvalidOperationException)
         {
             return (null, "the exact method could not solve this case (" + problem.Message + ")");
         }

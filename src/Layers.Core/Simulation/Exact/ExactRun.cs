@@ -36,7 +36,7 @@ internal static class ExactRun
             samples.Add(sample);
             if (OutputSchedule.IsReportTime(simulation, time))
             {
-                reports.Add(sampler.Report(sample, instant.Snapshot));
+                reports.Add(sampler.Report(sample, instant));
             }
         }
 
@@ -90,7 +90,7 @@ internal static class ExactRun
             samples.Add(sample);
             if (OutputSchedule.IsReportTime(simulation, time))
             {
-                reports.Add(sampler.Report(sample, instant.Snapshot));
+                reports.Add(sampler.Report(sample, instant));
             }
         }
 

@@ -19,6 +19,8 @@ internal sealed class ExactSampler
     private readonly ExactDistance _distance;
     private readonly double _initialMass;
     private readonly double[] _centres;
+    private readonly double[] _leftEdges;
+    private readonly (int Layer, double DepthMeters)[] _centrePlaces;
     private readonly double[] _state;
 
     private ExactSampler(DiscreteModel model, LaplaceSolution solution, Observables observables, FinalStateTarget final)
@@ -30,6 +32,8 @@ internal sealed class ExactSampler
         _distance = new ExactDistance(model, final);
         _initialMass = model.System.TotalMass(model.InitialState);
         _centres = model.Grid.CentresMeters.ToArray();
+        _leftEdges = LeftEdges(model.Case.Stack);
+        _centrePlaces = [.. _centres.Select((centre, cell) => (model.Grid.LayerOfCell[cell], centre - _leftEdges[model.Grid.LayerOfCell[cell]]))];
         _state = (double[])model.InitialState.Clone();
         Final = final;
     }
@@ -122,10 +126,11 @@ internal sealed class ExactSampler
     }
 
     /// <summary>The full result at a report time: the sample, the exact profiles and the named depths.</summary>
-    public ReportPoint Report(StateSample sample, LaplaceSnapshot snapshot)
+    /// <remarks>Every value is inverted from the stack already solved on the instant's contour.</remarks>
+    public ReportPoint Report(StateSample sample, LaplaceInstant instant)
     {
-        var time = snapshot.TimeSeconds;
-        var inside = _solution.ConcentrationsAt(_centres, time);
+        var snapshot = instant.Snapshot;
+        var inside = Concentrations(instant, _centrePlaces);
         var grid = _model.Grid;
         var stack = _case.Stack;
         var profiles = new List<LayerProfile>(stack.Count);
@@ -149,14 +154,14 @@ internal sealed class ExactSampler
             profiles.Add(new LayerProfile(layer, stack.Layers[layer].Name, positions, concentrations));
         }
 
-        return new ReportPoint(sample, profiles) { Depths = Depths(profiles, snapshot) };
+        return new ReportPoint(sample, profiles) { Depths = Depths(profiles, instant) };
     }
 
     /// <summary>
     /// The named depths, one reading per layer they touch (as the finite volumes report them), each from the exact
     /// solution: on a layer's edge the interface value of that side, inside it the inverted profile.
     /// </summary>
-    private IReadOnlyList<DepthReading> Depths(List<LayerProfile> profiles, LaplaceSnapshot snapshot)
+    private IReadOnlyList<DepthReading> Depths(List<LayerProfile> profiles, LaplaceInstant instant)
     {
         var readings = DepthReadings.Read(profiles, _case.ReportDepthsMeters);
         if (readings.Count == 0)
@@ -164,7 +169,9 @@ internal sealed class ExactSampler
             return readings;
         }
 
-        var inside = _solution.ConcentrationsAt([.. readings.Select(reading => reading.DepthMeters)], snapshot.TimeSeconds);
+        var snapshot = instant.Snapshot;
+        var inside = Concentrations(instant, [.. readings.Select(reading => (reading.LayerIndex, Math.Clamp(
+            reading.DepthMeters - _leftEdges[reading.LayerIndex], 0, _case.Stack.Layers[reading.LayerIndex].ThicknessMeters)))]);
         var slack = DepthReadings.OnEdgeRelative * _case.Stack.TotalThicknessMeters;
         return [.. readings.Select((reading, r) =>
         {
@@ -186,5 +193,29 @@ internal sealed class ExactSampler
             face.ConcentrationKgPerCubicMeter,
             face.FluxIntoMediumKgPerSquareMeterSecond,
             CompartmentFraction(side, snapshot));
+    }
+
+    /// <summary>c = K u at places given by layer and depth inside it.</summary>
+    private double[] Concentrations(LaplaceInstant instant, IReadOnlyList<(int Layer, double DepthMeters)> places)
+    {
+        var values = instant.ContinuousValuesAt(places);
+        for (var i = 0; i < values.Length; i++)
+        {
+            values[i] *= _case.Stack.Layers[places[i].Layer].PartitionCoefficient;
+        }
+
+        return values;
+    }
+
+    /// <summary>Each layer's left edge from the left face of the stack, summed in order as the exact solution locates depths.</summary>
+    private static double[] LeftEdges(LayerStack stack)
+    {
+        var edges = new double[stack.Count];
+        for (var layer = 1; layer < stack.Count; layer++)
+        {
+            edges[layer] = edges[layer - 1] + stack.Layers[layer - 1].ThicknessMeters;
+        }
+
+        return edges;
     }
 }
