@@ -196,7 +196,7 @@ internal sealed class ExactSampler
     }
 
     /// <summary>c = K u at places given by layer and depth inside it.</summary>
-    private double[] Concentrations(LaplaceInstant instant, IReadOnlyList<(int Layer, double DepthMeters)> places)
+    private double[] Concentrations(LaplaceInstant instant, (int Layer, double DepthMeters)[] places)
     {
         var values = instant.ContinuousValuesAt(places);
         for (var i = 0; i < values.Length; i++)
