@@ -58,15 +58,18 @@ public static class BatchPeopleTable
             [.. cells.Select(row => (IReadOnlyList<string>)[.. kept.Select(column => row[column])])]);
     }
 
-    /// <summary>"Batch: 50 cases, 50 succeeded, 20 exceeded the specific migration limit".</summary>
-    public static string Title(IReadOnlyList<BatchRow> rows)
+    /// <summary>"Batch: 50 cases, 50 succeeded, 20 exceeded the specific migration limit": the console's title.</summary>
+    public static string Title(IReadOnlyList<BatchRow> rows) => $"Batch: {Counts(rows)}";
+
+    /// <summary>"50 cases, 50 succeeded, 20 exceeded the specific migration limit": the cases by status and, when some case has a limit, how many exceeded it.</summary>
+    public static string Counts(IReadOnlyList<BatchRow> rows)
     {
         ArgumentNullException.ThrowIfNull(rows);
         var counts = string.Join(", ", Enum.GetValues<BatchStatus>()
             .Select(status => (status, count: rows.Count(row => row.Status == status)))
             .Where(pair => pair.count > 0)
             .Select(pair => FormattableString.Invariant($"{pair.count} {BatchColumns.StatusName(pair.status)}")));
-        return FormattableString.Invariant($"Batch: {rows.Count} cases, {counts}{BatchColumns.ExceededCount(rows)}");
+        return FormattableString.Invariant($"{rows.Count} cases, {counts}{BatchColumns.ExceededCount(rows)}");
     }
 
     private static double? NotFood(BatchRow row, double? siValue, Units.UnitDefinition unit) =>

@@ -10,7 +10,7 @@ internal static class BatchSummaryMarkdown
     {
         var table = BatchPeopleTable.Of(rows, details: true);
         var text = new StringBuilder("# Batch summary\n\n");
-        text.Append(table.Title["Batch: ".Length..]).Append(".\n\n");
+        text.Append(BatchPeopleTable.Counts(rows)).Append(".\n\n");
         text.Append("Results in the units named in the column headers (summary.csv and summary.json also hold them in SI units); ")
             .Append("solve times are wall-clock seconds and vary from run to run ")
             .Append("(summary.csv and summary.json leave them out so that they stay identical between runs).\n\n");

@@ -94,6 +94,19 @@ public sealed class BatchColumnsAndInputsTests
     }
 
     [Fact]
+    public void The_console_table_never_cuts_a_case_name()
+    {
+        using var temp = new TempFolder();
+        const string name = "a-case-name-long-enough-that-a-narrow-column-would-have-cut-it-in-two";
+        temp.WriteFile(Path.Combine("in", $"{name}.json"), BatchCases.Membrane);
+        temp.WriteFile(Path.Combine("in", "short.json"), BatchCases.Membrane);
+
+        var outcome = CliRun.Invoke("run", temp.Combine("in"), "--out", temp.Combine("out"), "--no-plots");
+
+        Assert.Contains($"  {name}  ", outcome.Output, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Docs_list_every_fixed_column_of_summary_csv()
     {
         var docs = File.ReadAllText(RepoRoot.File("docs", "outputs.md"));
