@@ -42,6 +42,10 @@ internal static class ConsoleTables
         }
 
         table.Columns[0].LeftAligned();
+        foreach (var column in table.Columns.Take(source.WholeColumns))
+        {
+            column.NoWrap();
+        }
         foreach (var row in source.Rows)
         {
             table.AddRow(row.Select(cell => (Spectre.Console.Rendering.IRenderable)new Text(cell)).ToArray());

@@ -73,6 +73,11 @@ internal static class BatchRun
         else if (!settings.Quiet)
         {
             ConsoleTables.Write(output, BatchTable.Of(rows));
+            if (!cancelled && BatchTable.ExitCodeLine(rows) is { } why)
+            {
+                output.WriteLine(why);
+            }
+
             output.WriteLine($"summary: {Path.Combine(settings.OutputRoot, BatchSummaryFiles.Markdown)}");
             output.WriteLine();
             output.WriteLine(CautionText.Paragraph);

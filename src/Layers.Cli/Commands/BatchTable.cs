@@ -1,41 +1,55 @@
-using System.Globalization;
 using Layers.Core.Batch;
 using Layers.Core.Reports;
-using Layers.Core.Results;
 
 namespace Layers.Cli.Commands;
 
 /// <summary>
-/// The batch summary as a console table: the columns of summary.csv that fit a screen. The messages of cases that did
-/// not succeed go to stderr, one line each, where they do not wrap into the table.
+/// The batch summary as a console table: the table for people of summary.md without its detail columns. Case names
+/// and statuses never wrap; when every case is a sub-case of one sweep, the sweep's name is said once in the header
+/// rather than on every row. The messages of cases that did not succeed go to stderr, one line each, where they do
+/// not wrap into the table.
 /// </summary>
 internal static class BatchTable
 {
     public static TextTable Of(IReadOnlyList<BatchRow> rows)
     {
-        var counts = string.Join(", ", Enum.GetValues<BatchStatus>()
-            .Select(status => (status, count: rows.Count(row => row.Status == status)))
-            .Where(pair => pair.count > 0)
-            .Select(pair => FormattableString.Invariant($"{pair.count} {BatchColumns.StatusName(pair.status)}")));
-        var table = rows.Select(row => (IReadOnlyList<string>)
-        [
-            row.Name,
-            BatchColumns.StatusName(row.Status),
-            .. NamedResults.InBatchSummary.Select(result => Number(row.Results?.Pick(result))),
-        ]).ToList();
-        string[] headers =
-        [
-            "case", "status",
-            .. NamedResults.InBatchSummary.Select(result => $"{NamedResults.Heading(result)} [{NamedResults.SiUnit(result).Symbol}]"),
-        ];
-        // Result columns that no case fills (no bath, no permeation ...) only take width from the others.
-        var kept = Enumerable.Range(0, headers.Length).Where(column => column < 2 || table.Any(row => row[column].Length > 0)).ToList();
-        return new TextTable(
-            FormattableString.Invariant($"Batch: {rows.Count} cases, {counts}"),
-            kept.Select(column => headers[column]).ToList(),
-            table.Select(row => (IReadOnlyList<string>)kept.Select(column => row[column]).ToList()).ToList());
+        var table = BatchPeopleTable.Of(rows, details: false) with { WholeColumns = 2 };
+        var prefix = SweepPrefix(rows);
+        return prefix.Length == 0
+            ? table
+            : table with
+            {
+                Headers = [$"case ({prefix}*)", .. table.Headers.Skip(1)],
+                Rows = [.. table.Rows.Select(row => (IReadOnlyList<string>)[row[0][prefix.Length..], .. row.Skip(1)])],
+            };
     }
 
-    private static string Number(double? value) =>
-        value is { } number && double.IsFinite(number) ? number.ToString("G4", CultureInfo.InvariantCulture) : string.Empty;
+    /// <summary>
+    /// Why the batch ends with its exit code, when not 0: the cases that did not succeed (code 2) and those over their
+    /// limit (code 1); null for a batch that exits 0.
+    /// </summary>
+    public static string? ExitCodeLine(IReadOnlyList<BatchRow> rows)
+    {
+        var problems = rows.Count(row => row.Status is BatchStatus.Invalid or BatchStatus.Failed or BatchStatus.Cancelled);
+        var exceeded = rows.Count(row => row.Limit?.Exceeded == true);
+        var over = FormattableString.Invariant($"{exceeded} {Cases(exceeded)} exceeded the specific migration limit");
+        return problems > 0
+            ? FormattableString.Invariant($"exit code {ExitCodes.InvalidInput}: {problems} {Cases(problems)} did not succeed (why: on stderr, and in summary.md)") + (exceeded > 0 ? $"; {over}" : string.Empty)
+            : exceeded > 0 ? FormattableString.Invariant($"exit code {ExitCodes.LimitExceeded}: {over} (verdict column)")
+            : null;
+    }
+
+    /// <summary>"sweep." when two or more rows are all sub-cases of one sweep file "sweep.json" (named "sweep.NN_..."); else empty.</summary>
+    internal static string SweepPrefix(IReadOnlyList<BatchRow> rows)
+    {
+        if (rows.Count < 2 || rows.Any(row => row.Parameters.Count == 0) || rows.Select(row => row.File).Distinct(StringComparer.Ordinal).Count() > 1)
+        {
+            return string.Empty;
+        }
+
+        var prefix = Path.GetFileNameWithoutExtension(rows[0].File) + ".";
+        return rows.All(row => row.Name.StartsWith(prefix, StringComparison.Ordinal) && row.Name.Length > prefix.Length) ? prefix : string.Empty;
+    }
+
+    private static string Cases(int count) => count == 1 ? "case" : "cases";
 }

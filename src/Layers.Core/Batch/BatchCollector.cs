@@ -33,7 +33,7 @@ public static class BatchCollector
             items.AddRange(Expand(file, sweeps));
         }
 
-        return new BatchCollection(MarkDuplicates(items), sweeps.OrderBy(sweep => sweep.Name, StringComparer.Ordinal).ToList());
+        return new BatchCollection(WithVariedInputs(MarkDuplicates(items)), sweeps.OrderBy(sweep => sweep.Name, StringComparer.Ordinal).ToList());
     }
 
     /// <summary>
@@ -89,6 +89,23 @@ public static class BatchCollector
 
         sweeps.Add(new SweepGroup(name, file, result, expansion.Variants.Select(variant => variant.Name).ToList()));
         return expansion.Variants.Select(variant => new BatchItem(variant.Name, file, variant.Json, [], variant.Values));
+    }
+
+    /// <summary>
+    /// The plain case files with the inputs that differ between them, found over the whole batch before it is
+    /// sharded, so that every shard writes the same input columns and merged shards match one unsharded run.
+    /// </summary>
+    private static List<BatchItem> WithVariedInputs(List<BatchItem> items)
+    {
+        var plain = Enumerable.Range(0, items.Count).Where(position => items[position].Parameters.Count == 0).ToList();
+        var inputs = VariedInputs.Of(plain.Select(position => items[position].Json).ToList());
+        var result = items.ToList();
+        for (var i = 0; i < plain.Count; i++)
+        {
+            result[plain[i]] = items[plain[i]] with { Inputs = inputs[i] };
+        }
+
+        return result;
     }
 
     /// <summary>

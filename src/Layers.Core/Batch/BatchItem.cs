@@ -14,7 +14,11 @@ public sealed record BatchItem(
     string File,
     string? Json,
     IReadOnlyList<CaseError> Errors,
-    IReadOnlyList<SweepValue> Parameters);
+    IReadOnlyList<SweepValue> Parameters)
+{
+    /// <summary>The inputs that differ between the plain case files of the batch (<see cref="VariedInputs"/>); empty for a sub-case.</summary>
+    public IReadOnlyList<SweepValue> Inputs { get; init; } = [];
+}
 
 /// <summary>The sub-cases of one sweep file, for its plot.</summary>
 /// <param name="Name">The sweep file's name without .json: the name of its plot folder.</param>

@@ -7,8 +7,11 @@ namespace Layers.Core.Batch;
 /// <param name="FinalState">closedEquilibrium, bathEquilibrium, steadyPermeation or allRemoved.</param>
 /// <param name="LeftReceivedKgPerSquareMeter">Mass per area received by the left medium at the end of the duration; null when closed.</param>
 /// <param name="RightReceivedKgPerSquareMeter">The same for the right medium.</param>
-/// <param name="SteadyFluxKgPerSquareMeterSecond">Steady flux between two baths, left to right; null otherwise.</param>
-/// <param name="LagTimeSeconds">Lag time of the amount received; null when not a permeation case or not reached.</param>
+/// <param name="SteadyFluxKgPerSquareMeterSecond">
+/// Steady flux, left to right: between two baths, or of a diffusion cell's simulated amount received once it runs
+/// on a steady line; null otherwise.
+/// </param>
+/// <param name="LagTimeSeconds">Lag time of the amount received, from the same source; null when not reached.</param>
 /// <param name="TimeTo90PercentSeconds">Time for the whole system to go 90 % of the way to its final state; null when not reached.</param>
 /// <param name="WorstMassBalanceError">Largest relative mass balance error.</param>
 /// <param name="WorstEstimatedError">
@@ -27,24 +30,67 @@ public sealed record BatchKeyResults(
     double? WorstEstimatedError = null,
     int? FiguresAboveAccuracy = null)
 {
+    /// <summary>Concentration in the left medium at the end of the duration, kg/m3; null when closed.</summary>
+    public double? LeftConcentrationKgPerCubicMeter { get; init; }
+
+    /// <summary>The same for the right medium.</summary>
+    public double? RightConcentrationKgPerCubicMeter { get; init; }
+
+    /// <summary>Concentration in the food at the end, as a mass fraction, kg/kg; null without food contact.</summary>
+    public double? FoodConcentrationKgPerKg { get; init; }
+
+    /// <summary>Mass that reached the food per contact area at the end, kg/m2; null without food contact.</summary>
+    public double? FoodMigrationKgPerSquareMeter { get; init; }
+
+    /// <summary>When the food first reached its specific migration limit, s; null when never or without a limit.</summary>
+    public double? TimeToLimitSeconds { get; init; }
+
     /// <summary>The key results of a solved case.</summary>
     public static BatchKeyResults From(SimulationResult result)
     {
+        ArgumentNullException.ThrowIfNull(result);
         // The sample at the end of the duration: the time series continues beyond it while thresholds are ahead.
         var end = result.TimeSeries.Last(sample => sample.TimeSeconds <= result.Case.DurationSeconds * (1 + 1e-12));
+        var (flux, lag) = SteadyPermeation(result);
         return new BatchKeyResults(
             JsonNamingPolicy.CamelCase.ConvertName(result.FinalState.Kind.ToString()),
             end.Left?.TransferredIntoMediumPerArea,
             end.Right?.TransferredIntoMediumPerArea,
-            result.Permeation?.SteadyFluxKgPerSquareMeterSecond,
-            result.Permeation?.LagTimeSeconds,
+            flux,
+            lag,
             result.FinalState.System.NinetyPercent,
             result.WorstMassBalanceError,
             result.NumericalError?.WorstRelativeError,
-            result.NumericalError?.AboveAccuracy.Count);
+            result.NumericalError?.AboveAccuracy.Count)
+        {
+            LeftConcentrationKgPerCubicMeter = end.Left?.ConcentrationKgPerCubicMeter,
+            RightConcentrationKgPerCubicMeter = end.Right?.ConcentrationKgPerCubicMeter,
+            // The food's figures as the case's own summary and the limit verdict give them (end of the history).
+            FoodConcentrationKgPerKg = result.FoodContact?.FinalConcentration,
+            FoodMigrationKgPerSquareMeter = result.FoodContact?.FinalMigrationPerArea,
+            TimeToLimitSeconds = result.FoodContact?.LimitReachedSeconds,
+        };
     }
 
-    /// <summary>The value of a named result, or null for one the batch summary does not list.</summary>
+    /// <summary>
+    /// Steady flux and lag time as the case's own run reports them: between two baths the series-resistance flux and
+    /// the lag of the amount received (summary.json <c>permeation</c>); in a diffusion cell (a finite receiver,
+    /// sampling, a permeation test) the straight line through the simulated amount received, when the run reaches
+    /// one (summary.json <c>diffusionCell.simulated</c>). Where that line is no steady line, neither is reported.
+    /// </summary>
+    private static (double? Flux, double? Lag) SteadyPermeation(SimulationResult result)
+    {
+        if (result.Permeation is { } permeation)
+        {
+            return (permeation.SteadyFluxKgPerSquareMeterSecond, permeation.LagTimeSeconds);
+        }
+
+        return result.DiffusionCell?.Simulated is { IsSteady: true } line
+            ? (line.SteadyFluxKgPerSquareMeterSecond, line.LagTimeSeconds)
+            : (null, null);
+    }
+
+    /// <summary>The value of a named result, SI.</summary>
     public double? Pick(NamedResult which) => which switch
     {
         NamedResult.LeftReceived => LeftReceivedKgPerSquareMeter,
@@ -52,6 +98,9 @@ public sealed record BatchKeyResults(
         NamedResult.SteadyFlux => SteadyFluxKgPerSquareMeterSecond,
         NamedResult.LagTime => LagTimeSeconds,
         NamedResult.TimeTo90Percent => TimeTo90PercentSeconds,
-        NamedResult.LeftConcentration or NamedResult.RightConcentration or NamedResult.FoodConcentration or NamedResult.TimeToLimit => null,
+        NamedResult.LeftConcentration => LeftConcentrationKgPerCubicMeter,
+        NamedResult.RightConcentration => RightConcentrationKgPerCubicMeter,
+        NamedResult.FoodConcentration => FoodConcentrationKgPerKg,
+        NamedResult.TimeToLimit => TimeToLimitSeconds,
     };
 }

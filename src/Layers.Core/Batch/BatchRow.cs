@@ -17,6 +17,12 @@ public sealed record BatchRow(
     string Message,
     BatchKeyResults? Results)
 {
+    /// <summary>
+    /// The inputs that differ between the plain case files of the batch (<see cref="VariedInputs"/>), as this case
+    /// writes them; empty for a sweep's sub-case (its <see cref="Parameters"/> say what varies) and for a lone case.
+    /// </summary>
+    public IReadOnlyList<SweepValue> Inputs { get; init; } = [];
+
     /// <summary>The verdict against a limit given in the case; always null until the case format has a limit key.</summary>
     public LimitCheck? Limit { get; init; }
 

@@ -84,6 +84,7 @@ public static class BatchRunner
             {
                 SolveSeconds = outcome.SolveSeconds,
                 Limit = outcome.Limit,
+                Inputs = item.Inputs,
             },
             CaseRunStatus.Invalid => Row(item, BatchStatus.Invalid, outcome.Message),
             CaseRunStatus.SolverFailed or CaseRunStatus.OutputFailed => Row(item, BatchStatus.Failed, outcome.Message),
@@ -93,5 +94,5 @@ public static class BatchRunner
     }
 
     private static BatchRow Row(BatchItem item, BatchStatus status, string message) =>
-        new(item.Name, item.File, item.Parameters, status, message, null);
+        new(item.Name, item.File, item.Parameters, status, message, null) { Inputs = item.Inputs };
 }

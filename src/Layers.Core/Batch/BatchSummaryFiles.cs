@@ -47,11 +47,12 @@ public static class BatchSummaryFiles
     /// <summary>summary.csv: a header with units, then one row per case.</summary>
     public static string WriteCsv(IReadOnlyList<BatchRow> rows)
     {
+        var columns = BatchColumns.For(rows);
         var text = new StringBuilder();
-        text.Append(CsvText.Line(BatchColumns.Names.Select(CsvText.Field))).Append('\n');
+        text.Append(CsvText.Line(columns.Select(column => CsvText.Field(column.Name)))).Append('\n');
         foreach (var row in rows)
         {
-            text.Append(CsvText.Line(BatchColumns.Cells(row).Select((cell, column) => BatchColumns.HoldsNumbers(column) ? cell : CsvText.Field(cell)))).Append('\n');
+            text.Append(CsvText.Line(columns.Select(column => column.HoldsNumbers ? column.Cell(row) : CsvText.Field(column.Cell(row))))).Append('\n');
         }
 
         return text.ToString();

@@ -53,9 +53,7 @@ public static class BatchSummaryJson
         {
             var status = BatchColumns.ParseStatus(entry.GetProperty("status").GetString()!)
                 ?? throw new JsonException($"unknown status '{entry.GetProperty("status").GetString()}'");
-            var parameters = entry.GetProperty("parameters").EnumerateArray()
-                .Select(value => SweepValues.Of(value.GetProperty("path").GetString()!, value.GetProperty("value").GetString()!))
-                .ToList();
+            var parameters = Values(entry.GetProperty("parameters"));
             rows.Add(new BatchRow(
                 entry.GetProperty("name").GetString()!,
                 entry.GetProperty("file").GetString()!,
@@ -64,6 +62,7 @@ public static class BatchSummaryJson
                 entry.GetProperty("message").GetString()!,
                 entry.GetProperty("results") is { ValueKind: JsonValueKind.Object } results ? ReadResults(results) : null)
             {
+                Inputs = entry.TryGetProperty("inputs", out var inputs) ? Values(inputs) : [],
                 Limit = entry.TryGetProperty("limit", out var limit) && limit.ValueKind == JsonValueKind.Object
                     ? new LimitCheck(
                         LimitCheck.ParseQuantity(limit.GetProperty("quantity").GetString()!)
@@ -82,16 +81,8 @@ public static class BatchSummaryJson
         json.WriteStartObject();
         json.WriteString("name", row.Name);
         json.WriteString("file", row.File);
-        json.WriteStartArray("parameters");
-        foreach (var value in row.Parameters)
-        {
-            json.WriteStartObject();
-            json.WriteString("path", value.Path);
-            json.WriteString("value", value.Written);
-            json.WriteEndObject();
-        }
-
-        json.WriteEndArray();
+        WriteValues(json, "parameters", row.Parameters);
+        WriteValues(json, "inputs", row.Inputs);
         json.WriteString("status", BatchColumns.StatusName(row.Status));
         json.WriteString("message", row.Message);
         if (row.Results is { } results)
@@ -100,8 +91,10 @@ public static class BatchSummaryJson
             json.WriteString("finalState", results.FinalState);
             foreach (var result in NamedResults.InBatchSummary)
             {
-                SummaryJson.WriteNullable(json, NamedResults.SummaryKey(result)!, results.Pick(result));
+                SummaryJson.WriteNullable(json, NamedResults.SummaryKey(result), results.Pick(result));
             }
+
+            SummaryJson.WriteNullable(json, "foodMigrationKgPerSquareMeter", results.FoodMigrationKgPerSquareMeter);
 
             json.WriteNumber("worstMassBalanceError", results.WorstMassBalanceError);
             SummaryJson.WriteNullable(json, "worstEstimatedError", results.WorstEstimatedError);
@@ -129,10 +122,38 @@ public static class BatchSummaryJson
         json.WriteEndObject();
     }
 
+    /// <summary>
+    /// Swept values or varied inputs: path, label (as the summaries show it, so that a merge shows the same) and the
+    /// value as written.
+    /// </summary>
+    private static void WriteValues(Utf8JsonWriter json, string key, IReadOnlyList<SweepValue> values)
+    {
+        json.WriteStartArray(key);
+        foreach (var value in values)
+        {
+            json.WriteStartObject();
+            json.WriteString("path", value.Path);
+            json.WriteString("label", value.Label);
+            json.WriteString("value", value.Written);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+    }
+
+    private static List<SweepValue> Values(JsonElement values) =>
+        values.EnumerateArray()
+            .Select(value =>
+            {
+                var read = SweepValues.Of(value.GetProperty("path").GetString()!, value.GetProperty("value").GetString()!);
+                return value.TryGetProperty("label", out var label) ? read with { Label = label.GetString()! } : read;
+            })
+            .ToList();
+
     private static BatchKeyResults ReadResults(JsonElement results)
     {
         double? Number(string key) => results.TryGetProperty(key, out var value) && value.ValueKind == JsonValueKind.Number ? value.GetDouble() : null;
-        double? Optional(NamedResult result) => Number(NamedResults.SummaryKey(result)!);
+        double? Optional(NamedResult result) => Number(NamedResults.SummaryKey(result));
         return new BatchKeyResults(
             results.GetProperty("finalState").GetString()!,
             Optional(NamedResult.LeftReceived),
@@ -142,6 +163,13 @@ public static class BatchSummaryJson
             Optional(NamedResult.TimeTo90Percent),
             results.GetProperty("worstMassBalanceError").GetDouble(),
             Number("worstEstimatedError"),
-            (int?)Number("figuresAboveAccuracy"));
+            (int?)Number("figuresAboveAccuracy"))
+        {
+            LeftConcentrationKgPerCubicMeter = Optional(NamedResult.LeftConcentration),
+            RightConcentrationKgPerCubicMeter = Optional(NamedResult.RightConcentration),
+            FoodConcentrationKgPerKg = Optional(NamedResult.FoodConcentration),
+            FoodMigrationKgPerSquareMeter = Number("foodMigrationKgPerSquareMeter"),
+            TimeToLimitSeconds = Optional(NamedResult.TimeToLimit),
+        };
     }
 }

@@ -13,8 +13,15 @@ public static class NamedResults
     /// <summary>Every named result, in declaration order.</summary>
     public static IReadOnlyList<NamedResult> All { get; } = Enum.GetValues<NamedResult>();
 
-    /// <summary>The results a batch summary lists (and a sweep can plot), in column order.</summary>
-    public static IReadOnlyList<NamedResult> InBatchSummary { get; } = [.. All.Where(result => SummaryKey(result) is not null)];
+    /// <summary>
+    /// The results a batch summary lists (and a sweep can plot), in column order: every named result, the five that
+    /// earlier summaries listed first so that their columns keep their places.
+    /// </summary>
+    public static IReadOnlyList<NamedResult> InBatchSummary { get; } =
+    [
+        NamedResult.LeftReceived, NamedResult.RightReceived, NamedResult.SteadyFlux, NamedResult.LagTime, NamedResult.TimeTo90Percent,
+        NamedResult.LeftConcentration, NamedResult.RightConcentration, NamedResult.FoodConcentration, NamedResult.TimeToLimit,
+    ];
 
     /// <summary>The case-file name of each result, e.g. <c>rightReceived</c>.</summary>
     public static IReadOnlyDictionary<string, NamedResult> ByName { get; } =
@@ -72,18 +79,17 @@ public static class NamedResults
         NamedResult.TimeToLimit => "time to limit",
     };
 
-    /// <summary>
-    /// The key of the result in summary.csv and summary.json of a batch (name and SI unit in one word), or null for the
-    /// results a batch summary does not list.
-    /// </summary>
-    public static string? SummaryKey(NamedResult result) => result switch
+    /// <summary>The key of the result in summary.csv and summary.json of a batch: name and SI unit in one word.</summary>
+    public static string SummaryKey(NamedResult result) => result switch
     {
         NamedResult.LeftReceived => "leftReceivedKgPerSquareMeter",
         NamedResult.RightReceived => "rightReceivedKgPerSquareMeter",
         NamedResult.SteadyFlux => "steadyFluxKgPerSquareMeterSecond",
         NamedResult.LagTime => "lagTimeSeconds",
         NamedResult.TimeTo90Percent => "timeTo90PercentSeconds",
-        NamedResult.LeftConcentration or NamedResult.RightConcentration or NamedResult.FoodConcentration
-            or NamedResult.TimeToLimit => null,
+        NamedResult.LeftConcentration => "leftConcentrationKgPerCubicMeter",
+        NamedResult.RightConcentration => "rightConcentrationKgPerCubicMeter",
+        NamedResult.FoodConcentration => "foodConcentrationKgPerKg",
+        NamedResult.TimeToLimit => "timeToLimitSeconds",
     };
 }

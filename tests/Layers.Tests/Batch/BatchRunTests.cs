@@ -107,7 +107,7 @@ public sealed class BatchRunTests
         Assert.EndsWith(Path.Combine("a", "same.json"), rows[0]["file"], StringComparison.Ordinal);
         Assert.Contains("is already used by", rows[1]["message"], StringComparison.Ordinal);
         var markdown = File.ReadAllText(temp.Combine("out", "summary.md"));
-        Assert.Contains("solveSeconds", markdown, StringComparison.Ordinal);
+        Assert.Contains(@"solve \[s\]", markdown, StringComparison.Ordinal);
         Assert.Contains(Layers.Core.Reports.CautionText.Paragraph, markdown, StringComparison.Ordinal);
     }
 

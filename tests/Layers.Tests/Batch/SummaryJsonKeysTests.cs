@@ -1,5 +1,6 @@
 using System.Text.Json;
 using Layers.Cli;
+using Layers.Core.Batch;
 using Layers.Tests.TestSupport;
 
 namespace Layers.Tests.Batch;
@@ -23,12 +24,14 @@ public sealed class SummaryJsonKeysTests
 
         var missing = columns.Where(column => !keys.Contains(column)).ToList();
 
-        // limitVerdict is the "exceeded" member of the limit object in summary.json, as the docs' limit row says.
-        Assert.Equal(["case", "limitVerdict"], missing);
+        // limitVerdict is the "exceeded" member of the limit object in summary.json, as the docs' limit row says; the
+        // trade-unit columns are the SI keys in other units, as the docs' trade-unit paragraph says.
+        Assert.Equal(["case", "limitVerdict", .. BatchColumns.TradeUnitColumns.Select(column => column.Name)], missing);
         Assert.Contains("name", keys);
         var docs = File.ReadAllText(RepoRoot.File("docs", "outputs.md")).ReplaceLineEndings(" ");
         Assert.Contains("except that the case name is under `name` rather than `case`", docs, StringComparison.Ordinal);
         Assert.Contains("`{ quantity, limit, value, exceeded }`", docs, StringComparison.Ordinal);
+        Assert.Contains("summary.json holds only their SI columns", docs, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -77,8 +77,12 @@ public sealed class NamedResultCatalogueTests
 
         Assert.Equal(NamedResults.InBatchSummary.Select(NamedResults.Name), Listed(errors, "$.sweep.result: must be one of "));
         Assert.Equal(
-            ["leftReceivedKgPerSquareMeter", "rightReceivedKgPerSquareMeter", "steadyFluxKgPerSquareMeterSecond", "lagTimeSeconds", "timeTo90PercentSeconds"],
-            NamedResults.InBatchSummary.Select(result => NamedResults.SummaryKey(result)!));
+            [
+                "leftReceivedKgPerSquareMeter", "rightReceivedKgPerSquareMeter", "steadyFluxKgPerSquareMeterSecond", "lagTimeSeconds", "timeTo90PercentSeconds",
+                "leftConcentrationKgPerCubicMeter", "rightConcentrationKgPerCubicMeter", "foodConcentrationKgPerKg", "timeToLimitSeconds",
+            ],
+            NamedResults.InBatchSummary.Select(NamedResults.SummaryKey));
+        Assert.Equal(NamedResults.All.Order(), NamedResults.InBatchSummary.Order());
     }
 
     [Fact]
