@@ -38,6 +38,9 @@ public static class OutputSchedule
             }
         }
 
+        // Period boundaries: what each period delivered is read there, and renewals happen there.
+        times.AddRange(simulation.Schedule?.Periods.Select(period => period.EndSeconds) ?? []);
+
         var count = (PointsPerDecade * Decades) + 1;
         for (var i = 0; i < count; i++)
         {
