@@ -16,7 +16,7 @@ public static class FinalStateText
         return final.Kind switch
         {
             FinalStateKind.ClosedEquilibrium when final.MassLeftAfterSamplingPerArea is not null
-                => $"equilibrium of the closed system holding the mass left after the last {Withdrawal(simulation)} (what {Withdrawals(simulation)} took out never comes back)",
+                => $"equilibrium of the closed system holding the mass left after the last {Withdrawal(simulation)} ({Consequence(simulation)})",
             FinalStateKind.ClosedEquilibrium => "equilibrium of the closed system",
             FinalStateKind.BathEquilibrium => "equilibrium with the bath",
             FinalStateKind.AllRemoved
@@ -39,10 +39,10 @@ public static class FinalStateText
         };
     }
 
-    private static string Withdrawals(SimulationCase simulation) => Withdrawal(simulation) switch
+    private static string Consequence(SimulationCase simulation) => Withdrawal(simulation) switch
     {
-        "renewal" => "the renewed media",
-        "sample" => "the samples",
-        _ => "the samples and renewed media",
+        "renewal" => "what the renewals took out or brought in stays so",
+        "sample" => "what the samples took out never comes back",
+        _ => "what the samples took out, and what the renewals took out or brought in, stays so",
     };
 }

@@ -19,6 +19,11 @@ public static class ScheduleTables
         }
 
         var tables = new List<TextTable> { Periods(result, schedule) };
+        if (schedule.PeriodicSteadyStates.Count > 0)
+        {
+            tables.Add(Fluxes(result, schedule));
+        }
+
         if (schedule.RepeatedUse is { } verdict)
         {
             tables.Add(RepeatedUse(verdict));
@@ -66,6 +71,29 @@ public static class ScheduleTables
             }),
         ]).ToList();
         return new TextTable("Periods (amounts received during each period; \"fresh\": the medium was renewed at its start)", headers, rows);
+    }
+
+    /// <summary>Peak and trough of the flux into each medium in each period: what a repeated dose delivers and how low it falls.</summary>
+    private static TextTable Fluxes(SimulationResult result, ScheduleSummary schedule)
+    {
+        var display = result.Case.Display;
+        var headers = new List<string> { "period" };
+        foreach (var medium in schedule.Periods[0].Media)
+        {
+            headers.Add($"{medium.Name}: highest flux [{display.Flux.Symbol}]");
+            headers.Add($"{medium.Name}: lowest flux [{display.Flux.Symbol}]");
+        }
+
+        var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
+        [
+            outcome.Period.Label,
+            .. outcome.Media.SelectMany(medium => new[]
+            {
+                DisplayFormat.Number(display.Flux.FromSi(medium.HighestFluxKgPerSquareMeterSecond)),
+                DisplayFormat.Number(display.Flux.FromSi(medium.LowestFluxKgPerSquareMeterSecond)),
+            }),
+        ]).ToList();
+        return new TextTable("Flux into each medium in each period (highest and lowest at the period's output times)", headers, rows);
     }
 
     private static TextTable RepeatedUse(RepeatedUseVerdict verdict)

@@ -36,6 +36,8 @@ internal static class SummaryJsonSchedule
                 json.WriteNumber("receivedKgPerSquareMeter", medium.ReceivedKgPerSquareMeter);
                 json.WriteNumber("concentrationAtEndKgPerCubicMeter", medium.ConcentrationAtEndKgPerCubicMeter);
                 SummaryJson.WriteNullable(json, "massFractionAtEnd", medium.MassFractionAtEnd);
+                json.WriteNumber("highestFluxKgPerSquareMeterSecond", medium.HighestFluxKgPerSquareMeterSecond);
+                json.WriteNumber("lowestFluxKgPerSquareMeterSecond", medium.LowestFluxKgPerSquareMeterSecond);
                 json.WriteEndObject();
             }
 

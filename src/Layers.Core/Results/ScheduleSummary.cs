@@ -35,13 +35,20 @@ public sealed record PeriodOutcome(SchedulePeriod Period, IReadOnlyList<MediumIn
 /// <param name="ReceivedKgPerSquareMeter">Mass per contact area that crossed into it during the period, kg/m2.</param>
 /// <param name="ConcentrationAtEndKgPerCubicMeter">Its concentration at the period's end, before any renewal, kg/m3.</param>
 /// <param name="MassFractionAtEnd">The same as a mass fraction (kg/kg) when the medium's density is known; else null.</param>
+/// <param name="HighestFluxKgPerSquareMeterSecond">
+/// The highest flux into the medium at the period's output times (its end and evenly spaced times within it), kg/(m2 s):
+/// the peak of a dose as sampled, no higher than the true peak.
+/// </param>
+/// <param name="LowestFluxKgPerSquareMeterSecond">The lowest flux at the same times, kg/(m2 s): the trough before the next dose.</param>
 public sealed record MediumInPeriod(
     Side Side,
     string Name,
     bool FreshAtStart,
     double ReceivedKgPerSquareMeter,
     double ConcentrationAtEndKgPerCubicMeter,
-    double? MassFractionAtEnd);
+    double? MassFractionAtEnd,
+    double HighestFluxKgPerSquareMeterSecond,
+    double LowestFluxKgPerSquareMeterSecond);
 
 /// <summary>
 /// Where the repetitions of one period settle: the first repetition whose amount into each medium differs from the

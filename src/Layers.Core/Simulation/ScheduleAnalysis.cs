@@ -37,13 +37,20 @@ public static class ScheduleAnalysis
                 {
                     var fresh = period.StartSeconds == 0 || period.Renewed.Contains(side);
                     var concentration = atEnd.ConcentrationKgPerCubicMeter;
+                    var fluxes = OutputSchedule.WithinPeriod(schedule, period)
+                        .Select(time => At(series, time) is { } sample ? Face(sample, side)!.FluxIntoMediumKgPerSquareMeterSecond : double.NaN)
+                        .Where(double.IsFinite)
+                        .DefaultIfEmpty(atEnd.FluxIntoMediumKgPerSquareMeterSecond)
+                        .ToArray();
                     media.Add(new MediumInPeriod(
                         side,
                         compartment.Name,
                         fresh,
                         atEnd.TransferredIntoMediumPerArea - atStart.TransferredIntoMediumPerArea,
                         concentration,
-                        concentration / compartment.DensityKgPerCubicMeter));
+                        concentration / compartment.DensityKgPerCubicMeter,
+                        fluxes.Max(),
+                        fluxes.Min()));
                 }
             }
 
