@@ -11,7 +11,8 @@ namespace Layers.Tests.Schedule;
 /// A plane sheet releasing into a compartment whose medium is replaced by a fresh portion at the start of each
 /// contact. Each contact is the single-contact problem restarted from the profile the previous one left, so: the first
 /// contact is Crank's sheet into a well-stirred limited volume (The Mathematics of Diffusion, 2nd ed. 1975, ch. 4,
-/// eq. 4.37, from memory); into a near-perfect sink each contact takes what Crank's eq. 4.18 (from memory) releases
+/// eq. 4.37, from memory) and every contact is its eigenfunction expansion restarted at each renewal
+/// (Analytics.SheetIntoRenewedVolume); into a near-perfect sink each contact takes what Crank's eq. 4.18 (from memory) releases
 /// between its two ends; the mass balance closes across every renewal; and the run equals the same contacts solved
 /// by hand as separate runs, each started from the state the one before ended with.
 /// </summary>
@@ -21,7 +22,7 @@ public sealed class ScheduleRunTests
     private const double ContactSeconds = 0.2 * Thickness * Thickness / Diffusivity;
 
     [Fact]
-    public void The_first_contact_takes_what_Crank_gives_for_a_sheet_into_a_limited_volume()
+    public void Every_contact_takes_what_the_limited_volume_solution_restarted_from_the_previous_profile_gives()
     {
         const double volumePerArea = 0.5 * Thickness;
         var result = Simulator.Run(Renewed(volumePerArea, contacts: 3, Cases.FiniteVolumes));
@@ -32,9 +33,14 @@ public sealed class ScheduleRunTests
         Tolerance.Relative(expected, first.ReceivedKgPerSquareMeter, 1e-3, "first contact (Crank eq. 4.37)");
         Tolerance.Relative(expected / volumePerArea, first.ConcentrationAtEndKgPerCubicMeter, 1e-3, "concentration at the end of the first contact");
 
-        // Each later contact starts fresh from a sheet that holds less: it takes less.
+        // Each later contact restarts from the profile the one before left: the expansion restarted at each renewal.
         var amounts = result.Schedule.Periods.Select(period => period.Media.Single().ReceivedKgPerSquareMeter).ToArray();
-        Assert.True(amounts[1] < amounts[0] && amounts[2] < amounts[1], string.Join(", ", amounts));
+        var restarted = SheetIntoRenewedVolume.AmountPerContact(Diffusivity, Thickness, InitialConcentration, volumePerArea, 1, ContactSeconds, 3);
+        foreach (var (contact, (expectedAmount, actual)) in restarted.Zip(amounts).Select((pair, index) => (index + 1, pair)))
+        {
+            Tolerance.Relative(expectedAmount, actual, 1e-3, $"contact {contact} (the expansion restarted from the previous profile)");
+        }
+
         Assert.All(result.Schedule.Periods.Skip(1), period => Assert.True(period.Media.Single().FreshAtStart));
     }
 
