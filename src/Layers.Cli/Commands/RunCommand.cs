@@ -159,7 +159,7 @@ internal static class RunCommand
             output.WriteLine($"  stack: {StackText.Describe(simulation)}");
             ConsoleTables.Write(output, [
                 ResultTables.AtReportTimes(result), ResultTables.KeyFigures(result), .. AccuracyTables.Shortfalls(result) is { } shortfalls ? [shortfalls] : Array.Empty<TextTable>(),
-                .. FoodContactTables.For(result), .. DiffusionCellTables.For(result)]);
+                .. ScheduleTables.For(result), .. FoodContactTables.For(result), .. DiffusionCellTables.For(result)]);
             foreach (var warning in CaseCautions.UnverifiedConstants(simulation).Concat(DiffusionCellTables.Warnings(result)))
             {
                 output.WriteLine(warning);

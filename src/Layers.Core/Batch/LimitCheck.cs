@@ -17,10 +17,13 @@ public sealed record LimitCheck(NamedResult Result, double LimitSi, double Value
     /// <summary>The compared result as the summaries name it, with its SI unit: "food concentration at the end [kg/kg]".</summary>
     public string Quantity => QuantityOf(Result);
 
-    /// <summary>The limit check of a solved case: its specific migration limit, when the case gives one.</summary>
+    /// <summary>
+    /// The limit check of a solved case: its specific migration limit, when the case gives one, against the food at the
+    /// end, or for an article tested in repeated contacts with fresh food, at the end of the judged contact.
+    /// </summary>
     public static LimitCheck? Of(SimulationResult result)
         => result?.FoodContact is { SpecificMigrationLimit: { } limit } food
-            ? new LimitCheck(NamedResult.FoodConcentration, limit, food.FinalConcentration)
+            ? new LimitCheck(NamedResult.FoodConcentration, limit, result.Schedule?.RepeatedUse?.JudgedValue ?? food.FinalConcentration)
             : null;
 
     /// <summary>The named result whose <see cref="Quantity"/> text this is, for reading a summary back; null when none.</summary>

@@ -19,7 +19,7 @@ public static class CaseReader
     [
         "$schema", "title", "description", "partitionBasis", "referenceMedium", "layers", "left", "right",
         "duration", "reportTimes", "extraOutputTimes", "depths", "numerics", "display", "sweep", "foodContact", "permeationTest",
-        "design", "uncertainty",
+        "design", "uncertainty", "schedule",
     ];
 
     private static readonly string[] ReferenceKeys = ["name", "density"];
@@ -134,7 +134,8 @@ public static class CaseReader
         var errorsBeforeLayers = context.Errors.Count;
         var layers = LayerReader.Read(root, context);
         var layersRead = context.Errors.Count == errorsBeforeLayers;
-        var (duration, durationText) = ReadDuration(root, food, context);
+        var schedule = ScheduleReader.Read(root, context);
+        var (duration, durationText) = ReadDuration(root, food, schedule?.Schedule, context);
         context.DurationSeconds = duration;
         context.DurationText = durationText;
         var left = FaceReader.Read(root, "left", context);
@@ -148,6 +149,11 @@ public static class CaseReader
         if (food is not null)
         {
             (foodSettings, layers) = FoodContactReader.Resolve(food, root, layers, left, right, context);
+        }
+
+        if (schedule is { } read && left is not null && right is not null)
+        {
+            ScheduleReader.CheckFaces(read.NamedFaces, left, right, context);
         }
 
         var permeationTest = PermeationTestReader.Read(root, context, fileName, right);
@@ -171,6 +177,7 @@ public static class CaseReader
             Display = display,
             FoodContact = foodSettings,
             PermeationTest = permeationTest,
+            Schedule = schedule?.Schedule,
         };
         if (numerics.Method == SolutionMethod.Laplace && LaplaceApplicability.Of(simulation) is { IsApplicable: false } applicability)
         {
@@ -184,8 +191,28 @@ public static class CaseReader
         return simulation;
     }
 
-    /// <summary>The duration: given, or with food-contact stages their sum (then it must not be given as well).</summary>
-    private static (double? Seconds, string Text) ReadDuration(JsonFields root, FoodContactReader.Input? food, ReadContext context)
+    /// <summary>
+    /// The duration: given, or with food-contact stages their sum (then it must not be given as well), or with a
+    /// schedule the sum of its periods (given as well, it must agree; with stages, the stages' sum must).
+    /// </summary>
+    private static (double? Seconds, string Text) ReadDuration(JsonFields root, FoodContactReader.Input? food, ContactSchedule? schedule, ReadContext context)
+    {
+        if (root.Has("schedule") && food is null && !root.Has("duration"))
+        {
+            // A schedule with mistakes has no duration to give, and its own errors say why.
+            return schedule is null ? (null, string.Empty) : (schedule.DurationSeconds, string.Create(CultureInfo.InvariantCulture, $"{schedule.DurationSeconds / 86400:0.####} d, the sum of the periods"));
+        }
+
+        var (seconds, text) = ReadGivenDuration(root, food, context);
+        if (schedule is not null && seconds is { } given)
+        {
+            ScheduleReader.CheckDuration(schedule, given, food is null ? root.PathOf("duration") : root.PathOf("foodContact") + ".stages", text, context);
+        }
+
+        return (seconds, text);
+    }
+
+    private static (double? Seconds, string Text) ReadGivenDuration(JsonFields root, FoodContactReader.Input? food, ReadContext context)
     {
         if (food is null)
         {

@@ -62,6 +62,12 @@ public sealed record SimulationCase
     /// </summary>
     public SimulationCase WithFirstStageDiffusivities() => Stages[0].WithDiffusivities(this);
 
+    /// <summary>
+    /// The periods of the run and the face media replaced at their starts, or null for one contact that lasts the whole
+    /// duration.
+    /// </summary>
+    public ContactSchedule? Schedule { get; init; }
+
     /// <summary>Permeation metrics asked for by the case, or null.</summary>
     public PermeationTest? PermeationTest { get; init; }
 

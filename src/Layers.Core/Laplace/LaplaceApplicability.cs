@@ -45,6 +45,12 @@ public sealed class LaplaceApplicability
             }
         }
 
+        if (simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right)))
+        {
+            // A renewed medium is emptied at given times: a jump in the medium, as with sampling.
+            reasons.Add("the schedule renews a compartment's medium at given times");
+        }
+
         return new LaplaceApplicability(reasons);
     }
 }

@@ -1,3 +1,4 @@
+using Layers.Core.Domain;
 using Layers.Core.Results;
 
 namespace Layers.Core.Reports;
@@ -8,14 +9,14 @@ namespace Layers.Core.Reports;
 /// </summary>
 public static class FinalStateText
 {
-    /// <summary>The meaning of the final state of a run.</summary>
-    public static string Describe(FinalStateSummary final)
+    /// <summary>The meaning of the final state of a run of <paramref name="simulation"/>.</summary>
+    public static string Describe(FinalStateSummary final, SimulationCase simulation)
     {
         ArgumentNullException.ThrowIfNull(final);
         return final.Kind switch
         {
             FinalStateKind.ClosedEquilibrium when final.MassLeftAfterSamplingPerArea is not null
-                => "equilibrium of the closed system holding the mass left after the last sample (what the samples took out never comes back)",
+                => $"equilibrium of the closed system holding the mass left after the last {Withdrawal(simulation)} ({Consequence(simulation)})",
             FinalStateKind.ClosedEquilibrium => "equilibrium of the closed system",
             FinalStateKind.BathEquilibrium => "equilibrium with the bath",
             FinalStateKind.AllRemoved
@@ -23,4 +24,25 @@ public static class FinalStateText
             _ => "steady permeation between the baths",
         };
     }
+
+    /// <summary>What takes mass out of a closed system at given times: "sample", "renewal" or "sample or renewal".</summary>
+    public static string Withdrawal(SimulationCase simulation)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        var sampled = new[] { simulation.Left, simulation.Right }.Any(face => face is CompartmentFace { Sampling: not null });
+        var renewed = simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right));
+        return (sampled, renewed) switch
+        {
+            (true, true) => "sample or renewal",
+            (false, true) => "renewal",
+            _ => "sample",
+        };
+    }
+
+    private static string Consequence(SimulationCase simulation) => Withdrawal(simulation) switch
+    {
+        "renewal" => "what the renewals took out or brought in stays so",
+        "sample" => "what the samples took out never comes back",
+        _ => "what the samples took out, and what the renewals took out or brought in, stays so",
+    };
 }

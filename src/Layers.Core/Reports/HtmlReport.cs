@@ -44,7 +44,7 @@ public static class HtmlReport
             AppendTable(html, shortfalls);
         }
 
-        foreach (var table in FoodContactTables.For(result).Concat(DiffusionCellTables.For(result)))
+        foreach (var table in ScheduleTables.For(result).Concat(FoodContactTables.For(result)).Concat(DiffusionCellTables.For(result)))
         {
             AppendTable(html, table);
         }

@@ -49,12 +49,12 @@ public static class ResultTables
         var rows = new List<IReadOnlyList<string>>();
         void Add(string what, string value) => rows.Add([what, value]);
         var final = result.FinalState;
-        Add("final state", FinalStateText.Describe(final));
+        Add("final state", FinalStateText.Describe(final, simulation));
         if (final.MassLeftAfterSamplingPerArea is { } left)
         {
             var initial = simulation.Stack.InitialMassPerArea
                 + new[] { simulation.Left, simulation.Right }.Sum(face => face.InitialMassPerArea);
-            var after = final.LastSampleSeconds is { } last ? $" after the last sample at {format.Time(last)}" : string.Empty;
+            var after = final.LastSampleSeconds is { } last ? $" after the last {FinalStateText.Withdrawal(simulation)} at {format.Time(last)}" : string.Empty;
             Add("mass left in the system" + after, $"{format.MassPerArea(left)} of {format.MassPerArea(initial)} at the start");
         }
 

@@ -37,6 +37,7 @@ public static class SummaryJson
             SummaryJsonFinalState.Write(json, result);
             SummaryJsonFoodContact.Write(json, result);
             SummaryJsonDiffusionCell.Write(json, result);
+            SummaryJsonSchedule.Write(json, result);
             WriteSolver(json, result);
             SummaryJsonNumericalError.Write(json, result);
             SummaryJsonCrossCheck.Write(json, result);

@@ -11,7 +11,7 @@ internal static class SummaryJsonFinalState
         var final = result.FinalState;
         json.WriteStartObject("finalState");
         json.WriteString("kind", JsonNamingPolicy.CamelCase.ConvertName(final.Kind.ToString()));
-        json.WriteString("description", FinalStateText.Describe(final));
+        json.WriteString("description", FinalStateText.Describe(final, result.Case));
         SummaryJson.WriteNullable(json, "massLeftAfterSamplingPerAreaKgPerSquareMeter", final.MassLeftAfterSamplingPerArea);
         SummaryJson.WriteNullable(json, "lastSampleSeconds", final.LastSampleSeconds);
         json.WriteStartArray("layers");

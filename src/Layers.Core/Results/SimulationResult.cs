@@ -58,6 +58,9 @@ public sealed record SimulationResult
     /// <summary>The food-contact assessment, for a case with food-contact settings that ran to its end.</summary>
     public FoodContactResult? FoodContact { get; init; }
 
+    /// <summary>The results per period of the case's schedule; null without a schedule.</summary>
+    public ScheduleSummary? Schedule { get; init; }
+
     /// <summary>
     /// Why the run is not a result, in words (the solver stopped early, or the run failed its own mass-balance or sign
     /// check); empty when it completed.

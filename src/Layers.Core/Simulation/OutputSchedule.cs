@@ -14,6 +14,24 @@ public static class OutputSchedule
     /// <summary>Decades covered by the dense grid, ending at the duration.</summary>
     public const int Decades = 4;
 
+    /// <summary>Evenly spaced output times in each period of a schedule, the last at its end.</summary>
+    public const int PointsPerPeriod = 20;
+
+    /// <summary>Most output times spent on the periods of a schedule; beyond, each period gets fewer (at least its end).</summary>
+    public const int MaxScheduleOutputs = 4000;
+
+    /// <summary>
+    /// The evenly spaced output times of a period of a schedule, the last at its end: the same places in every period,
+    /// so that the highest and lowest flux of successive periods are read alike.
+    /// </summary>
+    public static IEnumerable<double> WithinPeriod(ContactSchedule schedule, SchedulePeriod period)
+    {
+        ArgumentNullException.ThrowIfNull(schedule);
+        ArgumentNullException.ThrowIfNull(period);
+        var within = Math.Clamp(MaxScheduleOutputs / schedule.Periods.Count, 1, PointsPerPeriod);
+        return Enumerable.Range(1, within).Select(i => period.StartSeconds + (period.DurationSeconds * i / within));
+    }
+
     /// <summary>All output times of a case, ascending, without duplicates, all in (0, duration].</summary>
     public static double[] For(SimulationCase simulation)
     {
@@ -36,6 +54,13 @@ public static class OutputSchedule
             {
                 times.AddRange(sampling.TimesSeconds);
             }
+        }
+
+        // Period boundaries, where what each period delivered is read and renewals happen, and evenly spaced times
+        // within each period, where its highest and lowest flux are looked for.
+        if (simulation.Schedule is { } schedule)
+        {
+            times.AddRange(schedule.Periods.SelectMany(period => WithinPeriod(schedule, period)));
         }
 
         var count = (PointsPerDecade * Decades) + 1;

@@ -6,12 +6,15 @@ namespace Layers.Core.Simulation;
 
 /// <summary>
 /// Withdraws samples from compartments at their sampling times and replaces them with fresh medium: the
-/// compartment's concentration drops by (V - v) / V and the mass v c leaves the system. Keeps what was withdrawn,
-/// so the mass balance and the cumulative amount received can account for it.
+/// compartment's concentration drops by (V - v) / V and the mass v c leaves the system. Also replaces a compartment's
+/// whole medium by a fresh portion at the starts of the schedule's periods that renew it: the mass V (c - c_fresh)
+/// leaves. Keeps what was withdrawn, net of what fresh medium brought, so the mass balance and the cumulative amount
+/// received can account for it.
 /// </summary>
 internal sealed class SamplingEvents : IStateEvents
 {
     private readonly Sampled?[] _sides = new Sampled?[2];
+    private readonly Renewed?[] _renewed = new Renewed?[2];
     private readonly DiffusionSystem _system;
 
     public SamplingEvents(DiscreteModel model)
@@ -25,19 +28,30 @@ internal sealed class SamplingEvents : IStateEvents
             {
                 _sides[(int)side] = new Sampled(compartment, sampling, system.CompartmentNode(side));
             }
+
+            if (simulation.Face(side) is CompartmentFace renewable && simulation.Schedule is { } schedule && schedule.Renews(side))
+            {
+                _renewed[(int)side] = new Renewed(renewable, schedule.RenewalTimes(side), system.CompartmentNode(side));
+            }
         }
 
-        TimesSeconds = _sides.Where(sampled => sampled is not null).SelectMany(sampled => sampled!.Sampling.TimesSeconds).Order().ToArray();
+        TimesSeconds = _sides.Where(sampled => sampled is not null).SelectMany(sampled => sampled!.Sampling.TimesSeconds)
+            .Concat(_renewed.Where(renewed => renewed is not null).SelectMany(renewed => renewed!.TimesSeconds))
+            .Distinct().Order().ToArray();
     }
 
     /// <inheritdoc />
     public IReadOnlyList<double> TimesSeconds { get; }
 
     /// <summary>True when some compartment is sampled.</summary>
-    public bool Any => _sides[0] is not null || _sides[1] is not null;
+    public bool Any => _sides[0] is not null || _sides[1] is not null || _renewed[0] is not null || _renewed[1] is not null;
 
     /// <summary>Mass per contact area withdrawn from the compartment on a side so far, kg/m2.</summary>
-    public double RemovedPerArea(Side side) => _sides[(int)side]?.RemovedPerArea ?? 0;
+    public double RemovedPerArea(Side side) => (_sides[(int)side]?.RemovedPerArea ?? 0) + (_renewed[(int)side]?.RemovedPerArea ?? 0);
+
+    /// <summary>The renewals of the medium on a side so far: time and the concentration of the portion replaced.</summary>
+    public IReadOnlyList<(double TimeSeconds, double ConcentrationKgPerCubicMeter)> Renewals(Side side)
+        => _renewed[(int)side]?.Replaced ?? [];
 
     /// <summary>The samples taken on a side: time and the concentration withdrawn (just before the withdrawal).</summary>
     public IReadOnlyList<(double TimeSeconds, double ConcentrationKgPerCubicMeter)> Samples(Side side)
@@ -45,6 +59,23 @@ internal sealed class SamplingEvents : IStateEvents
 
     public void Apply(double timeSeconds, Span<double> state)
     {
+        foreach (var renewed in _renewed)
+        {
+            if (renewed is null || !renewed.TimesSeconds.Any(time => Math.Abs(time - timeSeconds) <= 1e-9 * time))
+            {
+                continue;
+            }
+
+            var compartment = renewed.Compartment;
+            var concentration = _system.ConcentrationOf(renewed.Node, state[renewed.Node]);
+            var fresh = compartment.InitialConcentrationKgPerCubicMeter;
+            renewed.Replaced.Add((timeSeconds, concentration));
+            renewed.RemovedPerArea += (concentration - fresh) * compartment.VolumePerAreaMeters;
+
+            // c is proportional to the node's u (c = K u), so the fresh portion's u is c_fresh over c at u = 1.
+            state[renewed.Node] = fresh == 0 ? 0 : fresh / _system.ConcentrationOf(renewed.Node, 1);
+        }
+
         foreach (var sampled in _sides)
         {
             if (sampled is null || !sampled.Sampling.TimesSeconds.Any(time => Math.Abs(time - timeSeconds) <= 1e-9 * time))
@@ -58,6 +89,19 @@ internal sealed class SamplingEvents : IStateEvents
             sampled.RemovedPerArea += sampled.Sampling.VolumeCubicMeters * concentration / compartment.ContactAreaSquareMeters;
             state[sampled.Node] *= (compartment.VolumeCubicMeters - sampled.Sampling.VolumeCubicMeters) / compartment.VolumeCubicMeters;
         }
+    }
+
+    private sealed class Renewed(CompartmentFace compartment, IReadOnlyList<double> timesSeconds, int node)
+    {
+        public CompartmentFace Compartment { get; } = compartment;
+
+        public IReadOnlyList<double> TimesSeconds { get; } = timesSeconds;
+
+        public int Node { get; } = node;
+
+        public List<(double TimeSeconds, double ConcentrationKgPerCubicMeter)> Replaced { get; } = [];
+
+        public double RemovedPerArea { get; set; }
     }
 
     private sealed class Sampled(CompartmentFace compartment, ReceptorSampling sampling, int node)

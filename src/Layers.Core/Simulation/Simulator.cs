@@ -128,6 +128,7 @@ public static class Simulator
             WorstMassBalanceError = recorder.WorstMassBalanceError,
             DispersedLayers = undissolved?.Summaries ?? [],
             DiffusionCell = DiffusionCellAnalysis.Of(model.Case, recorder.Samples, sampling),
+            Schedule = ScheduleAnalysis.Of(simulation, recorder.Samples),
             Statistics = statistics,
             FailureReason = failure,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
@@ -160,7 +161,8 @@ public static class Simulator
 
     /// <summary>
     /// The mass per area left in a sampled closed system after its last sample, kg/m2: the initial mass less what the
-    /// samples took, from a run to the duration (every sample lies within it). Null when no compartment is sampled,
+    /// samples took (and what renewed media carried away), from a run to the duration (every sample lies within it).
+    /// Null when no compartment is sampled or renewed,
     /// when a bath or first-order removal fixes the final state instead, or when that run does not complete.
     /// </summary>
     /// <remarks>
@@ -173,7 +175,8 @@ public static class Simulator
     {
         var faces = new[] { simulation.Left, simulation.Right };
         if (!simulation.IsClosed
-            || faces.OfType<CompartmentFace>().All(compartment => compartment.Sampling is null)
+            || (faces.OfType<CompartmentFace>().All(compartment => compartment.Sampling is null)
+                && !(simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right))))
             || faces.OfType<CompartmentFace>().Any(compartment => compartment.RemovalRatePerSecond > 0))
         {
             return null;

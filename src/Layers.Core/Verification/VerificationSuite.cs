@@ -37,6 +37,7 @@ public static class VerificationSuite
             if (pass == FiniteVolumes)
             {
                 results.AddRange(MultiLayerStacks(cancellation));
+                results.Add(RenewedVolume(cancellation));
             }
         }
 
@@ -73,6 +74,33 @@ public static class VerificationSuite
             $"{Crank}, eq. 4.37 (from memory), roots of tan q = -alpha q",
             "mass in the solution at D t/L^2 = 0.3, kg/m2",
             Analytic(0.3 * scale), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, pass.Tolerance, curve);
+    }
+
+    /// <summary>
+    /// A sheet into a limited volume replaced by fresh solution after every contact (a schedule's renewals; finite
+    /// volumes only, as the exact method does not take renewals): the third contact against the eigenfunction expansion
+    /// restarted from the profile each contact leaves.
+    /// </summary>
+    private static BenchmarkResult RenewedVolume(CancellationToken cancellation)
+    {
+        const double thickness = 50e-6, diffusivity = 4e-14, c0 = 920, alpha = 0.5, contacts = 3;
+        var volumePerArea = alpha * thickness;
+        var contact = 0.2 * thickness * thickness / diffusivity;
+        var periods = Enumerable.Range(0, (int)contacts)
+            .Select(index => new SchedulePeriod("contact", (0, 0), index + 1, (int)contacts, index * contact, contact, [Side.Right]))
+            .ToArray();
+        var simulation = Case(new ClosedFace(), new CompartmentFace("solution", volumePerArea, 1, 1, 0, null), contacts * contact, [Layer("sheet", thickness, diffusivity, 1, c0)])
+            with
+            {
+                Schedule = new ContactSchedule(periods),
+            };
+        var result = Simulator.Run(simulation, cancellation);
+        var expected = SheetIntoRenewedVolume.AmountPerContact(diffusivity, thickness, c0, volumePerArea, 1, contact, (int)contacts);
+        return new BenchmarkResult(
+            "plane sheet in a limited volume renewed after each contact, alpha 0.5",
+            $"{Crank}, eq. 4.37 (from memory), its eigenfunction expansion restarted at each renewal",
+            "mass into the third fresh solution, D T/L^2 = 0.2 per contact, kg/m2",
+            expected[^1], result.Schedule!.Periods[^1].Media.Single().ReceivedKgPerSquareMeter, DefaultTolerance);
     }
 
     private static IEnumerable<BenchmarkResult> Membrane(Pass pass, CancellationToken cancellation)

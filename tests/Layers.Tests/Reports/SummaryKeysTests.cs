@@ -17,7 +17,7 @@ public sealed partial class SummaryKeysTests
     private static readonly string[] Demos =
         [
             "laminate-fatty-food", "patch-on-skin", "diffusion-cell-membrane", "two-liquid-layers", "membrane-time-lag",
-            "hot-fill-barrier-shelf-life", "skin-diffusion-cell-sampling", "dispersed-matrix-patch",
+            "hot-fill-barrier-shelf-life", "skin-diffusion-cell-sampling", "dispersed-matrix-patch", "reusable-container-three-contacts",
         ];
 
     [Fact]

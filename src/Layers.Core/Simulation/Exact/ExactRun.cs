@@ -65,6 +65,7 @@ internal static class ExactRun
             Permeation = Permeation(simulation, final, samples[^1], solution),
             WorstMassBalanceError = worst,
             DiffusionCell = DiffusionCellAnalysis.Of(simulation, samples, new SamplingEvents(model)),
+            Schedule = ScheduleAnalysis.Of(simulation, samples),
             Statistics = Statistics(model, clock, reason),
             FailureReason = failure,
             Method = SolutionMethod.Laplace,

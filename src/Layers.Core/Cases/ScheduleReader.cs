@@ -1,0 +1,224 @@
+using System.Globalization;
+using System.Text.Json;
+using Layers.Core.Domain;
+using Layers.Core.Units;
+
+namespace Layers.Core.Cases;
+
+/// <summary>
+/// Reads <c>schedule</c>: an array of periods, each <c>{ "name", "duration", "renew", "repeat" }</c>, or blocks
+/// <c>{ "name", "repeat", "periods": [ ... ] }</c> of periods run together several times. Repetitions are unrolled
+/// into the <see cref="ContactSchedule"/> the solver runs. The faces a period renews are checked once the faces are
+/// read (<see cref="CheckFaces"/>).
+/// </summary>
+internal static class ScheduleReader
+{
+    /// <summary>Most periods a schedule may run, repetitions counted (each writes a row to the period table).</summary>
+    public const int MaxPeriods = 1000;
+
+    private static readonly string[] PeriodKeys = ["name", "duration", "renew", "repeat"];
+    private static readonly string[] BlockKeys = ["name", "repeat", "periods"];
+    private const string Example = "[ { \"name\": \"contact\", \"duration\": \"10 d\", \"renew\": [\"right\"], \"repeat\": 3 } ]";
+
+    /// <summary>A period as written, with the paths its faces are named at.</summary>
+    private sealed record Written(string Name, double DurationSeconds, IReadOnlyList<(Side Side, string Path)> Renewed);
+
+    /// <summary>
+    /// The schedule (null when none is given or it has errors), with the JSON path of every face a period names (also
+    /// when other parts have errors, so that every mistake is reported at once).
+    /// </summary>
+    public static (ContactSchedule? Schedule, IReadOnlyList<(Side Side, string Path)> NamedFaces)? Read(JsonFields root, ReadContext context)
+    {
+        if (root.Member("schedule") is not { } array)
+        {
+            return null;
+        }
+
+        if (array.ValueKind != JsonValueKind.Array || array.GetArrayLength() == 0)
+        {
+            var found = array.ValueKind == JsonValueKind.Array ? "an empty array" : JsonFields.Describe(array);
+            root.Error("schedule", $"expected a non-empty array of periods such as {Example}; found {found}");
+            return null;
+        }
+
+        var errorsBefore = context.Errors.Count;
+        var periods = new List<SchedulePeriod>();
+        var named = new List<(Side, string)>();
+        var start = 0.0;
+        var index = 0;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{root.PathOf("schedule")}[{index++}]";
+            var isBlock = element.ValueKind == JsonValueKind.Object && element.TryGetProperty("periods", out _);
+            var entry = JsonFields.Open(element, path, context.Errors, isBlock ? BlockKeys : PeriodKeys);
+            if (entry is null)
+            {
+                continue;
+            }
+
+            var repeat = Repeat(entry, required: isBlock);
+            var block = isBlock ? BlockPeriods(entry, context) : Period(entry, context, $"period {index}") is { } one ? [one] : [];
+            named.AddRange(block.SelectMany(period => period.Renewed));
+            if (repeat is not { } count || block.Count == 0)
+            {
+                continue;
+            }
+
+            if (periods.Count + (count * block.Count) > MaxPeriods)
+            {
+                context.Errors.Add(new CaseError(path, string.Create(CultureInfo.InvariantCulture,
+                    $"the schedule would run more than {MaxPeriods} periods (repetitions counted); shorten it or run it in parts")));
+                return (null, named);
+            }
+
+            for (var repetition = 1; repetition <= count; repetition++)
+            {
+                foreach (var (period, slot) in block.Select((period, slot) => (period, slot)))
+                {
+                    periods.Add(new SchedulePeriod(period.Name, (index - 1, slot), repetition, count, start, period.DurationSeconds, period.Renewed.Select(face => face.Side).Distinct().ToArray()));
+                    start += period.DurationSeconds;
+                }
+            }
+        }
+
+        return (context.Errors.Count == errorsBefore && periods.Count > 0 ? new ContactSchedule(periods) : null, named);
+    }
+
+    /// <summary>
+    /// Checks that each face a period renews holds a medium that can be replaced: a compartment without sampling or a
+    /// solubility of its own (a bath never changes, a closed face holds nothing).
+    /// </summary>
+    public static void CheckFaces(IReadOnlyList<(Side Side, string Path)> named, FaceCondition left, FaceCondition right, ReadContext context)
+    {
+        foreach (var (side, path) in named)
+        {
+            var face = side == Side.Left ? left : right;
+            var problem = face switch
+            {
+                CompartmentFace { Sampling: not null } => "its compartment is sampled, and renewing a sampled compartment is not supported; give one or the other",
+                CompartmentFace { SolubilityKgPerCubicMeter: not null } => "its compartment has a solubility, and renewing a medium with undissolved substance is not supported",
+                CompartmentFace => null,
+                BathFace => "it is a bath, whose concentration never changes; only a compartment's medium can be renewed",
+                _ => $"it is {face.KindName}; only a compartment's medium can be renewed",
+            };
+            if (problem is not null)
+            {
+                context.Errors.Add(new CaseError(path, $"cannot renew the {SideName(side)} face: {problem}"));
+            }
+        }
+    }
+
+    /// <summary>The duration of the schedule checked against the one the case gives otherwise (error when they differ).</summary>
+    public static void CheckDuration(ContactSchedule schedule, double givenSeconds, string givenPath, string givenText, ReadContext context)
+    {
+        if (Math.Abs(schedule.DurationSeconds - givenSeconds) > 1e-9 * givenSeconds)
+        {
+            context.Errors.Add(new CaseError(givenPath, string.Create(CultureInfo.InvariantCulture,
+                $"is {givenText} but the schedule's periods last {schedule.DurationSeconds / 86400:0.######} d in all; they must agree")));
+        }
+    }
+
+    private static List<Written> BlockPeriods(JsonFields block, ReadContext context)
+    {
+        var array = block.Member("periods")!.Value;
+        if (array.ValueKind != JsonValueKind.Array || array.GetArrayLength() == 0)
+        {
+            block.Error("periods", $"expected a non-empty array of periods such as [ {{ \"name\": \"wear\", \"duration\": \"1 d\" }} ]; found {JsonFields.Describe(array)}");
+            return [];
+        }
+
+        var blockName = block.Text("name");
+        var result = new List<Written>();
+        var index = 0;
+        var failed = false;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{block.PathOf("periods")}[{index++}]";
+            if (element.ValueKind == JsonValueKind.Object && element.TryGetProperty("periods", out _))
+            {
+                context.Errors.Add(new CaseError(path, "a block's periods cannot hold another block; repeat the inner periods in the outer block instead"));
+                failed = true;
+                continue;
+            }
+
+            if (JsonFields.Open(element, path, context.Errors, PeriodKeys.Where(key => key != "repeat").ToArray()) is not { } fields
+                || Period(fields, context, blockName is null ? $"period {index}" : $"{blockName}, period {index}") is not { } period)
+            {
+                failed = true;
+                continue;
+            }
+
+            result.Add(period);
+        }
+
+        return failed ? [] : result;
+    }
+
+    private static Written? Period(JsonFields period, ReadContext context, string defaultName)
+    {
+        var name = period.Text("name") ?? defaultName;
+        var duration = ReadContext.Positive(period, "duration", Dimension.Time, required: true);
+        var renewed = Renewed(period, context);
+        return duration is { } seconds && renewed is not null ? new Written(name, seconds, renewed) : null;
+    }
+
+    private static List<(Side, string)>? Renewed(JsonFields period, ReadContext context)
+    {
+        if (period.Member("renew") is not { } array)
+        {
+            return [];
+        }
+
+        if (array.ValueKind != JsonValueKind.Array)
+        {
+            period.Error("renew", $"expected an array of faces whose medium is replaced by a fresh one at the period's start, e.g. [\"right\"]; found {JsonFields.Describe(array)}");
+            return null;
+        }
+
+        var faces = new List<(Side, string)>();
+        var index = 0;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{period.PathOf("renew")}[{index++}]";
+            switch (element.ValueKind == JsonValueKind.String ? element.GetString() : null)
+            {
+                case "left":
+                    faces.Add((Side.Left, path));
+                    break;
+                case "right":
+                    faces.Add((Side.Right, path));
+                    break;
+                default:
+                    context.Errors.Add(new CaseError(path, $"expected \"left\" or \"right\"; found {JsonFields.Describe(element)}"));
+                    return null;
+            }
+        }
+
+        return faces;
+    }
+
+    private static int? Repeat(JsonFields entry, bool required)
+    {
+        if (!entry.Has("repeat"))
+        {
+            if (required)
+            {
+                entry.Error("repeat", "is required in a block of periods: how many times the block runs, e.g. 3");
+                return null;
+            }
+
+            return 1;
+        }
+
+        var count = entry.Integer("repeat");
+        if (count is < 1 or > MaxPeriods)
+        {
+            entry.Error("repeat", string.Create(CultureInfo.InvariantCulture, $"must be a whole number from 1 to {MaxPeriods}; got {count}"));
+            return null;
+        }
+
+        return count;
+    }
+
+    private static string SideName(Side side) => side == Side.Left ? "left" : "right";
+}

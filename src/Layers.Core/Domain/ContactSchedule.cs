@@ -1,0 +1,33 @@
+namespace Layers.Core.Domain;
+
+/// <summary>
+/// A sequence of periods that together make the run, each starting with the face media it names replaced by fresh
+/// ones: an article for repeated use tested with a fresh portion of food simulant each time, or a receptor solution
+/// exchanged completely at set times. Repeated blocks are unrolled, so <see cref="Periods"/> lists every period run.
+/// </summary>
+/// <param name="Periods">The periods in order, consecutive from t = 0.</param>
+public sealed record ContactSchedule(IReadOnlyList<SchedulePeriod> Periods)
+{
+    /// <summary>The whole schedule's duration, s.</summary>
+    public double DurationSeconds => Periods[^1].EndSeconds;
+
+    /// <summary>
+    /// The times at which the medium on a side is replaced, s, ascending: the starts of the periods that renew it,
+    /// except t = 0, where every medium is fresh already.
+    /// </summary>
+    public IReadOnlyList<double> RenewalTimes(Side side) =>
+        Periods.Where(period => period.StartSeconds > 0 && period.Renewed.Contains(side)).Select(period => period.StartSeconds).ToArray();
+
+    /// <summary>True when some period renews the medium on a side.</summary>
+    public bool Renews(Side side) => RenewalTimes(side).Count > 0;
+
+    /// <summary>
+    /// The periods during which the medium on a side is one portion, fresh at the period's start: the first period and
+    /// every period that renews it. A portion lasts until the next renewal, so its contact may span several periods.
+    /// </summary>
+    public IReadOnlyList<(double StartSeconds, double EndSeconds)> Contacts(Side side)
+    {
+        var starts = RenewalTimes(side).Prepend(0.0).ToArray();
+        return starts.Select((start, index) => (start, index + 1 < starts.Length ? starts[index + 1] : DurationSeconds)).ToArray();
+    }
+}

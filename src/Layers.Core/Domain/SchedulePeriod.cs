@@ -1,0 +1,23 @@
+namespace Layers.Core.Domain;
+
+/// <summary>
+/// One period of a contact schedule, as run: its place on the run's clock and the face media replaced by fresh ones
+/// at its start. A period that the schedule repeats appears once per repetition.
+/// </summary>
+/// <param name="Name">The period's name as the case gives it, for reports.</param>
+/// <param name="Slot">Which entry of the schedule it comes from, and which period of that entry's block (from 0 each):
+/// the repetitions of one period share it.</param>
+/// <param name="Repetition">Which repetition of its block this is, from 1; 1 for a period that is not repeated.</param>
+/// <param name="RepetitionCount">How many times its block runs; 1 for a period that is not repeated.</param>
+/// <param name="StartSeconds">Start on the run's clock, s.</param>
+/// <param name="DurationSeconds">Duration, s, &gt; 0.</param>
+/// <param name="Renewed">The faces whose compartment is emptied and refilled with fresh medium at the start.</param>
+public sealed record SchedulePeriod(
+    string Name, (int Entry, int Period) Slot, int Repetition, int RepetitionCount, double StartSeconds, double DurationSeconds, IReadOnlyList<Side> Renewed)
+{
+    /// <summary>End on the run's clock, s.</summary>
+    public double EndSeconds => StartSeconds + DurationSeconds;
+
+    /// <summary>"contact 2 of 3", or the name alone for a period that is not repeated.</summary>
+    public string Label => RepetitionCount > 1 ? $"{Name} {Repetition} of {RepetitionCount}" : Name;
+}

@@ -1,0 +1,125 @@
+using System.Globalization;
+using Layers.Core.Results;
+
+namespace Layers.Core.Reports;
+
+/// <summary>
+/// The results of a schedule as tables in the display units: what each period delivered into each compartment and
+/// its concentration at the period's end, then the repeated-use verdict and where repetitions settle.
+/// </summary>
+public static class ScheduleTables
+{
+    /// <summary>The tables for a result; none without a schedule.</summary>
+    public static IReadOnlyList<TextTable> For(SimulationResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        if (result.Schedule is not { } schedule)
+        {
+            return [];
+        }
+
+        var tables = new List<TextTable> { Periods(result, schedule) };
+        if (schedule.PeriodicSteadyStates.Count > 0)
+        {
+            tables.Add(Fluxes(result, schedule));
+        }
+
+        if (schedule.RepeatedUse is { } verdict)
+        {
+            tables.Add(RepeatedUse(verdict));
+        }
+
+        if (schedule.PeriodicSteadyStates.Count > 0)
+        {
+            tables.Add(new TextTable(
+                "Repetitions",
+                ["period", "repetitions", "settled (within the accuracy of the one before)", "last change"],
+                schedule.PeriodicSteadyStates.Select(state => (IReadOnlyList<string>)
+                [
+                    state.PeriodName,
+                    state.Repetitions.ToString(CultureInfo.InvariantCulture),
+                    state.SettledAtRepetition is { } at ? $"from repetition {at.ToString(CultureInfo.InvariantCulture)}" : "not within the schedule",
+                    DisplayFormat.Percent(state.LastRelativeChange),
+                ]).ToList()));
+        }
+
+        return tables;
+    }
+
+    private static TextTable Periods(SimulationResult result, ScheduleSummary schedule)
+    {
+        var simulation = result.Case;
+        var format = new DisplayFormat(simulation.Display);
+        var media = schedule.Periods[0].Media;
+        var headers = new List<string> { "period", $"from [{simulation.Display.Time.Symbol}]", $"to [{simulation.Display.Time.Symbol}]" };
+        foreach (var medium in media)
+        {
+            var face = simulation.Face(medium.Side);
+            headers.Add($"{medium.Name}: received [{simulation.Display.MassPerArea.Symbol}]");
+            headers.Add($"{medium.Name}: at the end [{format.MediumConcentrationUnit(face)}]");
+        }
+
+        var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
+        [
+            outcome.Period.Label,
+            format.TimeValue(outcome.Period.StartSeconds),
+            format.TimeValue(outcome.Period.EndSeconds),
+            .. outcome.Media.SelectMany(medium => new[]
+            {
+                format.MassPerAreaValue(medium.ReceivedKgPerSquareMeter) + (medium.FreshAtStart && outcome.Period.StartSeconds > 0 ? " (fresh)" : string.Empty),
+                format.MediumConcentrationValue(medium.ConcentrationAtEndKgPerCubicMeter, simulation.Face(medium.Side)),
+            }),
+        ]).ToList();
+        return new TextTable("Periods (amounts received during each period; \"fresh\": the medium was renewed at its start)", headers, rows);
+    }
+
+    /// <summary>Peak and trough of the flux into each medium in each period: what a repeated dose delivers and how low it falls.</summary>
+    private static TextTable Fluxes(SimulationResult result, ScheduleSummary schedule)
+    {
+        var display = result.Case.Display;
+        var headers = new List<string> { "period" };
+        foreach (var medium in schedule.Periods[0].Media)
+        {
+            headers.Add($"{medium.Name}: highest flux [{display.Flux.Symbol}]");
+            headers.Add($"{medium.Name}: lowest flux [{display.Flux.Symbol}]");
+        }
+
+        var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
+        [
+            outcome.Period.Label,
+            .. outcome.Media.SelectMany(medium => new[]
+            {
+                DisplayFormat.Number(display.Flux.FromSi(medium.HighestFluxKgPerSquareMeterSecond)),
+                DisplayFormat.Number(display.Flux.FromSi(medium.LowestFluxKgPerSquareMeterSecond)),
+            }),
+        ]).ToList();
+        return new TextTable("Flux into each medium in each period (highest and lowest at the period's output times)", headers, rows);
+    }
+
+    private static TextTable RepeatedUse(RepeatedUseVerdict verdict)
+    {
+        var rows = new List<IReadOnlyList<string>>();
+        for (var contact = 1; contact <= verdict.Contacts.Count; contact++)
+        {
+            var judged = contact == verdict.JudgedContact ? "judged" : string.Empty;
+            var rose = verdict.RisingFrom.Contains(contact - 1) ? "rose from the contact before" : string.Empty;
+            rows.Add([contact.ToString(CultureInfo.InvariantCulture), MgPerKg(verdict.Contacts[contact - 1]), string.Join("; ", new[] { judged, rose }.Where(note => note.Length > 0))]);
+        }
+
+        var limit = verdict.LimitKgPerKg is { } value ? $"limit {MgPerKg(value)}" : "no limit given";
+        var findings = new List<string>();
+        if (verdict.LimitKgPerKg is not null)
+        {
+            findings.Add(verdict.LimitExceeded ? "EXCEEDS the limit at the judged contact" : "within the limit at the judged contact");
+        }
+
+        findings.Add(verdict.RisingFrom.Count > 0 ? "migration RISES between contacts" : "migration does not rise between contacts");
+        rows.Add(["verdict (model)", limit, string.Join("; ", findings)]);
+        return new TextTable(
+            "Repeated use: the food at the end of each contact with a fresh portion (the third contact is judged; Regulation (EU) No 10/2011, Art. 17)",
+            ["contact", "in the food", "note"],
+            rows);
+    }
+
+    private static string MgPerKg(double massFraction) => $"{DisplayFormat.Number(massFraction * 1e6)} mg/kg";
+}

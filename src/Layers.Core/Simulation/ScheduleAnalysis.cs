@@ -1,0 +1,158 @@
+using Layers.Core.Domain;
+using Layers.Core.Results;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// Reads the results of each period of a schedule off the run's time series, which holds a sample at every period
+/// end, taken before that moment's renewals (<see cref="OutputSchedule"/>, and state events come after outputs).
+/// The cumulative amount into a medium counts what renewals carried away, so a period's amount is the difference of
+/// that cumulative amount at its two ends.
+/// </summary>
+public static class ScheduleAnalysis
+{
+    /// <summary>The schedule's results; null for a case without a schedule or a series that does not reach its end.</summary>
+    public static ScheduleSummary? Of(SimulationCase simulation, IReadOnlyList<StateSample> series)
+    {
+        ArgumentNullException.ThrowIfNull(simulation);
+        ArgumentNullException.ThrowIfNull(series);
+        if (simulation.Schedule is not { } schedule || series.Count == 0)
+        {
+            return null;
+        }
+
+        var outcomes = new List<PeriodOutcome>();
+        var start = series[0];
+        foreach (var period in schedule.Periods)
+        {
+            if (At(series, period.EndSeconds) is not { } end)
+            {
+                return null;
+            }
+
+            var media = new List<MediumInPeriod>();
+            foreach (var side in new[] { Side.Left, Side.Right })
+            {
+                if (simulation.Face(side) is CompartmentFace compartment && Face(end, side) is { } atEnd && Face(start, side) is { } atStart)
+                {
+                    var fresh = period.StartSeconds == 0 || period.Renewed.Contains(side);
+                    var concentration = atEnd.ConcentrationKgPerCubicMeter;
+                    var fluxes = OutputSchedule.WithinPeriod(schedule, period)
+                        .Select(time => At(series, time) is { } sample ? Face(sample, side)!.FluxIntoMediumKgPerSquareMeterSecond : double.NaN)
+                        .Where(double.IsFinite)
+                        .DefaultIfEmpty(atEnd.FluxIntoMediumKgPerSquareMeterSecond)
+                        .ToArray();
+                    media.Add(new MediumInPeriod(
+                        side,
+                        compartment.Name,
+                        fresh,
+                        atEnd.TransferredIntoMediumPerArea - atStart.TransferredIntoMediumPerArea,
+                        concentration,
+                        concentration / compartment.DensityKgPerCubicMeter,
+                        fluxes.Max(),
+                        fluxes.Min()));
+                }
+            }
+
+            outcomes.Add(new PeriodOutcome(period, media));
+            start = end;
+        }
+
+        return new ScheduleSummary(
+            outcomes, SteadyStates(outcomes, simulation.Numerics.Accuracy), RepeatedUse(simulation, schedule, series), Renewed(simulation, schedule, series));
+    }
+
+    /// <summary>Each renewed medium and the net mass its replaced portions took away: V (c - c_fresh) per area at each renewal.</summary>
+    private static List<RenewedMedium> Renewed(SimulationCase simulation, ContactSchedule schedule, IReadOnlyList<StateSample> series)
+    {
+        var result = new List<RenewedMedium>();
+        foreach (var side in new[] { Side.Left, Side.Right })
+        {
+            if (!schedule.Renews(side) || simulation.Face(side) is not CompartmentFace compartment)
+            {
+                continue;
+            }
+
+            var times = schedule.RenewalTimes(side);
+            var carried = times.Sum(time => At(series, time) is { } sample && Face(sample, side) is { } face
+                ? (face.ConcentrationKgPerCubicMeter - compartment.InitialConcentrationKgPerCubicMeter) * compartment.VolumePerAreaMeters
+                : double.NaN);
+            result.Add(new RenewedMedium(side, compartment.Name, times.Count, carried));
+        }
+
+        return result;
+    }
+
+    /// <summary>
+    /// For each repeated period: the first repetition whose amounts into every medium lie within the accuracy of the
+    /// repetition before.
+    /// </summary>
+    private static List<PeriodicSteadyState> SteadyStates(IReadOnlyList<PeriodOutcome> outcomes, double accuracy)
+    {
+        var result = new List<PeriodicSteadyState>();
+        var repeated = outcomes.Where(outcome => outcome.Period.RepetitionCount > 1).GroupBy(outcome => outcome.Period.Slot);
+        foreach (var group in repeated)
+        {
+            var runs = group.ToList();
+            int? settled = null;
+            var change = double.NaN;
+            for (var r = 1; r < runs.Count; r++)
+            {
+                change = runs[r].Media.Zip(runs[r - 1].Media, (now, before) => RelativeChange(now.ReceivedKgPerSquareMeter, before.ReceivedKgPerSquareMeter))
+                    .DefaultIfEmpty(0).Max();
+                if (settled is null && change <= accuracy)
+                {
+                    settled = runs[r].Period.Repetition;
+                }
+            }
+
+            result.Add(new PeriodicSteadyState(runs[0].Period.Name, runs[0].Period.RepetitionCount, settled, change));
+        }
+
+        return result;
+    }
+
+    /// <summary>
+    /// The repeated-use verdict when the case is a food-contact case whose food medium is renewed: the food's
+    /// concentration at the end of each contact (a portion's whole stay), judged as <see cref="RepeatedUseVerdict"/>
+    /// states. A rise counts when it exceeds the run's accuracy, so that round-off between equal contacts is not one.
+    /// </summary>
+    private static RepeatedUseVerdict? RepeatedUse(SimulationCase simulation, ContactSchedule schedule, IReadOnlyList<StateSample> series)
+    {
+        if (simulation.FoodContact is not { } food
+            || !schedule.Renews(food.FoodSide)
+            || simulation.Face(food.FoodSide) is not CompartmentFace compartment)
+        {
+            return null;
+        }
+
+        var density = compartment.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
+        var contacts = new List<double>();
+        foreach (var (_, endSeconds) in schedule.Contacts(food.FoodSide))
+        {
+            if (At(series, endSeconds) is not { } end || Face(end, food.FoodSide) is not { } face)
+            {
+                return null;
+            }
+
+            contacts.Add(face.ConcentrationKgPerCubicMeter / density);
+        }
+
+        var accuracy = simulation.Numerics.Accuracy;
+        var rising = Enumerable.Range(1, contacts.Count - 1)
+            .Where(k => contacts[k] > contacts[k - 1] * (1 + accuracy) && contacts[k] - contacts[k - 1] > 0)
+            .ToArray();
+        return new RepeatedUseVerdict(contacts, Math.Min(3, contacts.Count), food.SpecificMigrationLimit, rising);
+    }
+
+    private static double RelativeChange(double now, double before)
+    {
+        var scale = Math.Max(Math.Abs(now), Math.Abs(before));
+        return scale == 0 ? 0 : Math.Abs(now - before) / scale;
+    }
+
+    private static StateSample? At(IReadOnlyList<StateSample> series, double timeSeconds)
+        => series.FirstOrDefault(sample => Math.Abs(sample.TimeSeconds - timeSeconds) <= 1e-9 * timeSeconds);
+
+    private static FaceSample? Face(StateSample sample, Side side) => side == Side.Left ? sample.Left : sample.Right;
+}
