@@ -65,9 +65,10 @@ public sealed record BatchKeyResults(
         {
             LeftConcentrationKgPerCubicMeter = end.Left?.ConcentrationKgPerCubicMeter,
             RightConcentrationKgPerCubicMeter = end.Right?.ConcentrationKgPerCubicMeter,
-            // The food's figures as the case's own summary and the limit verdict give them (end of the history).
-            FoodConcentrationKgPerKg = result.FoodContact?.FinalConcentration,
-            FoodMigrationKgPerSquareMeter = result.FoodContact?.FinalMigrationPerArea,
+            // The food's figures as the limit verdict reads them: at the end of the history, or for an article tested in
+            // repeated contacts with fresh food, at the end of the judged contact.
+            FoodConcentrationKgPerKg = result.Schedule?.RepeatedUse?.JudgedValue ?? result.FoodContact?.FinalConcentration,
+            FoodMigrationKgPerSquareMeter = result.Schedule?.RepeatedUse?.JudgedMigrationKgPerSquareMeter ?? result.FoodContact?.FinalMigrationPerArea,
             TimeToLimitSeconds = result.FoodContact?.LimitReachedSeconds,
         };
     }

@@ -70,10 +70,15 @@ public sealed record PeriodicSteadyState(string PeriodName, int Repetitions, int
 /// <param name="JudgedContact">Which contact is judged, from 1.</param>
 /// <param name="LimitKgPerKg">The specific migration limit, kg/kg; null when the case gives none.</param>
 /// <param name="RisingFrom">The contacts after which migration rose (k where contact k + 1 exceeds contact k), from 1.</param>
-public sealed record RepeatedUseVerdict(IReadOnlyList<double> Contacts, int JudgedContact, double? LimitKgPerKg, IReadOnlyList<int> RisingFrom)
+/// <param name="ContactMigrationKgPerSquareMeter">What the food held at the end of each contact per contact area, kg/m2.</param>
+public sealed record RepeatedUseVerdict(
+    IReadOnlyList<double> Contacts, int JudgedContact, double? LimitKgPerKg, IReadOnlyList<int> RisingFrom, IReadOnlyList<double> ContactMigrationKgPerSquareMeter)
 {
     /// <summary>The judged contact's concentration, kg/kg.</summary>
     public double JudgedValue => Contacts[JudgedContact - 1];
+
+    /// <summary>The judged contact's migration per contact area, kg/m2.</summary>
+    public double JudgedMigrationKgPerSquareMeter => ContactMigrationKgPerSquareMeter[JudgedContact - 1];
 
     /// <summary>True when the judged contact exceeds the limit.</summary>
     public bool LimitExceeded => LimitKgPerKg is { } limit && JudgedValue > limit;

@@ -128,6 +128,7 @@ public static class ScheduleAnalysis
 
         var density = compartment.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
         var contacts = new List<double>();
+        var migration = new List<double>();
         foreach (var (_, endSeconds) in schedule.Contacts(food.FoodSide))
         {
             if (At(series, endSeconds) is not { } end || Face(end, food.FoodSide) is not { } face)
@@ -136,13 +137,14 @@ public static class ScheduleAnalysis
             }
 
             contacts.Add(face.ConcentrationKgPerCubicMeter / density);
+            migration.Add((face.ConcentrationKgPerCubicMeter - compartment.InitialConcentrationKgPerCubicMeter) * compartment.VolumePerAreaMeters);
         }
 
         var accuracy = simulation.Numerics.Accuracy;
         var rising = Enumerable.Range(1, contacts.Count - 1)
             .Where(k => contacts[k] > contacts[k - 1] * (1 + accuracy) && contacts[k] - contacts[k - 1] > 0)
             .ToArray();
-        return new RepeatedUseVerdict(contacts, Math.Min(3, contacts.Count), food.SpecificMigrationLimit, rising);
+        return new RepeatedUseVerdict(contacts, Math.Min(3, contacts.Count), food.SpecificMigrationLimit, rising, migration);
     }
 
     private static double RelativeChange(double now, double before)

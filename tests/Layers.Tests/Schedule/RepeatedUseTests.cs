@@ -40,7 +40,22 @@ public sealed class RepeatedUseTests
         Assert.False(verdict.Complies);
     }
 
-    private static SimulationResult Run(string? barrier, string limit)
+    [Fact]
+    public void With_more_than_three_contacts_the_limit_check_and_the_batch_row_read_the_third()
+    {
+        var result = Run(barrier: null, limit: "1 mg/kg", contacts: 5);
+
+        var verdict = result.Schedule!.RepeatedUse!;
+        Assert.Equal(3, verdict.JudgedContact);
+        var check = Layers.Core.Batch.LimitCheck.Of(result)!;
+        Assert.Equal(verdict.Contacts[2], check.ValueSi);
+        Assert.NotEqual(result.FoodContact!.FinalConcentration, check.ValueSi);
+        var row = Layers.Core.Batch.BatchKeyResults.From(result);
+        Assert.Equal(verdict.Contacts[2], row.FoodConcentrationKgPerKg);
+        Assert.Equal(verdict.JudgedMigrationKgPerSquareMeter, row.FoodMigrationKgPerSquareMeter);
+    }
+
+    private static SimulationResult Run(string? barrier, string limit, int contacts = 3)
     {
         var layers = barrier is null
             ? """[ { "name": "source", "thickness": "50 um", "diffusionCoefficient": "1e-9 cm2/s", "initialConcentration": "500 mg/kg", "density": "0.9 g/cm3" } ]"""
@@ -50,9 +65,9 @@ public sealed class RepeatedUseTests
               "layers": {{layers}},
               "left": { "kind": "closed" },
               "right": { "kind": "compartment", "name": "simulant", "mass": "1 kg", "density": "1 g/cm3", "area": "6 dm2" },
-              "schedule": [ { "name": "contact", "duration": "5 d", "renew": ["right"], "repeat": 3 } ],
+              "schedule": [ { "name": "contact", "duration": "5 d", "renew": ["right"], "repeat": {{contacts}} } ],
               "foodContact": {
-                "stages": [ { "name": "test", "duration": "15 d", "temperature": "40 degC" } ],
+                "stages": [ { "name": "test", "duration": "{{5 * contacts}} d", "temperature": "40 degC" } ],
                 "specificMigrationLimit": "{{limit}}"
               }
             }
