@@ -4,8 +4,8 @@ using Layers.Core.Reports;
 namespace Layers.Cli.Commands;
 
 /// <summary>
-/// The batch summary as a console table: the table for people of summary.md without its detail columns. Case names
-/// and statuses never wrap; when every case is a sub-case of one sweep, the sweep's name is said once in the header
+/// The batch summary as a console table: the table for people of summary.md without its detail columns, and without
+/// the status column when every case succeeded (the title says so). Case names and statuses never wrap; when every case is a sub-case of one sweep, the sweep's name is said once in the header
 /// rather than on every row. The messages of cases that did not succeed go to stderr, one line each, where they do
 /// not wrap into the table.
 /// </summary>
@@ -14,6 +14,17 @@ internal static class BatchTable
     public static TextTable Of(IReadOnlyList<BatchRow> rows)
     {
         var table = BatchPeopleTable.Of(rows, details: false) with { WholeColumns = 2 };
+        if (rows.All(row => row.Status == BatchStatus.Succeeded))
+        {
+            // The title says every case succeeded; the column would only take width from the results.
+            table = table with
+            {
+                Headers = [table.Headers[0], .. table.Headers.Skip(2)],
+                Rows = [.. table.Rows.Select(row => (IReadOnlyList<string>)[row[0], .. row.Skip(2)])],
+                WholeColumns = 1,
+            };
+        }
+
         var prefix = SweepPrefix(rows);
         return prefix.Length == 0
             ? table

@@ -25,7 +25,7 @@ public static class BatchPeopleTable
             new("status", false, row => BatchColumns.StatusName(row.Status)),
             .. BatchInputColumns.Of(rows, Number),
             new("verdict", false, row => BatchColumns.Verdict(row.Limit)),
-            Value($"food concentration [{BatchTradeUnits.FoodConcentration.Symbol}]", row => BatchTradeUnits.In(BatchTradeUnits.FoodConcentration, row.Results?.FoodConcentrationKgPerKg)),
+            Value($"in food [{BatchTradeUnits.FoodConcentration.Symbol}]", row => BatchTradeUnits.In(BatchTradeUnits.FoodConcentration, row.Results?.FoodConcentrationKgPerKg)),
             Value($"limit [{BatchTradeUnits.FoodConcentration.Symbol}]", row => BatchTradeUnits.In(BatchTradeUnits.FoodConcentration, row.Limit?.LimitSi)),
             Value($"migration [{BatchTradeUnits.FoodMigration.Symbol}]", row => BatchTradeUnits.In(BatchTradeUnits.FoodMigration, row.Results?.FoodMigrationKgPerSquareMeter)),
             .. details ? [Value($"left received [{BatchTradeUnits.Received.Symbol}]", row => NotFood(row, row.Results?.LeftReceivedKgPerSquareMeter, BatchTradeUnits.Received))] : Array.Empty<BatchColumn>(),
