@@ -84,7 +84,7 @@ internal static class CumulativeAmountPlot
             .Max();
         yAxis.Minimum = 0;
         yAxis.Maximum = high > 0 ? high * (1 + TopMargin) : 1;
-        yAxis.LabelFormatter = value => value < 0 ? string.Empty : DisplayText.Tick(value);
+        AxisTicks.OneFormat(yAxis, value => value >= 0);
         return model;
     }
 

@@ -44,7 +44,7 @@ public static class EquilibriumPlot
         yAxis.Maximum = AxisTop;
         yAxis.MajorStep = 10;
         yAxis.MinorStep = 10;
-        yAxis.LabelFormatter = value => value > 100.5 ? string.Empty : DisplayText.Tick(value);
+        AxisTicks.OneFormat(yAxis, value => value <= 100.5);
         yAxis.ExtraGridlines = [.. ThresholdTimes.Levels.Select(level => 100 * level)];
         yAxis.ExtraGridlineColor = PlotStyle.ThresholdLine;
         yAxis.ExtraGridlineStyle = LineStyle.Dash;

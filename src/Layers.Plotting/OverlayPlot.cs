@@ -11,12 +11,20 @@ namespace Layers.Plotting;
 /// </summary>
 public static class OverlayPlot
 {
+    // Padding at each end of both axes, as a fraction of the plot area: a little more than a marker's radius.
+    private const double MarkerRoom = 0.03;
+
     /// <summary>The plot of one benchmark curve.</summary>
     public static PlotModel Create(BenchmarkResult benchmark, BenchmarkCurve curve, PlotOptions options)
     {
         var model = PlotFrame.Create(benchmark.Name, [benchmark.Source], options);
-        model.Axes.Add(PlotFrame.Logarithmic(AxisPosition.Bottom, curve.XLabel));
-        model.Axes.Add(PlotFrame.Linear(AxisPosition.Left, curve.YLabel));
+        var xAxis = PlotFrame.Logarithmic(AxisPosition.Bottom, curve.XLabel);
+        var yAxis = PlotFrame.Linear(AxisPosition.Left, curve.YLabel);
+        // Room beyond the first and last values, so that the markers there are drawn whole, not cut by the frame.
+        (xAxis.MinimumPadding, xAxis.MaximumPadding) = (MarkerRoom, MarkerRoom);
+        (yAxis.MinimumPadding, yAxis.MaximumPadding) = (MarkerRoom, MarkerRoom);
+        model.Axes.Add(xAxis);
+        model.Axes.Add(yAxis);
         var analytic = new LineSeries
         {
             Title = "analytic",

@@ -1,0 +1,79 @@
+using Layers.Core.Domain;
+using Layers.Core.Results;
+
+namespace Layers.Plotting;
+
+/// <summary>
+/// The caption of each plot in report.html: what the figure shows and how to read it, in words a reader who has not
+/// seen the program can follow; the plot's own title and subtitle carry the case's numbers.
+/// </summary>
+internal static class PlotCaptions
+{
+    public static string Profile(SimulationResult result)
+    {
+        var simulation = result.Case;
+        var media = simulation.Left is BathFace or CompartmentFace || simulation.Right is BathFace or CompartmentFace
+            ? " The blue strips beyond the faces stand for the media in contact, at their concentration at the same times."
+            : string.Empty;
+        var jumps = simulation.Stack.Count > 1
+            ? " The jumps at the interfaces are the partition coefficients (at equilibrium the left side holds K times the right side), not steps of the solution."
+            : string.Empty;
+        return "Concentration across the stack against depth from the left face, one colour per report time, the dashed grey line the initial state; "
+            + "the shaded bands are the layers, named at the top." + media + jumps
+            + " A curve that falls steeply inside a layer shows where the diffusion is slow.";
+    }
+
+    public static string Transfer(SimulationResult result)
+    {
+        var simulation = result.Case;
+        if (FaceText.MediumName(simulation.Left) is null && FaceText.MediumName(simulation.Right) is null)
+        {
+            return "Both faces are closed, so nothing leaves the stack: the mass per area held by each layer against time, "
+                + "which shows the drug moving from layer to layer; the total stays constant.";
+        }
+
+        var text = "Mass per contact area that has moved into each face medium against time (for a medium that feeds the stack, "
+            + "the mass that has moved out of it, drawn positive). ";
+        if (simulation.Left is CompartmentFace || simulation.Right is CompartmentFace)
+        {
+            text += "A compartment's concentration is read on the right-hand scale when there is one receiving compartment that keeps "
+                + "all it receives, else in the panel under the amounts. ";
+        }
+
+        if (MigrationLimit.Of(result) is not null)
+        {
+            text += "The dashed red line is the specific migration limit as a mass per contact area; where the food's curve meets it, the food reaches the limit. ";
+        }
+
+        return text + "A curve that levels off shows the medium approaching equilibrium.";
+    }
+
+    public static string FinalState(SimulationResult result)
+    {
+        var simulation = result.Case;
+        if (result.FinalState.Kind == FinalStateKind.SteadyPermeation)
+        {
+            var receiver = FaceText.MediumName(simulation.Right) ?? "the right face medium";
+            return $"Cumulative amount per contact area received by {receiver} against time, with the steady-state asymptote "
+                + "J (t - lag time) dashed: its slope is the steady flux J and it meets the time axis at the lag time (marked).";
+        }
+
+        var target = result.FinalState.Kind switch
+        {
+            FinalStateKind.AllRemoved => "the state in which first-order removal has taken everything",
+            FinalStateKind.BathEquilibrium => "equilibrium with the bath",
+            _ => "equilibrium",
+        };
+        return $"Progress toward {target} against time: 0 % at the start, 100 % at the final state; the whole system is drawn solid, "
+            + "each compartment dashed, with the times to 50, 90 and 99 % marked on the dashed grey lines (those beyond the duration are in the subtitle).";
+    }
+
+    public static string Cumulative(SimulationResult result)
+    {
+        var receiver = FaceText.MediumName(result.Case.Right) ?? "the right face medium";
+        return $"Cumulative amount per contact area received by {receiver} against time: the model (line), the amounts of the "
+            + "receptor samples corrected for earlier samples (open markers) and the measured amounts (filled markers), with the "
+            + "steady line fitted to each (dashed) where one is reached; a steady line's slope is the steady flux and it meets the "
+            + "time axis at the lag time.";
+    }
+}
