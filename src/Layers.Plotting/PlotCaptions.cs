@@ -12,15 +12,21 @@ internal static class PlotCaptions
     public static string Profile(SimulationResult result)
     {
         var simulation = result.Case;
-        var media = simulation.Left is BathFace or CompartmentFace || simulation.Right is BathFace or CompartmentFace
-            ? " The blue strips beyond the faces stand for the media in contact, at their concentration at the same times."
-            : string.Empty;
+        var strips = new[] { ("left", FaceText.MediumName(simulation.Left)), ("right", FaceText.MediumName(simulation.Right)) }
+            .Where(face => face.Item2 is not null)
+            .Select(face => $"beyond the {face.Item1} face stands for {face.Item2}")
+            .ToList();
+        var media = strips.Count switch
+        {
+            0 => string.Empty,
+            1 => $" The blue strip {strips[0]}, at its concentration at the same times.",
+            _ => $" The blue strip {strips[0]} and the one {strips[1]}, each at its concentration at the same times.",
+        };
         var jumps = simulation.Stack.Count > 1
-            ? " The jumps at the interfaces are the partition coefficients (at equilibrium the left side holds K times the right side), not steps of the solution."
+            ? " The jumps at the interfaces are the partition coefficients: at every interface, at all times, the concentrations on its two sides are in the ratio of the two layers' partition coefficients."
             : string.Empty;
         return "Concentration across the stack against depth from the left face, one colour per report time, the dashed grey line the initial state; "
-            + "the shaded bands are the layers, named at the top." + media + jumps
-            + " A curve that falls steeply inside a layer shows where the diffusion is slow.";
+            + "the shaded bands are the layers, named at the top." + media + jumps;
     }
 
     public static string Transfer(SimulationResult result)
@@ -34,18 +40,21 @@ internal static class PlotCaptions
 
         var text = "Mass per contact area that has moved into each face medium against time (for a medium that feeds the stack, "
             + "the mass that has moved out of it, drawn positive). ";
-        if (simulation.Left is CompartmentFace || simulation.Right is CompartmentFace)
+        text += TransferPlot.ConcentrationsShown(result) switch
         {
-            text += "A compartment's concentration is read on the right-hand scale when there is one receiving compartment that keeps "
-                + "all it receives, else in the panel under the amounts. ";
-        }
+            CompartmentConcentrations.RightScale => "The right-hand scale reads the same curve as the receiving compartment's concentration. ",
+            CompartmentConcentrations.Panel => "The panel under the amounts shows the compartments' concentrations. ",
+            _ => string.Empty,
+        };
 
         if (MigrationLimit.Of(result) is not null)
         {
             text += "The dashed red line is the specific migration limit as a mass per contact area; where the food's curve meets it, the food reaches the limit. ";
         }
 
-        return text + "A curve that levels off shows the medium approaching equilibrium.";
+        return text + (result.FinalState.Kind == FinalStateKind.SteadyPermeation
+            ? "Once the permeation is steady the curves run straight, with the steady flux as their slope."
+            : "A curve that levels off shows the medium approaching equilibrium.");
     }
 
     public static string FinalState(SimulationResult result)

@@ -6,6 +6,7 @@ using Layers.Core.Simulation;
 using Layers.Core.Units;
 using Layers.Core.Verification;
 using Layers.Plotting;
+using Layers.Tests.TestSupport;
 using OxyPlot;
 using OxyPlot.Annotations;
 using OxyPlot.Axes;
@@ -119,17 +120,39 @@ public sealed partial class PlotLayoutTests(PlotCases cases) : IClassFixture<Plo
         var y = x.Select(value => Math.Sqrt(value)).ToList();
         var benchmark = new BenchmarkResult("invented", "no source", "y", 1, 1, 1e-3, new BenchmarkCurve("x", "y", x, y, y));
         var options = new PlotOptions(900, 560);
-        var model = OverlayPlot.Create(benchmark, benchmark.Curve!, options);
-        using var pass = LayoutPass.Run(model, options);
-        var markers = model.Series.OfType<ScatterSeries>().Single();
-        var (xAxis, yAxis) = (markers.XAxis, markers.YAxis);
 
-        Assert.All(markers.Points, point =>
+        AssertMarkersWhole(OverlayPlot.Create(benchmark, benchmark.Curve!, options), options);
+    }
+
+    [Fact]
+    public void The_cumulative_plot_draws_samples_at_zero_and_at_the_end_of_the_duration_whole()
+    {
+        // The shipped sampling case: samples at t = 0 with nothing received, and at the end of the 48 h.
+        var read = Layers.Core.Studies.CaseDocument.ReadFile(RepoRoot.File("cases", "skin-diffusion-cell-sampling.json"));
+        Assert.True(read.IsValid, read.FormatErrors());
+        var result = Simulator.Run(read.Case!);
+        var options = new PlotOptions();
+        var model = CumulativeAmountPlot.Create(result, options);
+
+        var points = model.Series.OfType<ScatterSeries>().SelectMany(series => series.Points).ToList();
+        Assert.Contains(points, point => point.Y == 0);
+        Assert.Contains(points, point => Math.Abs(point.X - 48) < 1e-9);
+        AssertMarkersWhole(model, options);
+    }
+
+    private static void AssertMarkersWhole(PlotModel model, PlotOptions options)
+    {
+        using var pass = LayoutPass.Run(model, options);
+        foreach (var markers in model.Series.OfType<ScatterSeries>())
         {
-            var (sx, sy) = (xAxis.Transform(point.X), yAxis.Transform(point.Y));
-            Assert.InRange(sx, pass.PlotArea.Left + markers.MarkerSize, pass.PlotArea.Right - markers.MarkerSize);
-            Assert.InRange(sy, pass.PlotArea.Top + markers.MarkerSize, pass.PlotArea.Bottom - markers.MarkerSize);
-        });
+            var (xAxis, yAxis) = (markers.XAxis, markers.YAxis);
+            Assert.All(markers.Points, point =>
+            {
+                var (sx, sy) = (xAxis.Transform(point.X), yAxis.Transform(point.Y));
+                Assert.InRange(sx, pass.PlotArea.Left + markers.MarkerSize, pass.PlotArea.Right - markers.MarkerSize);
+                Assert.InRange(sy, pass.PlotArea.Top + markers.MarkerSize, pass.PlotArea.Bottom - markers.MarkerSize);
+            });
+        }
     }
 
     [Fact]
