@@ -140,6 +140,27 @@ public sealed partial class PlotLayoutTests(PlotCases cases) : IClassFixture<Plo
         AssertMarkersWhole(model, options);
     }
 
+    [Fact]
+    public void A_threshold_reached_at_the_end_of_the_duration_has_its_marker_drawn_whole()
+    {
+        // The demo solved again up to the time it reaches 90 %: that marker sits on the last time of the axis.
+        var ninety = cases.Demo.FinalState.System.NinetyPercent;
+        Assert.NotNull(ninety);
+        var simulation = cases.Demo.Case;
+        var ending = Simulator.Run(simulation with
+        {
+            DurationSeconds = ninety.Value,
+            ReportTimesSeconds = [.. simulation.ReportTimesSeconds.Where(t => t < ninety.Value), ninety.Value],
+        });
+        var options = new PlotOptions();
+        var model = EquilibriumPlot.Create(ending, options);
+
+        var points = model.Series.OfType<ScatterSeries>().SelectMany(series => series.Points).ToList();
+        var end = model.Series.OfType<LineSeries>().First().Points[^1].X;
+        Assert.Contains(points, point => point.Y == 90 && Math.Abs(point.X / end - 1) < 1e-3);
+        AssertMarkersWhole(model, options);
+    }
+
     private static void AssertMarkersWhole(PlotModel model, PlotOptions options)
     {
         using var pass = LayoutPass.Run(model, options);
