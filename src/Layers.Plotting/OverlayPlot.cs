@@ -11,9 +11,6 @@ namespace Layers.Plotting;
 /// </summary>
 public static class OverlayPlot
 {
-    // Padding at each end of both axes, as a fraction of the plot area: a little more than a marker's radius.
-    private const double MarkerRoom = 0.03;
-
     /// <summary>The plot of one benchmark curve.</summary>
     public static PlotModel Create(BenchmarkResult benchmark, BenchmarkCurve curve, PlotOptions options)
     {
@@ -21,8 +18,8 @@ public static class OverlayPlot
         var xAxis = PlotFrame.Logarithmic(AxisPosition.Bottom, Typeset(curve.XLabel));
         var yAxis = PlotFrame.Linear(AxisPosition.Left, Typeset(curve.YLabel));
         // Room beyond the first and last values, so that the markers there are drawn whole, not cut by the frame.
-        (xAxis.MinimumPadding, xAxis.MaximumPadding) = (MarkerRoom, MarkerRoom);
-        (yAxis.MinimumPadding, yAxis.MaximumPadding) = (MarkerRoom, MarkerRoom);
+        (xAxis.MinimumPadding, xAxis.MaximumPadding) = (PlotStyle.EdgeMarkerPadding, PlotStyle.EdgeMarkerPadding);
+        (yAxis.MinimumPadding, yAxis.MaximumPadding) = (PlotStyle.EdgeMarkerPadding, PlotStyle.EdgeMarkerPadding);
         model.Axes.Add(xAxis);
         model.Axes.Add(yAxis);
         var analytic = new LineSeries
