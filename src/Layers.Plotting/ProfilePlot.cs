@@ -11,7 +11,9 @@ namespace Layers.Plotting;
 /// <summary>
 /// Concentration across the stack at each report time (at most 12 of them, spread evenly): one colour per time, one
 /// line per layer so that the jump at a partitioning interface shows as a gap, the layers as shaded bands named at
-/// the top (names that find no room are left out when there are many layers). A face that touches a
+/// the top, each name inside its band clear of the interface lines: on one line, broken into lines, or turned to
+/// read upward; a band too thin even for that is named in the subtitle (names that find no room are left out when
+/// there are many layers). A curve drawn wholly under a later one says so in the legend. A face that touches a
 /// medium (compartment or bath) gets a narrow strip beyond it showing the medium's concentration at the same
 /// times, so that the jump at that face shows too.
 /// </summary>
