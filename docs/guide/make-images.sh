@@ -8,8 +8,9 @@ for demo in laminate-fatty-food patch-on-skin diffusion-cell-membrane two-liquid
   # Delivery through skin and a time-lag experiment read best on a linear time axis.
   case $demo in patch-on-skin|membrane-time-lag) axis=--linear-time ;; *) axis= ;; esac
   dotnet run --project src/Layers.Cli -- run "cases/$demo.json" --out "$out" --quiet --plot-width 1000 --plot-height 640 $axis
-  for plot in profile transfer equilibrium; do
-    cp "$out/$demo/$plot.png" "docs/guide/$demo-$plot.png"
+  # The third plot is named by what it shows: equilibrium.png, or permeation.png for steady permeation.
+  for plot in profile transfer equilibrium permeation; do
+    if [ -f "$out/$demo/$plot.png" ]; then cp "$out/$demo/$plot.png" "docs/guide/$demo-$plot.png"; fi
   done
 done
 dotnet run --project src/Layers.Cli -- fit cases/membrane-time-lag.json --data cases/membrane-time-lag-measured.csv \

@@ -15,6 +15,9 @@ internal static class CumulativeAmountPlot
 {
     private const double TopMargin = 0.08;
 
+    // Room beyond the data at each edge where markers sit, as a fraction of the axis range: a marker's radius and more.
+    private const double MarkerRoom = 0.012;
+
     /// <summary>True when the result has permeation metrics to show.</summary>
     public static bool Applies(SimulationResult result)
         => result.DiffusionCell is { } cell && (cell.Simulated is not null || cell.Measured is not null);
@@ -82,9 +85,17 @@ internal static class CumulativeAmountPlot
             .Concat(model.Series.OfType<ScatterSeries>().SelectMany(series => series.Points.Select(point => point.Y)))
             .DefaultIfEmpty(0)
             .Max();
-        yAxis.Minimum = 0;
-        yAxis.Maximum = high > 0 ? high * (1 + TopMargin) : 1;
-        yAxis.LabelFormatter = value => value < 0 ? string.Empty : DisplayText.Tick(value);
+        var top = high > 0 ? high * (1 + TopMargin) : 1;
+        // Samples sit at t = 0, at the end of the duration and on zero amounts: a little room beyond those edges
+        // draws their markers whole instead of cut in half by the frame. The room carries no tick labels.
+        yAxis.Minimum = -MarkerRoom * top;
+        yAxis.Maximum = top;
+        AxisTicks.OneFormat(yAxis, value => value >= 0);
+        var end = time.Axis.Maximum;
+        var slack = end * 1e-9;
+        time.Axis.Minimum = -MarkerRoom * end;
+        time.Axis.Maximum = end * (1 + MarkerRoom);
+        AxisTicks.OneFormat(time.Axis, value => value >= -slack && value <= end + slack);
         return model;
     }
 

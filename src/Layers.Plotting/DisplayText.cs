@@ -96,18 +96,33 @@ internal static class DisplayText
     }
 
     /// <summary>An axis tick label: plain notation between 0.001 and 100000, power-of-ten notation outside.</summary>
-    public static string Tick(double value)
+    public static string Tick(double value) => Tick(value, NeedsPowerOfTen(value));
+
+    /// <summary>
+    /// An axis tick label in the notation chosen for its whole axis (<see cref="AxisTicks"/>): power-of-ten notation
+    /// when <paramref name="powersOfTen"/> (1 as 10⁰), else plain; zero is "0" either way.
+    /// </summary>
+    public static string Tick(double value, bool powersOfTen)
     {
-        // Tick values are sums of steps and carry rounding noise (0.30000000000000004); 12 digits drop it.
-        var rounded = double.Parse(value.ToString("G12", CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
-        var magnitude = Math.Abs(rounded);
-        if (rounded == 0 || magnitude is >= 1e-3 and < 1e5)
+        var rounded = TickValue(value);
+        if (rounded == 0 || !powersOfTen)
         {
             return rounded.ToString("G10", CultureInfo.InvariantCulture);
         }
 
         return PowerOfTen(rounded, "G6");
     }
+
+    /// <summary>Whether a tick value reads badly in plain notation: below 0.001 or from 100000 on, zero excepted.</summary>
+    public static bool NeedsPowerOfTen(double value)
+    {
+        var magnitude = Math.Abs(TickValue(value));
+        return magnitude != 0 && magnitude is < 1e-3 or >= 1e5;
+    }
+
+    // Tick values are sums of steps and carry rounding noise (0.30000000000000004); 12 digits drop it.
+    private static double TickValue(double value) =>
+        double.Parse(value.ToString("G12", CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 
     /// <summary>A percentage with as many decimals as needed to tell 99 % from 99.9 %.</summary>
     public static string Percent(double fraction) =>

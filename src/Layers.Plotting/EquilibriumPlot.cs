@@ -44,7 +44,7 @@ public static class EquilibriumPlot
         yAxis.Maximum = AxisTop;
         yAxis.MajorStep = 10;
         yAxis.MinorStep = 10;
-        yAxis.LabelFormatter = value => value > 100.5 ? string.Empty : DisplayText.Tick(value);
+        AxisTicks.OneFormat(yAxis, value => value <= 100.5);
         yAxis.ExtraGridlines = [.. ThresholdTimes.Levels.Select(level => 100 * level)];
         yAxis.ExtraGridlineColor = PlotStyle.ThresholdLine;
         yAxis.ExtraGridlineStyle = LineStyle.Dash;
@@ -166,6 +166,11 @@ public static class EquilibriumPlot
     private static void AddMarkerLabels(PlotModel model, PlotOptions options, List<Track> tracks, Axis xAxis, Axis yAxis)
     {
         using var pass = LayoutPass.Run(model, options);
+        if (RoomForEdgeMarkers(pass, tracks, xAxis))
+        {
+            pass.Run();
+        }
+
         var placer = new LabelPlacer(pass.PlotArea);
         foreach (var track in tracks)
         {
@@ -202,6 +207,29 @@ public static class EquilibriumPlot
                 model.Annotations.Add(Labels.At(box, marker.Text, track.Color, xAxis, yAxis, PlotStyle.LabelBackground));
             }
         }
+    }
+
+    // A threshold reached at the very start or end of the time axis would have its marker cut in half by the frame:
+    // the axis then reaches a marker's width further. True when it changed, which calls for another layout pass.
+    private static bool RoomForEdgeMarkers(LayoutPass pass, List<Track> tracks, Axis xAxis)
+    {
+        var room = tracks.Select(track => track.MarkerSize).DefaultIfEmpty(0).Max() + 2;
+        var xs = tracks.SelectMany(track => track.Markers).Select(marker => xAxis.Transform(marker.X)).ToList();
+        var (left, right) = (pass.PlotArea.Left, pass.PlotArea.Right);
+        var changed = false;
+        if (xs.Any(x => x > right - room))
+        {
+            xAxis.Maximum = xAxis.InverseTransform(Math.Max(xs.Max(), right) + room);
+            changed = true;
+        }
+
+        if (xs.Any(x => x < left + room))
+        {
+            xAxis.Minimum = xAxis.InverseTransform(Math.Min(xs.Min(), left) - room);
+            changed = true;
+        }
+
+        return changed;
     }
 
     private static IEnumerable<string> Subtitle(SimulationResult result, List<Track> tracks)

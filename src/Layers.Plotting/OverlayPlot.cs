@@ -15,8 +15,13 @@ public static class OverlayPlot
     public static PlotModel Create(BenchmarkResult benchmark, BenchmarkCurve curve, PlotOptions options)
     {
         var model = PlotFrame.Create(benchmark.Name, [benchmark.Source], options);
-        model.Axes.Add(PlotFrame.Logarithmic(AxisPosition.Bottom, curve.XLabel));
-        model.Axes.Add(PlotFrame.Linear(AxisPosition.Left, curve.YLabel));
+        var xAxis = PlotFrame.Logarithmic(AxisPosition.Bottom, Typeset(curve.XLabel));
+        var yAxis = PlotFrame.Linear(AxisPosition.Left, Typeset(curve.YLabel));
+        // Room beyond the first and last values, so that the markers there are drawn whole, not cut by the frame.
+        (xAxis.MinimumPadding, xAxis.MaximumPadding) = (PlotStyle.EdgeMarkerPadding, PlotStyle.EdgeMarkerPadding);
+        (yAxis.MinimumPadding, yAxis.MaximumPadding) = (PlotStyle.EdgeMarkerPadding, PlotStyle.EdgeMarkerPadding);
+        model.Axes.Add(xAxis);
+        model.Axes.Add(yAxis);
         var analytic = new LineSeries
         {
             Title = "analytic",
@@ -25,7 +30,10 @@ public static class OverlayPlot
         };
         var computed = new ScatterSeries
         {
-            Title = $"computed ({VerificationSuite.BenchmarkSettings})",
+            // A benchmark of the exact method has no cells nor steps: the settings would misname what computed it.
+            Title = benchmark.Name.EndsWith(VerificationSuite.ExactSuffix, StringComparison.Ordinal)
+                ? "computed (exact method in the Laplace domain)"
+                : $"computed ({VerificationSuite.BenchmarkSettings})",
             MarkerType = MarkerType.Circle,
             MarkerSize = PlotStyle.MarkerSize,
             MarkerFill = PlotStyle.SeriesColor(1),
@@ -43,6 +51,12 @@ public static class OverlayPlot
         model.Series.Add(computed);
         return model;
     }
+
+    // The benchmarks' axis labels are plain text ("D t / L^2 [-]", "Q [kg/m2]"); squares and cubes read better raised.
+    private static string Typeset(string label) =>
+        label.Replace("^2", "\u00B2", StringComparison.Ordinal)
+            .Replace("/m2", "/m\u00B2", StringComparison.Ordinal)
+            .Replace("/m3", "/m\u00B3", StringComparison.Ordinal);
 
     /// <summary>The PNG bytes of one benchmark curve.</summary>
     public static byte[] Render(BenchmarkResult benchmark, BenchmarkCurve curve, PlotOptions options)

@@ -63,7 +63,7 @@ internal static class PermeationPlot
         var high = Math.Max(values.Max(), 0);
         yAxis.Maximum = high > 0 ? high * (1 + TopMargin) : 1;
         yAxis.Minimum = 0;
-        yAxis.LabelFormatter = value => value < 0 ? string.Empty : DisplayText.Tick(value);
+        AxisTicks.OneFormat(yAxis, value => value >= 0);
 
         if (lag is { } shown && shown < duration)
         {

@@ -9,16 +9,23 @@ namespace Layers.Plotting;
 internal static class PlotFrame
 {
     /// <summary>
-    /// A model with the case title, a subtitle, white background and the legend under the plot area; title and
-    /// subtitle are broken into lines that fit the picture.
+    /// Room kept free of subtitle text on each side, device-independent units: at least as wide as an axis with its
+    /// tick labels and title, so that the subtitle's lines stay within the plot area below them.
+    /// </summary>
+    public const double SubtitleMargin = 110;
+
+    /// <summary>
+    /// A model with the case title, a subtitle, white background and the legend under the plot area; the title is
+    /// broken into lines that fit the picture, the subtitle into lines that fit over the plot area.
     /// </summary>
     public static PlotModel Create(string title, IEnumerable<string> subtitleLines, PlotOptions options)
     {
         var width = options.WidthPixels / PlotStyle.Scale(options) - 4 * PlotStyle.Padding;
+        var subtitleWidth = SubtitleWidth(options);
         var model = new PlotModel
         {
             Title = string.Join("\n", TextWrap.Lines([title], width, PlotStyle.TitleFontSize, FontWeights.Bold)),
-            Subtitle = string.Join("\n", TextWrap.Lines(subtitleLines.Where(line => line.Length > 0), width, PlotStyle.SubtitleFontSize)),
+            Subtitle = string.Join("\n", TextWrap.Lines(subtitleLines.Where(line => line.Length > 0), subtitleWidth, PlotStyle.SubtitleFontSize)),
             Culture = CultureInfo.InvariantCulture,
             DefaultFont = PlotStyle.FontFamily,
             DefaultFontSize = PlotStyle.TickFontSize,
@@ -57,6 +64,10 @@ internal static class PlotFrame
         return model;
     }
 
+    /// <summary>The widest a subtitle line may be, device-independent units: the picture less a margin on each side.</summary>
+    public static double SubtitleWidth(PlotOptions options) =>
+        options.WidthPixels / PlotStyle.Scale(options) - 2 * (PlotStyle.Padding + SubtitleMargin);
+
     /// <summary>A styled linear axis.</summary>
     public static LinearAxis Linear(AxisPosition position, string title) => Style(new LinearAxis(), position, title);
 
@@ -85,7 +96,7 @@ internal static class PlotFrame
         axis.MajorGridlineThickness = 1;
         axis.MinorGridlineStyle = LineStyle.None;
         axis.TickStyle = TickStyle.Outside;
-        axis.LabelFormatter = DisplayText.Tick;
+        AxisTicks.OneFormat(axis);
         axis.AxisTitleDistance = 8;
         axis.IsPanEnabled = false;
         axis.IsZoomEnabled = false;

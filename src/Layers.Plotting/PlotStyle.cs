@@ -29,6 +29,12 @@ internal static class PlotStyle
     public const double InterfaceThickness = 1.0;
     public const double MarkerSize = 5;
 
+    /// <summary>
+    /// Padding of an axis whose range is set by its data, as a fraction of the plot area, where markers sit at the
+    /// ends: more than a marker's radius, so that the frame does not cut them.
+    /// </summary>
+    public const double EdgeMarkerPadding = 0.03;
+
     /// <summary>Room around the picture, device-independent units.</summary>
     public const double Padding = 14;
 

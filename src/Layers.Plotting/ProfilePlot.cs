@@ -11,7 +11,9 @@ namespace Layers.Plotting;
 /// <summary>
 /// Concentration across the stack at each report time (at most 12 of them, spread evenly): one colour per time, one
 /// line per layer so that the jump at a partitioning interface shows as a gap, the layers as shaded bands named at
-/// the top (names that find no room are left out when there are many layers). A face that touches a
+/// the top, each name inside its band clear of the interface lines: on one line, broken into lines, or turned to
+/// read upward; a band too thin even for that is named in the subtitle (names that find no room are left out when
+/// there are many layers). A curve drawn wholly under a later one says so in the legend. A face that touches a
 /// medium (compartment or bath) gets a narrow strip beyond it showing the medium's concentration at the same
 /// times, so that the jump at that face shows too.
 /// </summary>
@@ -28,6 +30,13 @@ public static class ProfilePlot
 
     // Above this many bands, a name that finds no free row is left out rather than pushed down over the curves.
     private const int ManyBands = 40;
+
+    // Room kept between a band's name and the lines at the band's edges, device-independent units: the placer's gap
+    // and one cell of its grid on each side, so that a name that fits is also free of the lines.
+    private const double NameClearance = 7;
+
+    // Most lines a name is broken into before it is turned to read upward instead.
+    private const int MostNameLines = 3;
 
     /// <summary>Builds the profile plot.</summary>
     /// <param name="result">A simulation result.</param>
@@ -55,7 +64,7 @@ public static class ProfilePlot
         xAxis.Maximum = bands[^1].Right;
         // Depth has no meaning inside the media strips: their ticks carry no numbers.
         var slack = thickness * 1e-9;
-        xAxis.LabelFormatter = value => value < -slack || value > thickness + slack ? string.Empty : DisplayText.Tick(value);
+        AxisTicks.OneFormat(xAxis, value => value >= -slack && value <= thickness + slack);
         var yAxis = PlotFrame.Axis(
             options.LogConcentrationAxis, AxisPosition.Left, $"Concentration ({DisplayText.Unit(concentrationUnit)})");
         yAxis.Minimum = range.Low;
@@ -64,18 +73,34 @@ public static class ProfilePlot
         model.Axes.Add(yAxis);
 
         AddBands(model, bands);
-        AddSeries(model, curves, range);
+        var legendSeries = AddSeries(model, curves, range);
 
         using var pass = LayoutPass.Run(model, options);
+        if (NameHiddenCurves(curves, legendSeries, range, xAxis, yAxis))
+        {
+            pass.Run();
+        }
+
         var labels = BandLabels(pass, bands, xAxis);
+        if (labels.TooThin.Count > 0 && bands.Count <= ManyBands)
+        {
+            // A name drawn over a band too thin to hold it would cross the lines at its edges: say it instead.
+            model.Subtitle += "\n" + string.Join("\n", TextWrap.Lines(
+                ["too thin to be named in the picture: " + string.Join(", ", labels.TooThin)],
+                PlotFrame.SubtitleWidth(options),
+                PlotStyle.SubtitleFontSize));
+            pass.Run();
+            labels = BandLabels(pass, bands, xAxis);
+        }
+
         yAxis.Maximum = Headroom(pass.PlotArea, range, labels.Bottom - pass.PlotArea.Top, options.LogConcentrationAxis);
         pass.Run();
         // The new maximum may widen the tick labels and shift the plot area: place the names again.
         labels = BandLabels(pass, bands, xAxis);
-        foreach (var (box, text, band) in labels.Boxes)
+        foreach (var label in labels.Boxes)
         {
-            var color = band.Medium is null ? PlotStyle.Text : PlotStyle.SubtleText;
-            model.Annotations.Add(Labels.At(box, text, color, xAxis, yAxis, OxyColors.Undefined));
+            var color = label.Band.Medium is null ? PlotStyle.Text : PlotStyle.SubtleText;
+            model.Annotations.Add(Labels.At(label.Box, label.Text, color, xAxis, yAxis, OxyColors.Undefined, label.Rotation));
         }
 
         return model;
@@ -223,8 +248,10 @@ public static class ProfilePlot
         }
     }
 
-    private static void AddSeries(PlotModel model, List<Curve> curves, (double Low, double High) range)
+    // Draws every curve, one series per piece; returns the series that carries each curve's legend entry.
+    private static List<LineSeries> AddSeries(PlotModel model, List<Curve> curves, (double Low, double High) range)
     {
+        var legend = new List<LineSeries>();
         foreach (var curve in curves)
         {
             var first = true;
@@ -242,23 +269,66 @@ public static class ProfilePlot
                 // On a log axis, zero and negative values sit on the bottom of the axis instead of vanishing.
                 series.Points.AddRange(segment.Select(point => new DataPoint(point.X, Math.Max(point.Y, range.Low))));
                 model.Series.Add(series);
+                if (first)
+                {
+                    legend.Add(series);
+                }
+
                 first = false;
             }
         }
+
+        return legend;
+    }
+
+    // Curves drawn wholly under a later solid one (report times after the profile stopped changing) say so in the
+    // legend; true when a legend entry changed, which calls for another layout pass.
+    private static bool NameHiddenCurves(
+        List<Curve> curves, List<LineSeries> legend, (double Low, double High) range, Axis xAxis, Axis yAxis)
+    {
+        var screen = curves
+            .Select(curve => (IReadOnlyList<IReadOnlyList<ScreenPoint>>)[.. curve.Segments.Select(segment =>
+                (IReadOnlyList<ScreenPoint>)[.. segment.Select(point =>
+                    new ScreenPoint(xAxis.Transform(point.X), yAxis.Transform(Math.Max(point.Y, range.Low))))])])
+            .ToList();
+        var coverers = HiddenCurves.Coverers(screen, j => curves[j].Style == LineStyle.Solid);
+        var changed = false;
+        for (var i = 0; i < curves.Count; i++)
+        {
+            if (coverers[i] is { } j && legend.Count == curves.Count)
+            {
+                legend[i].Title = HiddenCurves.Under(curves[i].Title, curves[j].Title);
+                changed = true;
+            }
+        }
+
+        return changed;
     }
 
     private static LabelRows BandLabels(LayoutPass pass, List<Band> bands, Axis xAxis)
     {
         var area = pass.PlotArea;
         var placer = new LabelPlacer(area);
-        var boxes = new List<(OxyRect Box, string Text, Band Band)>();
+        // The interfaces and media faces are drawn lines: no name may cross them.
+        foreach (var edge in bands.Skip(1).Select(band => xAxis.Transform(band.Left)))
+        {
+            placer.ReserveLine([new ScreenPoint(edge, area.Top), new ScreenPoint(edge, area.Bottom)], PlotStyle.InterfaceThickness / 2);
+        }
+
+        var boxes = new List<BandLabel>();
+        var tooThin = new List<string>();
         var bottom = area.Top;
         foreach (var band in bands)
         {
-            var size = Labels.BoxSize(pass, band.Name);
-            var centre = (xAxis.Transform(band.Left) + xAxis.Transform(band.Right)) / 2;
-            var left = centre - size.Width / 2;
-            // Rows from the top down; a name too wide for its band moves to a lower row rather than cover another.
+            var (bandLeft, bandRight) = (xAxis.Transform(band.Left), xAxis.Transform(band.Right));
+            if (Fit(pass, band.Name, bandRight - bandLeft) is not var (text, size, rotation))
+            {
+                tooThin.Add(band.Name);
+                continue;
+            }
+
+            var left = (bandLeft + bandRight) / 2 - size.Width / 2;
+            // Rows from the top down; a name that finds its row taken moves to a lower one rather than cover another.
             var rows = Enumerable.Range(0, 4)
                 .Select(row => Labels.Box(left, area.Top + PlotStyle.LabelGap / 2 + row * size.Height, size))
                 .ToList();
@@ -267,14 +337,42 @@ public static class ProfilePlot
                 continue;
             }
 
-            boxes.Add((box, band.Name, band));
+            boxes.Add(new BandLabel(box, text, band, rotation));
             bottom = Math.Max(bottom, box.Bottom);
         }
 
-        return new LabelRows(boxes, bottom + PlotStyle.LabelGap);
+        return new LabelRows(boxes, bottom + PlotStyle.LabelGap, tooThin);
     }
 
-    // The axis maximum that leaves the band of layer names above the highest value.
+    /// <summary>
+    /// The name as it fits inside its band, clear of the lines at its edges: on one line, else broken at spaces into
+    /// lines, else turned to read upward; null when the band is too narrow even for that.
+    /// </summary>
+    private static (string Text, OxySize Size, double Rotation)? Fit(LayoutPass pass, string name, double bandWidth)
+    {
+        var room = bandWidth - 2 * NameClearance;
+        var size = Labels.BoxSize(pass, name);
+        if (size.Width <= room)
+        {
+            return (name, size, 0);
+        }
+
+        var words = name.Split(' ', StringSplitOptions.RemoveEmptyEntries);
+        if (words.Length > 1)
+        {
+            var lines = TextWrap.Lines([name], room - 2 * Labels.Padding, PlotStyle.LabelFontSize);
+            var text = string.Join("\n", lines);
+            var wrapped = Labels.MultilineBoxSize(pass, text);
+            if (wrapped.Width <= room && lines.Count <= MostNameLines)
+            {
+                return (text, wrapped, 0);
+            }
+        }
+
+        return size.Height <= room ? (name, new OxySize(size.Height, size.Width), -90) : null;
+    }
+
+        // The axis maximum that leaves the band of layer names above the highest value.
     private static double Headroom(OxyRect area, (double Low, double High) range, double labelHeight, bool logarithmic)
     {
         var usable = Math.Max(area.Height - labelHeight, area.Height * 0.5);
@@ -294,5 +392,9 @@ public static class ProfilePlot
     /// <summary>A layer, or the strip standing for the medium on a face, with its extent in depth units.</summary>
     private sealed record Band(double Left, double Right, string Name, FaceCondition? Medium);
 
-    private sealed record LabelRows(List<(OxyRect Box, string Text, Band Band)> Boxes, double Bottom);
+    /// <summary>A band's name as placed: its box, its text (lines separated by "\n") and its rotation.</summary>
+    private sealed record BandLabel(OxyRect Box, string Text, Band Band, double Rotation);
+
+    /// <summary>The names placed, the lowest edge of their boxes, and the names of bands too thin to hold them.</summary>
+    private sealed record LabelRows(List<BandLabel> Boxes, double Bottom, List<string> TooThin);
 }

@@ -55,7 +55,7 @@ public static class TransferPlot
             simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options, migration), options);
         model.Axes.Add(time.Axis);
         var compartments = media.Where(medium => medium.Face.HasFiniteVolume).ToList();
-        var secondScale = compartments.Count == 1 && !compartments[0].Flipped && KeepsWhatItReceives((CompartmentFace)compartments[0].Face);
+        var secondScale = SecondScale(compartments);
         var panel = compartments.Count > 0 && !secondScale;
         var massAxis = PlotFrame.Linear(AxisPosition.Left, $"Transferred per contact area ({DisplayText.Unit(massUnit)})");
         massAxis.Key = MassAxisKey;
@@ -98,6 +98,21 @@ public static class TransferPlot
     /// </summary>
     private static bool KeepsWhatItReceives(CompartmentFace compartment)
         => compartment.Sampling is null && compartment.RemovalRatePerSecond <= 0;
+
+    // One receiving compartment that keeps all it receives: its concentration is a second scale on the amounts.
+    private static bool SecondScale(List<Medium> compartments) =>
+        compartments.Count == 1 && !compartments[0].Flipped && KeepsWhatItReceives((CompartmentFace)compartments[0].Face);
+
+    /// <summary>Where the plot shows the compartments' concentrations: nowhere, on a right-hand scale, or in a panel.</summary>
+    internal static CompartmentConcentrations ConcentrationsShown(SimulationResult result)
+    {
+        var compartments = Media(result, 0, UnitTable.Get("s"), UnitTable.Get("kg/m2"))
+            .Where(medium => medium.Face.HasFiniteVolume)
+            .ToList();
+        return compartments.Count == 0 ? CompartmentConcentrations.None
+            : SecondScale(compartments) ? CompartmentConcentrations.RightScale
+            : CompartmentConcentrations.Panel;
+    }
 
     // The solver's crossing time on the limit line; between output times the plotted curve is a straight chord, so
     // near a steep start it may cross the line elsewhere: the marker and the subtitle give the solver's time.
@@ -393,4 +408,17 @@ public static class TransferPlot
         /// <summary>The amount plotted, kg/m2: what the medium received, or what it gave for a donor.</summary>
         public double Plotted(double transferred) => Flipped ? -transferred : transferred;
     }
+}
+
+/// <summary>Where the transfer plot shows the compartments' concentrations.</summary>
+internal enum CompartmentConcentrations
+{
+    /// <summary>No compartment: nothing to show.</summary>
+    None,
+
+    /// <summary>A second scale on the right reads the amount curve as the concentration.</summary>
+    RightScale,
+
+    /// <summary>A panel of its own under the amounts.</summary>
+    Panel,
 }

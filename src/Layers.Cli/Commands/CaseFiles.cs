@@ -34,7 +34,7 @@ internal static class CaseFiles
             Add("depths.csv", () => depths);
         }
 
-        Add("report.html", () => HtmlReport.Write(result, settings.CasePath, pictures));
+        Add("report.html", () => HtmlReport.Write(result, settings.CasePath, pictures, PlotSet.Captions(result)));
         cancellation.ThrowIfCancellationRequested();
         foreach (var (name, png) in pictures)
         {

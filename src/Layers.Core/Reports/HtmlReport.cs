@@ -24,7 +24,14 @@ public static class HtmlReport
     /// <param name="result">The result.</param>
     /// <param name="caseFile">The case file as given.</param>
     /// <param name="pictures">PNG pictures by file name, embedded in this order.</param>
-    public static string Write(SimulationResult result, string caseFile, IReadOnlyDictionary<string, byte[]> pictures)
+    /// <param name="captions">
+    /// What each picture shows and how to read it, by file name; a picture without one is captioned with its file name.
+    /// </param>
+    public static string Write(
+        SimulationResult result,
+        string caseFile,
+        IReadOnlyDictionary<string, byte[]> pictures,
+        IReadOnlyDictionary<string, string>? captions = null)
     {
         var simulation = result.Case;
         var html = new StringBuilder();
@@ -60,7 +67,10 @@ public static class HtmlReport
 
         foreach (var (name, png) in pictures)
         {
-            html.Append(CultureInfo.InvariantCulture, $"<figure><img alt=\"{Encode(name)}\" src=\"data:image/png;base64,{Convert.ToBase64String(png)}\"><figcaption class=\"meta\">{Encode(name)}</figcaption></figure>\n");
+            // The caption says what the figure shows; the file name follows it so that the reader can find the file.
+            var described = captions is not null && captions.TryGetValue(name, out var text) ? text : null;
+            var caption = described is null ? Encode(name) : $"{Encode(described)} ({Encode(name)})";
+            html.Append(CultureInfo.InvariantCulture, $"<figure><img alt=\"{Encode(described ?? name)}\" src=\"data:image/png;base64,{Convert.ToBase64String(png)}\"><figcaption class=\"meta\">{caption}</figcaption></figure>\n");
         }
 
         html.Append("<h2>Assumptions</h2>\n<ul>\n");

@@ -15,7 +15,9 @@ public sealed class PlotTests(PlotCases cases) : IClassFixture<PlotCases>
     // hundred (common practice, no source: a loose floor that only a blank or nearly blank picture fails).
     private const double BlankVarianceFloor = 100;
 
-    private static readonly string[] FileNames = [PlotSet.ProfileFileName, PlotSet.TransferFileName, PlotSet.EquilibriumFileName];
+    // The third plot is named by what it shows: the approach to equilibrium, or the steady permeation.
+    private static string[] FileNames(string which) =>
+        [PlotSet.ProfileFileName, PlotSet.TransferFileName, which == "demo" ? PlotSet.EquilibriumFileName : PlotSet.PermeationFileName];
 
     public static TheoryData<string, int, int> Sizes => new()
     {
@@ -33,7 +35,7 @@ public sealed class PlotTests(PlotCases cases) : IClassFixture<PlotCases>
 
         var files = PlotSet.Render(Result(which), options);
 
-        Assert.Equal(FileNames.Order(StringComparer.Ordinal), files.Keys.Order(StringComparer.Ordinal));
+        Assert.Equal(FileNames(which).Order(StringComparer.Ordinal), files.Keys.Order(StringComparer.Ordinal));
         foreach (var (name, png) in files)
         {
             AssertPicture(name, png, width, height);
