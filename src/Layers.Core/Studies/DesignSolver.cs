@@ -126,12 +126,12 @@ public static class DesignSolver
         string message;
         if (defined.Count == 0)
         {
-            message = $"{settings.Result.Describe()} is not defined for any value of {input.Label} {range} ({points.Count} values tried)";
+            message = $"{settings.Result.Label} is not defined for any value of {input.Label} {range} ({points.Count} values tried)";
         }
         else
         {
             var undefined = points.Count - defined.Count;
-            message = $"no value of {input.Label} {range} gives {settings.Result.Describe()} = {Show(settings, settings.TargetSi)}: " +
+            message = $"no value of {input.Label} {range} gives {settings.Result.Label} = {Show(settings, settings.TargetSi)}: " +
                 $"over that range it lies between {Show(settings, defined.Min(point => point.ResultSi))} and {Show(settings, defined.Max(point => point.ResultSi))} " +
                 $"({points.Count} values tried{(undefined > 0 ? $", {undefined} without a result" : string.Empty)}); widen the range or change the target";
         }

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.Json.Nodes;
+using Layers.Core.Cases;
 
 namespace Layers.Core.Studies;
 
@@ -15,8 +16,11 @@ public sealed record StudyInput(string Path, string Unit)
     /// <summary>The parsed path (member names and indices).</summary>
     internal IReadOnlyList<object> Steps { get; init; } = [];
 
-    /// <summary>The path without <c>$.</c>, for tables and plots.</summary>
-    public string Label => Path.StartsWith("$.", StringComparison.Ordinal) ? Path[2..] : Path;
+    /// <summary>
+    /// The value in words for tables and plots, e.g. "membrane thickness" (<see cref="InputLabels"/>); the path stays
+    /// the key of JSON and CSV files.
+    /// </summary>
+    public string Label { get; init; } = InputLabels.Of(null, Path);
 
     /// <summary>A value as written into the case: the number with all its digits and the unit.</summary>
     public string Write(double number)
