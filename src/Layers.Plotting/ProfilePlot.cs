@@ -151,7 +151,7 @@ public static class ProfilePlot
             var layers = report.Profiles.Select(profile => (IReadOnlyList<DataPoint>)[.. profile.PositionsMeters.Zip(
                 profile.ConcentrationsKgPerCubicMeter,
                 (x, c) => new DataPoint(depthUnit.FromSi(x), concentrationUnit.FromSi(c)))]);
-            var label = sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(sample.TimeSeconds);
+            var label = sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(sample.TimeSeconds, result.Case.Display.Time);
             curves.Add(new Curve(
                 label,
                 PlotStyle.SeriesColor(index),

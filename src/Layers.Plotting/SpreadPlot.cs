@@ -31,7 +31,7 @@ public static class SpreadPlot
 
         var settings = outcome.Settings;
         var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
-        var timeUnit = DisplayUnitRules.Time(simulation.DurationSeconds);
+        var timeUnit = simulation.Display.Time;
         var model = PlotFrame.Create(
             simulation.Title,
             [$"{NamedResults.Quantity(preferred)}: percentiles over {settings.Samples} samples of " + string.Join("; ", settings.Inputs.Select(input => input.Describe()))],

@@ -341,23 +341,23 @@ public static class TransferPlot
         }).ToList();
         if (finals.Count > 0)
         {
-            yield return $"after {DisplayText.Time(end.TimeSeconds)}: " + string.Join(";  ", finals);
+            yield return $"after {DisplayText.Time(end.TimeSeconds, result.Case.Display.Time)}: " + string.Join(";  ", finals);
         }
 
         if (options.LimitMassPerArea is { } limit)
         {
-            yield return LimitText(media, limit, options.LimitLabel, units, migration);
+            yield return LimitText(media, limit, options.LimitLabel, units, migration, result.Case.Display.Time);
         }
     }
 
-    private static string LimitText(List<Medium> media, double limit, string label, Units units, MigrationLimit? migration)
+    private static string LimitText(List<Medium> media, double limit, string label, Units units, MigrationLimit? migration, UnitDefinition timeUnit)
     {
         // A limit applies to what a medium receives: a donor's loss is not compared with it. The specific migration
         // limit applies to the food only, at the time the solver located.
         var crossings = media.Where(medium => migration is null ? !medium.Flipped : medium.Side == migration.FoodSide)
             .Select(medium => (medium.Name, Time: migration is null ? Crossing(medium, limit) : migration.ReachedSeconds))
             .Where(crossing => crossing.Time is not null)
-            .Select(crossing => $"{crossing.Name} reaches it at {DisplayText.Time(crossing.Time!.Value)}")
+            .Select(crossing => $"{crossing.Name} reaches it at {DisplayText.Time(crossing.Time!.Value, timeUnit)}")
             .ToList();
         var head = $"{label} {DisplayText.Quantity(units.MassPerArea.FromSi(limit), units.MassPerArea)}: ";
         return head + (crossings.Count > 0 ? string.Join("; ", crossings) : "not reached within the duration");

@@ -14,12 +14,12 @@ internal static class DisplayReader
 {
     private static readonly string[] Keys = ["time", "depth", "concentration", "massPerArea", "flux"];
 
-    public static DisplayUnits Read(JsonFields root, ReadContext context, double durationSeconds, double totalThicknessMeters)
+    public static DisplayUnits Read(JsonFields root, ReadContext context, double durationSeconds, IEnumerable<double> reportTimesSeconds, double totalThicknessMeters)
     {
         var foodStyle = context.SawMassFraction || context.SawCompartmentByMass;
         var defaults = new DisplayUnits
         {
-            Time = DisplayUnitRules.Time(durationSeconds),
+            Time = DisplayUnitRules.Time(durationSeconds, reportTimesSeconds),
             Depth = DisplayUnitRules.Depth(totalThicknessMeters),
             Concentration = UnitTable.Get(foodStyle ? "mg/L" : "ug/mL"),
             MediumMassFraction = foodStyle ? UnitTable.Get("mg/kg") : null,

@@ -14,7 +14,7 @@ public static class InputTables
     public static TextTable Layers(SimulationCase simulation)
     {
         var format = new DisplayFormat(simulation.Display);
-        var depth = simulation.Display.Depth.Symbol;
+        var depth = simulation.Display.Depth.ForPeople;
 
         // A D that depends on temperature is shown as in the first stage, where the run starts.
         var rows = simulation.WithFirstStageDiffusivities().Stack.Layers.Select((layer, index) => (IReadOnlyList<string>)
@@ -30,7 +30,7 @@ public static class InputTables
         ]).ToArray();
         return new TextTable(
             $"Layers, left to right (K relative to {simulation.ReferenceMedium}, volume basis)",
-            ["layer", $"thickness [{depth}]", "D [cm2/s]", "K [-]", $"initial c [{simulation.Display.Concentration.Symbol}]", "h^2/D", "D K/h [cm/h]", "D from"],
+            ["layer", $"thickness [{depth}]", "D [cm2/s]", "K [-]", $"initial c [{simulation.Display.Concentration.ForPeople}]", "h^2/D", "D K/h [cm/h]", "D from"],
             rows);
     }
 

@@ -15,12 +15,12 @@ public static class ResultTables
         var simulation = result.Case;
         var format = new DisplayFormat(simulation.Display);
         var media = Media(simulation).ToArray();
-        var headers = new List<string> { $"time [{simulation.Display.Time.Symbol}]" };
+        var headers = new List<string> { $"time [{simulation.Display.Time.ForPeople}]" };
         foreach (var (_, face) in media)
         {
             var name = TimeSeriesCsv.FaceName(face);
             headers.Add($"{name}: concentration [{format.MediumConcentrationUnit(face)}]");
-            headers.Add($"{name}: received [{simulation.Display.MassPerArea.Symbol}]");
+            headers.Add($"{name}: received [{simulation.Display.MassPerArea.ForPeople}]");
         }
 
         headers.Add("toward final state");

@@ -161,7 +161,16 @@ public static class UncertaintyReport
 
         foreach (var result in outcome.Results)
         {
-            var show = result.Result.Dimension == Units.Dimension.Time ? (Func<double, string>)format.Time : value => DisplayFormat.Number(value) + " " + result.Result.SiUnit;
+            // In the run's display units, as the console shows every other figure of the case.
+            Func<double, string> show = result.Result.Dimension switch
+            {
+                Units.Dimension.Time => format.Time,
+                Units.Dimension.MassPerArea => format.MassPerArea,
+                Units.Dimension.MassFlux => format.Flux,
+                Units.Dimension.MassConcentration => format.Concentration,
+                Units.Dimension.MassFraction => value => DisplayFormat.Shown(value, Units.UnitTable.Get("mg/kg")),
+                _ => value => DisplayFormat.Number(value) + " " + result.Result.SiUnit,
+            };
             lines.Add($"{result.Result.Label} ({percents}): {string.Join(" / ", result.Percentiles.Select(value => double.IsPositiveInfinity(value) ? "not reached" : show(value)))}");
         }
 
@@ -169,7 +178,7 @@ public static class UncertaintyReport
         {
             var limit = exceedance.Limit;
             lines.Add(string.Create(CultureInfo.InvariantCulture,
-                $"chance that {limit.Result.Label} exceeds {Units.QuantityParser.FormatSi(limit.ValueSi, limit.Unit)} ({limit.Origin}): {exceedance.Above} of {exceedance.Counted} samples = {DisplayFormat.Percent(exceedance.Probability)} (95 % interval {DisplayFormat.Percent(exceedance.Low)} to {DisplayFormat.Percent(exceedance.High)})"));
+                $"chance that {limit.Result.Label} exceeds {DisplayFormat.Shown(limit.ValueSi, limit.Unit)} ({limit.Origin}): {exceedance.Above} of {exceedance.Counted} samples = {DisplayFormat.Percent(exceedance.Probability)} (95 % interval {DisplayFormat.Percent(exceedance.Low)} to {DisplayFormat.Percent(exceedance.High)})"));
         }
 
         return lines;

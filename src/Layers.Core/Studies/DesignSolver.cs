@@ -143,7 +143,7 @@ public static class DesignSolver
     public static string Show(DesignSettings settings, double si)
     {
         ArgumentNullException.ThrowIfNull(settings);
-        return QuantityParser.FormatSi(si, settings.TargetUnit);
+        return QuantityParser.FormatSi(si, settings.TargetUnit).Replace(settings.TargetUnit.Symbol, settings.TargetUnit.ForPeople, StringComparison.Ordinal);
     }
 
     /// <summary>The runs made so far, by value of the search variable, so that no value is solved twice.</summary>

@@ -29,11 +29,11 @@ public sealed record StudyInput(string Path, string Unit)
         return Unit.Length == 0 ? text : $"{text} {Unit}";
     }
 
-    /// <summary>A value for display: four significant digits and the unit.</summary>
+    /// <summary>A value for display: four significant digits and the unit as people spell it ("25 µm").</summary>
     public string Show(double number)
     {
         var text = number.ToString("G4", CultureInfo.InvariantCulture);
-        return Unit.Length == 0 ? text : $"{text} {Unit}";
+        return Unit.Length == 0 ? text : $"{text} {Units.UnitSpelling.ForPeople(Unit)}";
     }
 
     /// <summary>The JSON node written at <see cref="Path"/> for a value: a string with the unit, or a plain number.</summary>
