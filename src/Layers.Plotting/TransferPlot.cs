@@ -1,5 +1,6 @@
 using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.Simulation;
 using Layers.Core.Units;
 using OxyPlot;
 using OxyPlot.Annotations;
@@ -322,20 +323,35 @@ public static class TransferPlot
                 .Take(MostLayersDrawn)
                 .Order()];
 
-    private static string Shown(double kgPerCubicMeter, (UnitDefinition Unit, double Divisor) scale)
-        => DisplayText.Quantity(scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor), scale.Unit);
+    private static string Shown(double kgPerCubicMeter, (UnitDefinition Unit, double Divisor) scale, bool floor = false)
+    {
+        var value = scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor);
+        return DisplayText.Quantity(floor ? Floor(value) : value, scale.Unit);
+    }
+
+    /// <summary>A floor to one significant digit, as the console shows it.</summary>
+    private static double Floor(double value) =>
+        double.Parse(value.ToString("G1", System.Globalization.CultureInfo.InvariantCulture), System.Globalization.CultureInfo.InvariantCulture);
 
     private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options, MigrationLimit? migration)
     {
         var massUnit = units.MassPerArea;
         yield return "Mass transferred per contact area into each face medium";
         var end = result.TimeSeries[^1];
+        // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
+        var amountFloor = NegligibleFloor.AmountPerArea(result);
         var finals = media.Where(medium => medium.Values.Count > 0).Select(medium =>
         {
             var face = medium.Side == Side.Left ? end.Left : end.Right;
-            var amount = DisplayText.Quantity(massUnit.FromSi(medium.Plotted(medium.Values[^1].Transferred)), massUnit);
+            var transferred = medium.Plotted(medium.Values[^1].Transferred);
+            var amount = NegligibleFloor.Hides(transferred, amountFloor)
+                ? "< " + DisplayText.Quantity(Floor(massUnit.FromSi(amountFloor)), massUnit)
+                : DisplayText.Quantity(massUnit.FromSi(transferred), massUnit);
+            var concentrationFloor = NegligibleFloor.ConcentrationIn(result, medium.Face);
             var concentration = medium.Face is CompartmentFace compartment && face is not null
-                ? $" ({Shown(face.ConcentrationKgPerCubicMeter, MediumScale(compartment, result.Case.Display))})"
+                ? NegligibleFloor.Hides(face.ConcentrationKgPerCubicMeter, concentrationFloor)
+                    ? $" (< {Shown(concentrationFloor!.Value, MediumScale(compartment, result.Case.Display), floor: true)})"
+                    : $" ({Shown(face.ConcentrationKgPerCubicMeter, MediumScale(compartment, result.Case.Display))})"
                 : string.Empty;
             return $"{(medium.Flipped ? "out of" : "into")} {medium.Name} {amount}{concentration}";
         }).ToList();
