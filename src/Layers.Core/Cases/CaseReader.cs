@@ -145,7 +145,7 @@ public static class CaseReader
         var numerics = ReadNumerics(root, context);
         // Only report times the case writes move the time unit: the default ones are fractions of the duration, which
         // read well in the duration's own unit.
-        var display = DisplayReader.Read(root, context, duration ?? 1, reports ?? [], layers.Sum(layer => layer.ThicknessMeters));
+        var display = DisplayReader.Read(root, context, duration ?? 1, reports ?? [], layers);
         FoodContactSettings? foodSettings = null;
         if (food is not null)
         {
