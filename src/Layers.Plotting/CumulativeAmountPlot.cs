@@ -110,7 +110,7 @@ internal static class CumulativeAmountPlot
         var fluxText = $"{DisplayText.Number(massUnit.FromSi(flux * timeUnit.FactorToSi))} {DisplayText.Unit(massUnit)}/{DisplayText.Unit(timeUnit)}";
         var line = new LineSeries
         {
-            Title = $"{metrics.Source} steady line: J = {fluxText}, lag time {DisplayText.Time(metrics.LagTimeSeconds)}",
+            Title = $"{metrics.Source} steady line: J = {fluxText}, lag time {DisplayText.Time(metrics.LagTimeSeconds, timeUnit)}",
             Color = PlotStyle.SeriesColor(colour),
             LineStyle = LineStyle.Dash,
             StrokeThickness = PlotStyle.ReferenceThickness,

@@ -36,7 +36,7 @@ public static class DesignPlot
         model.Axes.Add(PlotFrame.Axis(settings.LogScale, AxisPosition.Bottom, inputTitle));
         var ys = points.Select(point => unit.FromSi(point.ResultSi)).Append(unit.FromSi(settings.TargetSi)).ToList();
         var logResult = ys.All(y => y > 0) && ys.Max() / ys.Min() >= LogSpan;
-        model.Axes.Add(PlotFrame.Axis(logResult, AxisPosition.Left, $"{settings.Result.Describe()} ({DisplayText.Unit(unit)})"));
+        model.Axes.Add(PlotFrame.Axis(logResult, AxisPosition.Left, $"{settings.Result.Label} ({DisplayText.Unit(unit)})"));
         var curve = new LineSeries
         {
             Title = "runs",

@@ -10,9 +10,6 @@ internal static class DisplayText
 {
     private const string Superscripts = "\u2070\u00B9\u00B2\u00B3\u2074\u2075\u2076\u2077\u2078\u2079";
 
-    // Largest unit first: a time is written in the largest unit of which it is at least one.
-    private static readonly string[] NaturalTimeUnits = ["y", "d", "h", "min", "s"];
-
     /// <summary>
     /// A unit symbol as printed on a plot: u as micro sign at the start of a unit (um, ug, uL), 2 and 3 after a
     /// letter as superscripts (dm2, m3), degC as a degree sign.
@@ -58,19 +55,14 @@ internal static class DisplayText
     public static UnitDefinition MassPerAreaUnit(DisplayUnits display) =>
         display.MassPerArea.Dimension == Dimension.MassPerArea ? display.MassPerArea : UnitTable.Get("kg/m2");
 
-    /// <summary>A time in the largest unit of which it is at least one, three significant digits: "2 h", "1.5 d".</summary>
-    public static string Time(double seconds)
+    /// <summary>
+    /// A time in the run's one unit (<c>display.time</c>), three significant digits: "2 h", "240 h"; a figure far below
+    /// that unit in a smaller one, named beside it (<see cref="DisplayUnitRules.TimeFigure"/>), as on the console.
+    /// </summary>
+    public static string Time(double seconds, UnitDefinition runUnit)
     {
-        foreach (var symbol in NaturalTimeUnits)
-        {
-            var unit = UnitTable.Get(symbol);
-            if (Math.Abs(seconds) >= unit.FactorToSi)
-            {
-                return Quantity(unit.FromSi(seconds), unit);
-            }
-        }
-
-        return Quantity(seconds, UnitTable.Get("s"));
+        var unit = DisplayUnitRules.TimeFigure(seconds, runUnit);
+        return Quantity(unit.FromSi(seconds), unit);
     }
 
     /// <summary>

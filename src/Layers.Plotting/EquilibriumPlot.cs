@@ -120,17 +120,17 @@ public static class EquilibriumPlot
                 }
                 else if (time.Covers(seconds, duration))
                 {
-                    markers.Add(new Marker(time.Unit.FromSi(seconds), 100 * level, $"{percent}: {DisplayText.Time(seconds)}"));
+                    markers.Add(new Marker(time.Unit.FromSi(seconds), 100 * level, $"{percent}: {DisplayText.Time(seconds, result.Case.Display.Time)}"));
                 }
                 else
                 {
-                    later.Add($"{percent} at {DisplayText.Time(seconds)}");
+                    later.Add($"{percent} at {DisplayText.Time(seconds, result.Case.Display.Time)}");
                 }
             }
 
             if (unreached.Count > 0)
             {
-                later.Add($"{string.Join(", ", unreached)} not reached within {DisplayText.Time(result.FinalState.HorizonSeconds)}");
+                later.Add($"{string.Join(", ", unreached)} not reached within {DisplayText.Time(result.FinalState.HorizonSeconds, result.Case.Display.Time)}");
             }
 
             tracks.Add(new Track(
@@ -240,7 +240,7 @@ public static class EquilibriumPlot
             FinalStateKind.BathEquilibrium => "Progress toward equilibrium with the bath: 0 % at the start, 100 % at equilibrium",
             FinalStateKind.AllRemoved => "Everything ends in the first-order removal: the whole system's progress is the fraction of the initial mass removed",
             _ when final.MassLeftAfterSamplingPerArea is not null && final.LastSampleSeconds is { } last
-                => $"Progress toward the closed-system equilibrium of the mass left after the last sample ({DisplayText.Time(last)}): 0 % at the start, 100 % at equilibrium",
+                => $"Progress toward the closed-system equilibrium of the mass left after the last sample ({DisplayText.Time(last, result.Case.Display.Time)}): 0 % at the start, 100 % at equilibrium",
             _ => "Progress toward the closed-system equilibrium: 0 % at the start, 100 % at equilibrium",
         };
         var beyond = tracks.Where(track => track.Missed.Count > 0)
@@ -248,7 +248,7 @@ public static class EquilibriumPlot
             .ToList();
         if (beyond.Count > 0)
         {
-            yield return $"not within the {DisplayText.Time(result.Case.DurationSeconds)} simulated \u2014 " + string.Join("; ", beyond);
+            yield return $"not within the {DisplayText.Time(result.Case.DurationSeconds, result.Case.Display.Time)} simulated \u2014 " + string.Join("; ", beyond);
         }
     }
 

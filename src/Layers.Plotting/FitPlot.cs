@@ -29,7 +29,7 @@ public static class FitPlot
     internal static PlotModel Create(FitResult fit, PlotOptions options)
     {
         var data = fit.Request.Data;
-        var time = DisplayUnitRules.Time(Math.Max(fit.FittedCase.DurationSeconds, data.TimesSeconds[^1]));
+        var time = fit.FittedCase.Display.Time;
         var value = data.ValueUnit;
         var estimates = string.Join("; ", fit.Estimates.Select(estimate =>
             $"{estimate.Parameter.Label} = {estimate.Parameter.Written(estimate.Value)}{(estimate.Identifiable ? string.Empty : " (not identifiable)")}"));

@@ -67,7 +67,7 @@ internal static class PermeationPlot
 
         if (lag is { } shown && shown < duration)
         {
-            AddLagMarker(model, options, time.Unit.FromSi(shown), $"lag time {DisplayText.Time(shown)}", time.Axis, yAxis);
+            AddLagMarker(model, options, time.Unit.FromSi(shown), $"lag time {DisplayText.Time(shown, result.Case.Display.Time)}", time.Axis, yAxis);
         }
 
         return model;
@@ -142,12 +142,12 @@ internal static class PermeationPlot
         var duration = result.Case.DurationSeconds;
         var lagText = permeation.LagTimeSeconds switch
         {
-            null => $"steady state not reached within {DisplayText.Time(result.FinalState.HorizonSeconds)}: no lag time",
-            { } lag when lag >= duration => $"lag time {DisplayText.Time(lag)}, beyond the {DisplayText.Time(duration)} simulated",
-            { } lag => $"lag time {DisplayText.Time(lag)}",
+            null => $"steady state not reached within {DisplayText.Time(result.FinalState.HorizonSeconds, result.Case.Display.Time)}: no lag time",
+            { } lag when lag >= duration => $"lag time {DisplayText.Time(lag, result.Case.Display.Time)}, beyond the {DisplayText.Time(duration, result.Case.Display.Time)} simulated",
+            { } lag => $"lag time {DisplayText.Time(lag, result.Case.Display.Time)}",
         };
         var analytic = permeation.AnalyticLagTimeSeconds is { } reference
-            ? $" (single membrane, L\u00B2/6D: {DisplayText.Time(reference)})"
+            ? $" (single membrane, L\u00B2/6D: {DisplayText.Time(reference, result.Case.Display.Time)})"
             : string.Empty;
         yield return $"steady flux J = {fluxText};  {lagText}{analytic}";
     }

@@ -48,15 +48,16 @@ public static class ProfilePlot
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
         var simulation = result.Case;
-        var depthUnit = DisplayUnitRules.Depth(simulation.Stack.TotalThicknessMeters);
-        var concentrationUnit = DisplayText.ConcentrationUnit(simulation.Display);
+        var depthUnit = simulation.Display.Depth;
+        var scale = ScaleOf(simulation);
+        var concentrationUnit = scale.Unit;
         var bands = Bands(simulation, depthUnit);
-        var curves = Curves(result, bands, depthUnit, concentrationUnit);
+        var curves = Curves(result, bands, depthUnit, scale);
         var range = ValueRange(curves, options.LogConcentrationAxis);
 
         var model = PlotFrame.Create(
             simulation.Title,
-            [TimesLine(result.Reports.Count), FaceText.Both(simulation)],
+            [TimesLine(result.Reports.Count), FaceText.Both(simulation), .. scale.Note is { } note ? new[] { note } : []],
             options);
         var thickness = depthUnit.FromSi(simulation.Stack.TotalThicknessMeters);
         var xAxis = PlotFrame.Linear(AxisPosition.Bottom, $"Depth from the left face ({DisplayText.Unit(depthUnit)})");
@@ -133,15 +134,46 @@ public static class ProfilePlot
         return bands;
     }
 
+    /// <summary>
+    /// The concentration axis: the case's layer mass fraction (mg/kg, as the layers were written) when every layer
+    /// and every medium drawn beside them has a density, each band divided by its own; else mass per volume, with a
+    /// note when the layers were written as mass fractions.
+    /// </summary>
+    private static ConcentrationScale ScaleOf(SimulationCase simulation)
+    {
+        var display = simulation.Display;
+        var volume = new ConcentrationScale(DisplayText.ConcentrationUnit(display), _ => 1, _ => 1, display.LayerMassFractionRefused);
+        if (display.LayerMassFraction is not { } fraction)
+        {
+            return volume;
+        }
+
+        var media = new[] { simulation.Left, simulation.Right }.Where(face => face.IsOpen).ToList();
+        if (media.FirstOrDefault(face => (face as CompartmentFace)?.DensityKgPerCubicMeter is null) is { } without)
+        {
+            var name = without switch { BathFace bath => bath.Name, CompartmentFace compartment => compartment.Name, _ => "a face medium" };
+            return volume with { Note = $"concentrations in mass per volume: {name} gives no density" };
+        }
+
+        var layers = simulation.Stack.Layers;
+        return new ConcentrationScale(
+            fraction,
+            index => layers[index].DensityKgPerCubicMeter!.Value,
+            face => ((CompartmentFace)face).DensityKgPerCubicMeter!.Value,
+            null);
+    }
+
     private static List<Curve> Curves(
-        SimulationResult result, List<Band> bands, UnitDefinition depthUnit, UnitDefinition concentrationUnit)
+        SimulationResult result, List<Band> bands, UnitDefinition depthUnit, ConcentrationScale scale)
     {
         var curves = new List<Curve>();
         var simulation = result.Case;
+        var concentrationUnit = scale.Unit;
         var layerBands = bands.Where(band => band.Medium is null).ToList();
+        double Divisor(Band band) => band.Medium is { } medium ? scale.MediumDivisor(medium) : scale.LayerDivisor(layerBands.IndexOf(band));
         IReadOnlyList<DataPoint> Flat(Band band, double kgPerCubicMeter)
         {
-            var c = concentrationUnit.FromSi(kgPerCubicMeter);
+            var c = concentrationUnit.FromSi(kgPerCubicMeter / Divisor(band));
             return [new DataPoint(band.Left, c), new DataPoint(band.Right, c)];
         }
 
@@ -173,10 +205,10 @@ public static class ProfilePlot
         {
             var sample = report.Sample;
             double? Medium(Side side) => (side == Side.Left ? sample.Left : sample.Right)?.ConcentrationKgPerCubicMeter;
-            var layers = report.Profiles.Select(profile => (IReadOnlyList<DataPoint>)[.. profile.PositionsMeters.Zip(
+            var layers = report.Profiles.Select((profile, layer) => (IReadOnlyList<DataPoint>)[.. profile.PositionsMeters.Zip(
                 profile.ConcentrationsKgPerCubicMeter,
-                (x, c) => new DataPoint(depthUnit.FromSi(x), concentrationUnit.FromSi(c)))]);
-            var label = sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(sample.TimeSeconds);
+                (x, c) => new DataPoint(depthUnit.FromSi(x), concentrationUnit.FromSi(c / scale.LayerDivisor(layer))))]);
+            var label = sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(sample.TimeSeconds, result.Case.Display.Time);
             curves.Add(new Curve(
                 label,
                 PlotStyle.SeriesColor(index),
@@ -391,6 +423,9 @@ public static class ProfilePlot
 
     /// <summary>A layer, or the strip standing for the medium on a face, with its extent in depth units.</summary>
     private sealed record Band(double Left, double Right, string Name, FaceCondition? Medium);
+
+    /// <summary>The unit of the concentration axis and what each layer's and medium's kg/m3 is divided by first (a density, or 1).</summary>
+    private sealed record ConcentrationScale(UnitDefinition Unit, Func<int, double> LayerDivisor, Func<FaceCondition, double> MediumDivisor, string? Note);
 
     /// <summary>A band's name as placed: its box, its text (lines separated by "\n") and its rotation.</summary>
     private sealed record BandLabel(OxyRect Box, string Text, Band Band, double Rotation);

@@ -31,10 +31,10 @@ public static class SpreadPlot
 
         var settings = outcome.Settings;
         var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
-        var timeUnit = DisplayUnitRules.Time(simulation.DurationSeconds);
+        var timeUnit = simulation.Display.Time;
         var model = PlotFrame.Create(
             simulation.Title,
-            [$"{NamedResults.Name(preferred)}: percentiles over {settings.Samples} samples of " + string.Join("; ", settings.Inputs.Select(input => input.Describe()))],
+            [$"{NamedResults.Quantity(preferred)}: percentiles over {settings.Samples} samples of " + string.Join("; ", settings.Inputs.Select(input => input.Describe()))],
             options);
         var timeTitle = $"Time ({DisplayText.Unit(timeUnit)})" + (options.LogTimeAxis ? ", logarithmic scale" : string.Empty);
         model.Axes.Add(PlotFrame.Axis(options.LogTimeAxis, AxisPosition.Bottom, timeTitle));

@@ -4,7 +4,7 @@ using OxyPlot.Axes;
 
 namespace Layers.Plotting;
 
-/// <summary>The time axis of a plot over the simulated duration, in a unit that suits the duration.</summary>
+/// <summary>The time axis of a plot over the simulated duration, in the run's time unit.</summary>
 internal sealed class TimeAxis
 {
     private TimeAxis(Axis axis, UnitDefinition unit, double firstSeconds)
@@ -27,7 +27,8 @@ internal sealed class TimeAxis
     public static TimeAxis Create(SimulationResult result, bool logarithmic)
     {
         var duration = result.Case.DurationSeconds;
-        var unit = DisplayUnitRules.Time(duration);
+        // The run's one time unit (display.time), the unit of the console and the report too.
+        var unit = result.Case.Display.Time;
         var title = $"Time ({DisplayText.Unit(unit)})" + (logarithmic ? ", logarithmic scale" : string.Empty);
         var first = logarithmic
             ? result.TimeSeries.Select(sample => sample.TimeSeconds).Where(t => t > 0).DefaultIfEmpty(duration / 1000).Min()

@@ -1,5 +1,6 @@
 using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.Simulation;
 using Layers.Core.Units;
 using OxyPlot;
 using OxyPlot.Annotations;
@@ -337,42 +338,57 @@ public static class TransferPlot
                 .Take(MostLayersDrawn)
                 .Order()];
 
-    private static string Shown(double kgPerCubicMeter, (UnitDefinition Unit, double Divisor) scale)
-        => DisplayText.Quantity(scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor), scale.Unit);
+    private static string Shown(double kgPerCubicMeter, (UnitDefinition Unit, double Divisor) scale, bool floor = false)
+    {
+        var value = scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor);
+        return DisplayText.Quantity(floor ? Floor(value) : value, scale.Unit);
+    }
+
+    /// <summary>A floor to one significant digit, as the console shows it.</summary>
+    private static double Floor(double value) =>
+        double.Parse(value.ToString("G1", System.Globalization.CultureInfo.InvariantCulture), System.Globalization.CultureInfo.InvariantCulture);
 
     private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options, MigrationLimit? migration)
     {
         var massUnit = units.MassPerArea;
         yield return "Mass transferred per contact area into each face medium";
         var end = result.TimeSeries[^1];
+        // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
+        var amountFloor = NegligibleFloor.AmountPerArea(result);
         var finals = media.Where(medium => medium.Values.Count > 0).Select(medium =>
         {
             var face = medium.Side == Side.Left ? end.Left : end.Right;
-            var amount = DisplayText.Quantity(massUnit.FromSi(medium.Plotted(medium.Values[^1].Transferred)), massUnit);
+            var transferred = medium.Plotted(medium.Values[^1].Transferred);
+            var amount = NegligibleFloor.Hides(transferred, amountFloor)
+                ? "< " + DisplayText.Quantity(Floor(massUnit.FromSi(amountFloor)), massUnit)
+                : DisplayText.Quantity(massUnit.FromSi(transferred), massUnit);
+            var concentrationFloor = NegligibleFloor.ConcentrationIn(result, medium.Face);
             var concentration = medium.Face is CompartmentFace compartment && face is not null
-                ? $" ({Shown(face.ConcentrationKgPerCubicMeter, MediumScale(compartment, result.Case.Display))})"
+                ? NegligibleFloor.Hides(face.ConcentrationKgPerCubicMeter, concentrationFloor)
+                    ? $" (< {Shown(concentrationFloor!.Value, MediumScale(compartment, result.Case.Display), floor: true)})"
+                    : $" ({Shown(face.ConcentrationKgPerCubicMeter, MediumScale(compartment, result.Case.Display))})"
                 : string.Empty;
             return $"{(medium.Flipped ? "out of" : "into")} {medium.Name} {amount}{concentration}";
         }).ToList();
         if (finals.Count > 0)
         {
-            yield return $"after {DisplayText.Time(end.TimeSeconds)}: " + string.Join(";  ", finals);
+            yield return $"after {DisplayText.Time(end.TimeSeconds, result.Case.Display.Time)}: " + string.Join(";  ", finals);
         }
 
         if (options.LimitMassPerArea is { } limit)
         {
-            yield return LimitText(media, limit, options.LimitLabel, units, migration);
+            yield return LimitText(media, limit, options.LimitLabel, units, migration, result.Case.Display.Time);
         }
     }
 
-    private static string LimitText(List<Medium> media, double limit, string label, Units units, MigrationLimit? migration)
+    private static string LimitText(List<Medium> media, double limit, string label, Units units, MigrationLimit? migration, UnitDefinition timeUnit)
     {
         // A limit applies to what a medium receives: a donor's loss is not compared with it. The specific migration
         // limit applies to the food only, at the time the solver located.
         var crossings = media.Where(medium => migration is null ? !medium.Flipped : medium.Side == migration.FoodSide)
             .Select(medium => (medium.Name, Time: migration is null ? Crossing(medium, limit) : migration.ReachedSeconds))
             .Where(crossing => crossing.Time is not null)
-            .Select(crossing => $"{crossing.Name} reaches it at {DisplayText.Time(crossing.Time!.Value)}")
+            .Select(crossing => $"{crossing.Name} reaches it at {DisplayText.Time(crossing.Time!.Value, timeUnit)}")
             .ToList();
         var head = $"{label} {DisplayText.Quantity(units.MassPerArea.FromSi(limit), units.MassPerArea)}: ";
         return head + (crossings.Count > 0 ? string.Join("; ", crossings) : "not reached within the duration");

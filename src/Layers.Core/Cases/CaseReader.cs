@@ -144,7 +144,9 @@ public static class CaseReader
         var extra = TimesReader.List(root, "extraOutputTimes", duration, durationText, ascending: false, context);
         var depths = DepthsReader.Read(root, layersRead ? layers : [], context);
         var numerics = ReadNumerics(root, context);
-        var display = DisplayReader.Read(root, context, duration ?? 1, layers.Sum(layer => layer.ThicknessMeters));
+        // Only report times the case writes move the time unit: the default ones are fractions of the duration, which
+        // read well in the duration's own unit.
+        var display = DisplayReader.Read(root, context, duration ?? 1, reports ?? [], layers);
         FoodContactSettings? foodSettings = null;
         if (food is not null)
         {

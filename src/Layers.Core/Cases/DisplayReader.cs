@@ -14,12 +14,20 @@ internal static class DisplayReader
 {
     private static readonly string[] Keys = ["time", "depth", "concentration", "massPerArea", "flux"];
 
-    public static DisplayUnits Read(JsonFields root, ReadContext context, double durationSeconds, double totalThicknessMeters)
+    public static DisplayUnits Read(JsonFields root, ReadContext context, double durationSeconds, IEnumerable<double> reportTimesSeconds, IReadOnlyList<Layer> layers)
     {
         var foodStyle = context.SawMassFraction || context.SawCompartmentByMass;
+        var totalThicknessMeters = layers.Sum(layer => layer.ThicknessMeters);
+        // Layers written as mass fractions are shown back so, each with its density, when every layer has one.
+        var withoutDensity = layers.FirstOrDefault(layer => layer.DensityKgPerCubicMeter is null);
+        var layersAsWritten = context.SawLayerMassFraction && withoutDensity is null;
         var defaults = new DisplayUnits
         {
-            Time = DisplayUnitRules.Time(durationSeconds),
+            LayerMassFraction = layersAsWritten ? UnitTable.Get("mg/kg") : null,
+            LayerMassFractionRefused = context.SawLayerMassFraction && withoutDensity is not null
+                ? $"layer concentrations in mass per volume: {withoutDensity.Name} gives no density"
+                : null,
+            Time = DisplayUnitRules.Time(durationSeconds, reportTimesSeconds),
             Depth = DisplayUnitRules.Depth(totalThicknessMeters),
             Concentration = UnitTable.Get(foodStyle ? "mg/L" : "ug/mL"),
             MediumMassFraction = foodStyle ? UnitTable.Get("mg/kg") : null,
@@ -38,6 +46,13 @@ internal static class DisplayReader
             Time = Unit(display, "time", [Dimension.Time]) ?? defaults.Time,
             Depth = Unit(display, "depth", [Dimension.Length]) ?? defaults.Depth,
             Concentration = concentration is { Dimension: Dimension.MassConcentration } ? concentration : defaults.Concentration,
+            // An explicit mass per volume shows the layers so too; an explicit mass fraction, when every layer has a density.
+            LayerMassFraction = concentration switch
+            {
+                { Dimension: Dimension.MassConcentration } => null,
+                { Dimension: Dimension.MassFraction } when withoutDensity is null => concentration,
+                _ => defaults.LayerMassFraction,
+            },
             MediumMassFraction = concentration switch
             {
                 { Dimension: Dimension.MassFraction } => concentration,

@@ -90,7 +90,9 @@ internal static class LayerReader
         var diffusivity = estimated ? null : ReadContext.Positive(fields, "diffusionCoefficient", Dimension.Diffusivity, required: true);
         var density = ReadContext.Positive(fields, "density", Dimension.MassConcentration, required: false);
         var k = context.PartitionCoefficient(fields, density);
+        var fractionsBefore = context.MassFractionsRead;
         var concentration = context.Concentration(fields, "initialConcentration", density);
+        context.SawLayerMassFraction |= context.MassFractionsRead > fractionsBefore;
         if (name is null || thickness is null || (diffusivity is null && !estimated) || k is null || concentration is null)
         {
             return null;

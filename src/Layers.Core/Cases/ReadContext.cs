@@ -30,6 +30,12 @@ internal sealed class ReadContext
     /// <summary>True once any concentration was given as a mass fraction (a hint that the case is about foods).</summary>
     public bool SawMassFraction { get; private set; }
 
+    /// <summary>How many concentrations were written as mass fractions so far (a reader tells its own from the count).</summary>
+    public int MassFractionsRead { get; private set; }
+
+    /// <summary>True when some layer's concentration was written as a mass fraction (mg/kg): layers are then shown back so.</summary>
+    public bool SawLayerMassFraction { get; set; }
+
     /// <summary>
     /// The layers whose D is estimated in foodContact.layerDiffusion, so they give none themselves, by name: the
     /// estimate, or null when its entry has a mistake (recorded).
@@ -111,6 +117,7 @@ internal sealed class ReadContext
         }
 
         SawMassFraction = true;
+        MassFractionsRead++;
         if (densityKgPerCubicMeter is not { } density)
         {
             fields.Error(key, $"a mass fraction needs {fields.PathOf("density")} (e.g. \"0.92 g/cm3\") to convert '{fields.Written(key)}' to mass per volume");

@@ -182,7 +182,8 @@ public static partial class SweepExpander
                 slug.Append('_');
             }
 
-            var label = value.Label[(value.Label.LastIndexOf('.') + 1)..];
+            // The file name keeps the key of the path ("thickness"), not the words for people: names stay stable.
+            var label = value.Path[(value.Path.LastIndexOf('.') + 1)..];
             slug.Append(SafeName().Replace(label, "_")).Append('-').Append(SafeName().Replace(value.Written.Replace(" ", string.Empty, StringComparison.Ordinal), "_"));
         }
 

@@ -33,6 +33,7 @@ internal static partial class SweepParameterReader
         }
 
         var (path, steps) = VariedPath.Read(root, parameter, at, "swept", errors);
+        var label = InputLabels.Of(root, path);
         var hasList = parameter.ContainsKey("values");
         var hasRange = parameter.ContainsKey("from") || parameter.ContainsKey("to") || parameter.ContainsKey("count") || parameter.ContainsKey("spacing");
         List<SweepParameter.Choice>? values = null;
@@ -42,11 +43,11 @@ internal static partial class SweepParameterReader
         }
         else if (hasList)
         {
-            values = ReadList(parameter["values"], path, $"{at}.values", errors);
+            values = ReadList(parameter["values"], path, label, $"{at}.values", errors);
         }
         else if (hasRange)
         {
-            values = ReadRange(parameter, path, at, errors);
+            values = ReadRange(parameter, path, label, at, errors);
         }
         else
         {
@@ -58,7 +59,7 @@ internal static partial class SweepParameterReader
             : null;
     }
 
-    private static List<SweepParameter.Choice>? ReadList(JsonNode? node, string path, string at, List<CaseError> errors)
+    private static List<SweepParameter.Choice>? ReadList(JsonNode? node, string path, string label, string at, List<CaseError> errors)
     {
         if (node is not JsonArray array || array.Count == 0)
         {
@@ -73,7 +74,7 @@ internal static partial class SweepParameterReader
             if (item is JsonValue value && value.GetValueKind() is JsonValueKind.String or JsonValueKind.Number)
             {
                 var written = value.GetValueKind() == JsonValueKind.String ? value.GetValue<string>() : value.ToJsonString();
-                choices.Add(Choice(item.DeepClone(), path, written));
+                choices.Add(Choice(item.DeepClone(), path, label, written));
             }
             else
             {
@@ -84,7 +85,7 @@ internal static partial class SweepParameterReader
         return choices;
     }
 
-    private static List<SweepParameter.Choice>? ReadRange(JsonObject parameter, string path, string at, List<CaseError> errors)
+    private static List<SweepParameter.Choice>? ReadRange(JsonObject parameter, string path, string label, string at, List<CaseError> errors)
     {
         var from = Endpoint(parameter["from"], $"{at}.from", errors);
         var to = Endpoint(parameter["to"], $"{at}.to", errors);
@@ -131,8 +132,8 @@ internal static partial class SweepParameterReader
                 : start.Number + fraction * (end.Number - start.Number);
             var text = number.ToString("G6", CultureInfo.InvariantCulture);
             choices.Add(start.IsNumber
-                ? Choice(JsonValue.Create(double.Parse(text, CultureInfo.InvariantCulture)), path, text)
-                : Choice(JsonValue.Create($"{text} {start.Unit}"), path, $"{text} {start.Unit}"));
+                ? Choice(JsonValue.Create(double.Parse(text, CultureInfo.InvariantCulture)), path, label, text)
+                : Choice(JsonValue.Create($"{text} {start.Unit}"), path, label, $"{text} {start.Unit}"));
         }
 
         return choices;
@@ -155,8 +156,8 @@ internal static partial class SweepParameterReader
         return null;
     }
 
-    private static SweepParameter.Choice Choice(JsonNode node, string path, string written) =>
-        new(node, SweepValues.Of(path, written));
+    private static SweepParameter.Choice Choice(JsonNode node, string path, string label, string written) =>
+        new(node, SweepValues.Of(path, written, label));
 
     /// <summary>The number and the unit text of "1e-10 cm2/s"; null when the text does not start with a number.</summary>
     internal static (double Number, string Unit)? Split(string text)

@@ -12,7 +12,7 @@ public sealed record SweepVariant(string Name, string Json, IReadOnlyList<SweepV
 
 /// <summary>A value given to one parameter of a sweep.</summary>
 /// <param name="Path">JSON path of the parameter, e.g. <c>$.layers[0].thickness</c>.</param>
-/// <param name="Label">Short label: the path without <c>$.</c>.</param>
+/// <param name="Label">The parameter in words for tables and plots, e.g. "membrane thickness" (<see cref="InputLabels"/>).</param>
 /// <param name="Written">The value as substituted into the document, e.g. "20 um" or "0.5".</param>
 /// <param name="Number">The number of <paramref name="Written"/> in its own unit, for plotting.</param>
 /// <param name="Unit">The unit text of <paramref name="Written"/>; empty for plain numbers.</param>
@@ -22,9 +22,12 @@ public sealed record SweepValue(string Path, string Label, string Written, doubl
 public static class SweepValues
 {
     /// <summary>The value written at a path, with its number and unit split for plotting (NaN when not a number).</summary>
-    public static SweepValue Of(string path, string written)
+    /// <param name="path">The JSON path of the parameter.</param>
+    /// <param name="written">The value as written.</param>
+    /// <param name="label">The parameter in words; null for the words of the path alone (no case document at hand).</param>
+    public static SweepValue Of(string path, string written, string? label = null)
     {
         var (number, unit) = SweepParameterReader.Split(written) ?? (double.NaN, string.Empty);
-        return new SweepValue(path, path.StartsWith("$.", StringComparison.Ordinal) ? path[2..] : path, written, number, unit);
+        return new SweepValue(path, label ?? InputLabels.Of(null, path), written, number, unit);
     }
 }

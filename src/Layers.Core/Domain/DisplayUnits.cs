@@ -23,6 +23,19 @@ public sealed record DisplayUnits
     /// </summary>
     public UnitDefinition? MediumMassFraction { get; init; }
 
+    /// <summary>
+    /// Unit for concentrations inside the layers as a mass fraction (mg/kg of polymer), each layer's with its own
+    /// density, when the case wrote a layer's concentration so and every layer gives its density; null to show
+    /// them as mass per volume (<see cref="Concentration"/>).
+    /// </summary>
+    public UnitDefinition? LayerMassFraction { get; init; }
+
+    /// <summary>
+    /// Why layers written as mass fractions are shown as mass per volume (a layer without a density), for the
+    /// reports to say; null otherwise.
+    /// </summary>
+    public string? LayerMassFractionRefused { get; init; }
+
     /// <summary>Unit for mass per contact area.</summary>
     public UnitDefinition MassPerArea { get; init; } = UnitTable.Get("ug/cm2");
 

@@ -91,7 +91,10 @@ public static class CaseFitter
         }
 
         CheckData(request, simulation, errors);
-        return errors.Count > before ? null : new PreparedFit(request, new FitModel(root, request.CasePath, parameters, request.Data, request.Face), parameters);
+        return errors.Count > before ? null : new PreparedFit(request, new FitModel(root, request.CasePath, parameters, request.Data, request.Face)
+        {
+            MediumDensityKgPerCubicMeter = (simulation.Face(request.Face) as CompartmentFace)?.DensityKgPerCubicMeter,
+        }, parameters);
     }
 
     /// <summary>Runs the fit, telling how it ended: done, cancelled, or the model cannot be solved at the starting values.</summary>
@@ -165,9 +168,13 @@ public static class CaseFitter
         {
             errors.Add($"{request.CasePath}: $.{side}: the {side} face is closed; the data must be measured in the medium on a face (use --face)");
         }
-        else if (data.Quantity == MeasuredQuantity.Concentration && !medium.HasFiniteVolume)
+        else if (data.Quantity is MeasuredQuantity.Concentration or MeasuredQuantity.MassFraction && !medium.HasFiniteVolume)
         {
             errors.Add($"{request.CasePath}: $.{side}: '{data.FileName}' holds concentrations, which need a compartment on the {side} face; a bath's concentration is fixed");
+        }
+        else if (data.Quantity == MeasuredQuantity.MassFraction && (medium as CompartmentFace)?.DensityKgPerCubicMeter is null)
+        {
+            errors.Add($"{request.CasePath}: $.{side}.density: '{data.FileName}' holds concentrations as a mass fraction ({data.ValueUnit.Symbol}), which need the density of the compartment on the {side} face to compare with the model; give \"density\" (e.g. \"0.92 g/mL\") or write the data as a mass per volume (e.g. mg/L)");
         }
 
         var last = data.TimesSeconds.Count > 0 ? data.TimesSeconds[^1] : 0;

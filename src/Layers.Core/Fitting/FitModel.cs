@@ -61,13 +61,22 @@ internal sealed class FitModel(JsonObject root, string casePath, IReadOnlyList<F
     public double[]? Values(IReadOnlyList<double> logValues, CancellationToken cancellation)
         => Samples(logValues, cancellation) is { } samples ? At(samples) : null;
 
-    /// <summary>The measured quantity in one sample, SI.</summary>
+    /// <summary>
+    /// The density of the compartment the data were measured in, kg/m3, for data written as mass fractions; null
+    /// otherwise. The one conversion between the model's kg/m3 and the data's kg/kg is made in <see cref="Of"/>.
+    /// </summary>
+    public double? MediumDensityKgPerCubicMeter { get; init; }
+
+    /// <summary>The measured quantity in one sample, SI (in the data's own dimension).</summary>
     public double Of(StateSample sample)
     {
         var medium = face == Side.Left ? sample.Left : sample.Right;
-        return data.Quantity == MeasuredQuantity.Concentration
-            ? medium!.ConcentrationKgPerCubicMeter
-            : medium!.TransferredIntoMediumPerArea;
+        return data.Quantity switch
+        {
+            MeasuredQuantity.Concentration => medium!.ConcentrationKgPerCubicMeter,
+            MeasuredQuantity.MassFraction => medium!.ConcentrationKgPerCubicMeter / MediumDensityKgPerCubicMeter!.Value,
+            MeasuredQuantity.AmountPerArea => medium!.TransferredIntoMediumPerArea,
+        };
     }
 
     /// <summary>The measured quantity at the measured times, from the samples of a run.</summary>

@@ -17,8 +17,8 @@ namespace Layers.Core.Fitting;
 /// <param name="StartValue">The value written in the case, in <paramref name="Unit"/>: the starting point of the fit.</param>
 public sealed record FitParameter(string Path, string Unit, double StartValue)
 {
-    /// <summary>The path without the leading <c>$.</c>, for tables and legends.</summary>
-    public string Label => Path.StartsWith("$.", StringComparison.Ordinal) ? Path[2..] : Path;
+    /// <summary>The value in words for tables and legends, e.g. "membrane diffusion coefficient" (<see cref="InputLabels"/>).</summary>
+    public string Label { get; init; } = InputLabels.Of(null, Path);
 
     /// <summary>The parsed path.</summary>
     internal IReadOnlyList<object> Steps { get; init; } = [];
@@ -27,7 +27,7 @@ public sealed record FitParameter(string Path, string Unit, double StartValue)
     public string Written(double value) => Input.Show(value);
 
     /// <summary>The same value as a study input, written into the case the way every study writes its values.</summary>
-    internal StudyInput Input => new(Path, Unit) { Steps = Steps };
+    internal StudyInput Input => new(Path, Unit) { Steps = Steps, Label = Label };
 
     /// <summary>Finds the value at <paramref name="path"/> in the case; null with a message when it cannot be estimated.</summary>
     internal static FitParameter? Read(JsonObject root, string path, out string? problem)
@@ -61,6 +61,6 @@ public sealed record FitParameter(string Path, string Unit, double StartValue)
             return null;
         }
 
-        return new FitParameter(path, found.Unit, found.Number) { Steps = steps };
+        return new FitParameter(path, found.Unit, found.Number) { Steps = steps, Label = InputLabels.Of(root, steps) };
     }
 }

@@ -32,5 +32,8 @@ public sealed record FitRequest(string CasePath, MeasuredSeries Data, Side Face,
         (MeasuredQuantity.Concentration, Side.Right) => NamedResult.RightConcentration,
         (MeasuredQuantity.AmountPerArea, Side.Left) => NamedResult.LeftReceived,
         (MeasuredQuantity.AmountPerArea, Side.Right) => NamedResult.RightReceived,
+
+        // A mass fraction in the medium: the catalogue's mass-fraction result, for its SI unit kg/kg.
+        (MeasuredQuantity.MassFraction, _) => NamedResult.FoodConcentration,
     };
 }

@@ -12,6 +12,12 @@ public enum MeasuredQuantity
 
     /// <summary>The cumulative amount per area received by the medium on the chosen face (e.g. ug/cm2).</summary>
     AmountPerArea,
+
+    /// <summary>
+    /// The concentration in the compartment on the chosen face as a mass fraction (e.g. mg/kg of food), compared with
+    /// the model through the compartment's density.
+    /// </summary>
+    MassFraction,
 }
 
 /// <summary>Measured values against time, in SI, as read from the user's CSV file.</summary>
@@ -21,7 +27,7 @@ public enum MeasuredQuantity
 /// <param name="ValueUnit">The unit of the value column, for display.</param>
 /// <param name="ValueName">The name of the value column, e.g. "cumulative amount".</param>
 /// <param name="TimesSeconds">Measurement times, s, ascending.</param>
-/// <param name="Values">Measured values, SI (kg/m3 or kg/m2).</param>
+/// <param name="Values">Measured values, SI (kg/m3, kg/kg or kg/m2).</param>
 /// <param name="Deviations">Standard deviations of the values, SI, or null when the file gives none.</param>
 public sealed record MeasuredSeries(
     string FileName,
@@ -34,9 +40,9 @@ public sealed record MeasuredSeries(
     IReadOnlyList<double>? Deviations)
 {
     private static readonly MeasuredCsv.Layout Layout = new(
-        [Dimension.MassConcentration, Dimension.MassPerArea],
+        [Dimension.MassConcentration, Dimension.MassFraction, Dimension.MassPerArea],
         "time [h],concentration [mg/L],sd [mg/L]",
-        "a concentration or a cumulative amount per area",
+        "a concentration (mass per volume, or mass per mass for a compartment with a density) or a cumulative amount per area",
         AllowsDeviation: true);
 
     /// <summary>
@@ -54,7 +60,12 @@ public sealed record MeasuredSeries(
             return null;
         }
 
-        var quantity = table.ValueUnit.Dimension == Dimension.MassPerArea ? MeasuredQuantity.AmountPerArea : MeasuredQuantity.Concentration;
+        var quantity = table.ValueUnit.Dimension switch
+        {
+            Dimension.MassPerArea => MeasuredQuantity.AmountPerArea,
+            Dimension.MassFraction => MeasuredQuantity.MassFraction,
+            _ => MeasuredQuantity.Concentration,
+        };
         return new MeasuredSeries(path, quantity, table.TimeUnit, table.ValueUnit, table.ValueName, table.TimesSeconds, table.Values, table.Deviations);
     }
 }

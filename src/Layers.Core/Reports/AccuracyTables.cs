@@ -75,7 +75,7 @@ public static class AccuracyTables
             .Select(figure => (IReadOnlyList<string>)
             [
                 figure.Figure.What + (figure.Figure.AtSeconds is { } at ? " at " + format.Time(at) : string.Empty),
-                Value(figure.Figure, format),
+                Value(figure.Figure, format, result.Case),
                 double.IsFinite(figure.RelativeError) ? Relative(figure.RelativeError) : "unknown",
             ])
             .ToList();
@@ -92,11 +92,14 @@ public static class AccuracyTables
     /// <summary>A relative error as a percentage with two significant digits, e.g. "0.033 %".</summary>
     private static string Relative(double fraction) => (100 * fraction).ToString("G2", CultureInfo.InvariantCulture) + " %";
 
-    private static string Value(KeyFigure figure, DisplayFormat format) => figure.Kind switch
+    // A face medium's concentration is shown as the other tables show it: mg/kg of a food of known density.
+    private static string Value(KeyFigure figure, DisplayFormat format, SimulationCase simulation) => figure.Kind switch
     {
         FigureKind.Amount => format.MassPerArea(figure.Value),
         FigureKind.Concentration when figure.Path.EndsWith("KgPerKg", StringComparison.Ordinal) =>
             (figure.Value * 1e6).ToString("G4", CultureInfo.InvariantCulture) + " mg/kg",
+        FigureKind.Concentration when figure.Path.StartsWith("$.faces.left.", StringComparison.Ordinal) => format.MediumConcentration(figure.Value, simulation.Left),
+        FigureKind.Concentration when figure.Path.StartsWith("$.faces.right.", StringComparison.Ordinal) => format.MediumConcentration(figure.Value, simulation.Right),
         FigureKind.Concentration => format.Concentration(figure.Value),
         FigureKind.Flux => format.Flux(figure.Value),
         FigureKind.Time => format.Time(figure.Value),

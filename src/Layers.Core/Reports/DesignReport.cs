@@ -72,7 +72,7 @@ public static class DesignReport
     {
         ArgumentNullException.ThrowIfNull(outcome);
         var settings = outcome.Settings;
-        var question = $"{settings.Input.Label} for {settings.Result.Describe()} = {DesignSolver.Show(settings, settings.TargetSi)}";
+        var question = $"{settings.Input.Label} for {settings.Result.Label} = {DesignSolver.Show(settings, settings.TargetSi)}";
         if (outcome.Answer is not { } answer)
         {
             return outcome.Message ?? question;

@@ -39,7 +39,7 @@ public static class DiffusionCellTables
             ]).ToArray();
             tables.Add(new TextTable(
                 $"Samples from {sampled.Name} (cumulative amount corrected for earlier samples)",
-                [$"time [{result.Case.Display.Time.Symbol}]", "concentration", "cumulative amount"],
+                [$"time [{result.Case.Display.Time.ForPeople}]", "concentration", "cumulative amount"],
                 rows));
         }
 
@@ -107,7 +107,7 @@ public static class DiffusionCellTables
         Add("permeability coefficient k_p = J_ss / C_donor", metrics => !metrics.IsSteady
             ? NotSteady
             : metrics.PermeabilityCoefficientMetersPerSecond is { } kp
-                ? QuantityParser.FormatSi(kp, PermeabilityUnit)
+                ? DisplayFormat.Shown(kp, PermeabilityUnit)
                 : "no donor concentration");
         Add("steady part (points at or after 3 lag times)", metrics => string.Create(
             CultureInfo.InvariantCulture,
@@ -122,7 +122,7 @@ public static class DiffusionCellTables
         {
             var perArea = format.MassPerArea(delivery.PerDayPerArea[day]);
             var total = delivery.AreaSquareMeters is { } area
-                ? $"{perArea}; {QuantityParser.FormatSi(delivery.PerDayPerArea[day] * area, UnitTable.Get("mg"))} over {QuantityParser.FormatSi(area, UnitTable.Get("cm2"))}"
+                ? $"{perArea}; {DisplayFormat.Shown(delivery.PerDayPerArea[day] * area, UnitTable.Get("mg"))} over {DisplayFormat.Shown(area, UnitTable.Get("cm2"))}"
                 : perArea;
             rows.Add([string.Create(CultureInfo.InvariantCulture, $"delivered on day {day + 1}"), total]);
         }

@@ -7,15 +7,16 @@ namespace Layers.Core.Reports;
 /// <summary>Formats SI values in the units the user wrote the case in.</summary>
 internal sealed class DisplayFormat(DisplayUnits units)
 {
-    public string Time(double seconds) => QuantityParser.FormatSi(seconds, units.Time);
+    /// <summary>A time in the run's unit, or in a smaller one named beside it when it is far below the run's unit (<see cref="DisplayUnitRules.TimeFigure"/>).</summary>
+    public string Time(double seconds) => Shown(seconds, DisplayUnitRules.TimeFigure(seconds, units.Time));
 
-    public string Depth(double meters) => QuantityParser.FormatSi(meters, units.Depth);
+    public string Depth(double meters) => Shown(meters, units.Depth);
 
-    public string Concentration(double kgPerCubicMeter) => QuantityParser.FormatSi(kgPerCubicMeter, units.Concentration);
+    public string Concentration(double kgPerCubicMeter) => Shown(kgPerCubicMeter, units.Concentration);
 
-    public string MassPerArea(double kgPerSquareMeter) => QuantityParser.FormatSi(kgPerSquareMeter, units.MassPerArea);
+    public string MassPerArea(double kgPerSquareMeter) => Shown(kgPerSquareMeter, units.MassPerArea);
 
-    public string Flux(double kgPerSquareMeterSecond) => QuantityParser.FormatSi(kgPerSquareMeterSecond, units.Flux);
+    public string Flux(double kgPerSquareMeterSecond) => Shown(kgPerSquareMeterSecond, units.Flux);
 
     /// <summary>
     /// A face medium's concentration: as a mass fraction (mg/kg of food) where the display asks for one and the
@@ -23,7 +24,7 @@ internal sealed class DisplayFormat(DisplayUnits units)
     /// </summary>
     public string MediumConcentration(double kgPerCubicMeter, double? densityKgPerCubicMeter)
         => units.MediumMassFraction is { } fraction && densityKgPerCubicMeter is { } density
-            ? QuantityParser.FormatSi(kgPerCubicMeter / density, fraction)
+            ? Shown(kgPerCubicMeter / density, fraction)
             : Concentration(kgPerCubicMeter);
 
     public string TimeValue(double seconds) => Number(units.Time.FromSi(seconds));
@@ -38,10 +39,17 @@ internal sealed class DisplayFormat(DisplayUnits units)
 
     public string MediumConcentrationUnit(FaceCondition face)
         => units.MediumMassFraction is { } fraction && (face as CompartmentFace)?.DensityKgPerCubicMeter is not null
-            ? fraction.Symbol
-            : units.Concentration.Symbol;
+            ? fraction.ForPeople
+            : units.Concentration.ForPeople;
 
     public static string Percent(double fraction) => (100 * fraction).ToString("F1", CultureInfo.InvariantCulture) + " %";
+
+    /// <summary>A value in SI in a unit, four significant digits, with the unit as people spell it ("12.5 µg/cm2").</summary>
+    public static string Shown(double siValue, UnitDefinition unit) => Number(unit.FromSi(siValue)) + " " + unit.ForPeople;
+
+    /// <summary>A floor shown in place of a figure below it: one significant digit of the number shown ("1E-05").</summary>
+    public static string Floor(string shownNumber) =>
+        double.Parse(shownNumber, CultureInfo.InvariantCulture).ToString("G1", CultureInfo.InvariantCulture);
 
     /// <summary>A number as the console tables show it: four significant digits, invariant culture.</summary>
     public static string Number(double value) => value.ToString("G4", CultureInfo.InvariantCulture);

@@ -25,7 +25,12 @@ public static class FitJson
             json.WriteString("caseFile", fit.Request.CasePath);
             json.WriteString("dataFile", fit.Request.Data.FileName);
             json.WriteString("face", fit.Request.Face == Side.Left ? "left" : "right");
-            json.WriteString("measured", fit.Request.Data.Quantity == MeasuredQuantity.Concentration ? "concentration" : "cumulativeAmountPerArea");
+            json.WriteString("measured", fit.Request.Data.Quantity switch
+            {
+                MeasuredQuantity.Concentration => "concentration",
+                MeasuredQuantity.MassFraction => "concentrationMassFraction",
+                MeasuredQuantity.AmountPerArea => "cumulativeAmountPerArea",
+            });
             json.WriteBoolean("weighted", fit.Request.Data.Deviations is not null);
             json.WriteNumber("confidenceLevel", fit.Request.Confidence);
             json.WriteBoolean("trustworthy", fit.IsTrustworthy);

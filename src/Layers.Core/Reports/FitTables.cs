@@ -88,7 +88,7 @@ public static class FitTables
         var data = fit.Request.Data;
         var scale = weighted
             ? fit.ResidualScale.ToString("G3", CultureInfo.InvariantCulture) + " (about 1 when model and standard deviations agree)"
-            : $"{data.ValueUnit.FromSi(fit.ResidualScale).ToString("G3", CultureInfo.InvariantCulture)} {data.ValueUnit.Symbol}";
+            : $"{data.ValueUnit.FromSi(fit.ResidualScale).ToString("G3", CultureInfo.InvariantCulture)} {data.ValueUnit.ForPeople}";
         var stop = fit.Stop switch
         {
             LeastSquaresStop.Converged => "converged",

@@ -14,7 +14,7 @@ public static class InputTables
     public static TextTable Layers(SimulationCase simulation)
     {
         var format = new DisplayFormat(simulation.Display);
-        var depth = simulation.Display.Depth.Symbol;
+        var depth = simulation.Display.Depth.ForPeople;
 
         // A D that depends on temperature is shown as in the first stage, where the run starts.
         var rows = simulation.WithFirstStageDiffusivities().Stack.Layers.Select((layer, index) => (IReadOnlyList<string>)
@@ -23,14 +23,17 @@ public static class InputTables
             DisplayFormat.Number(simulation.Display.Depth.FromSi(layer.ThicknessMeters)),
             DisplayFormat.Number(UnitTable.Get("cm2/s").FromSi(layer.DiffusivitySquareMetersPerSecond)),
             DisplayFormat.Number(layer.PartitionCoefficient),
-            DisplayFormat.Number(simulation.Display.Concentration.FromSi(layer.InitialConcentrationKgPerCubicMeter)),
+            DisplayFormat.Number(simulation.Display.LayerMassFraction is { } fraction
+                ? fraction.FromSi(layer.InitialConcentrationKgPerCubicMeter / layer.DensityKgPerCubicMeter!.Value)
+                : simulation.Display.Concentration.FromSi(layer.InitialConcentrationKgPerCubicMeter)),
             format.Time(layer.ThicknessMeters * layer.ThicknessMeters / layer.DiffusivitySquareMetersPerSecond),
             DisplayFormat.Number(UnitTable.Get("cm/h").FromSi(1 / layer.ResistanceSecondsPerMeter)),
             OriginOf(simulation, index),
         ]).ToArray();
+        var refused = simulation.Display.LayerMassFractionRefused is { } why ? $"; {why}" : string.Empty;
         return new TextTable(
-            $"Layers, left to right (K relative to {simulation.ReferenceMedium}, volume basis)",
-            ["layer", $"thickness [{depth}]", "D [cm2/s]", "K [-]", $"initial c [{simulation.Display.Concentration.Symbol}]", "h^2/D", "D K/h [cm/h]", "D from"],
+            $"Layers, left to right (K relative to {simulation.ReferenceMedium}, volume basis{refused})",
+            ["layer", $"thickness [{depth}]", "D [cm2/s]", "K [-]", $"initial c [{(simulation.Display.LayerMassFraction ?? simulation.Display.Concentration).ForPeople}]", "h^2/D", "D K/h [cm/h]", "D from"],
             rows);
     }
 

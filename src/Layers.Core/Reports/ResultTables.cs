@@ -15,23 +15,30 @@ public static class ResultTables
         var simulation = result.Case;
         var format = new DisplayFormat(simulation.Display);
         var media = Media(simulation).ToArray();
-        var headers = new List<string> { $"time [{simulation.Display.Time.Symbol}]" };
+        var headers = new List<string> { $"time [{simulation.Display.Time.ForPeople}]" };
         foreach (var (_, face) in media)
         {
             var name = TimeSeriesCsv.FaceName(face);
             headers.Add($"{name}: concentration [{format.MediumConcentrationUnit(face)}]");
-            headers.Add($"{name}: received [{simulation.Display.MassPerArea.Symbol}]");
+            headers.Add($"{name}: received [{simulation.Display.MassPerArea.ForPeople}]");
         }
 
         headers.Add("toward final state");
+        // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
+        var amountFloor = Simulation.NegligibleFloor.AmountPerArea(result);
         var rows = result.Reports.Select(report =>
         {
             var row = new List<string> { format.TimeValue(report.Sample.TimeSeconds) };
             foreach (var (side, face) in media)
             {
                 var sample = (side == Side.Left ? report.Sample.Left : report.Sample.Right)!;
-                row.Add(format.MediumConcentrationValue(sample.ConcentrationKgPerCubicMeter, face));
-                row.Add(format.MassPerAreaValue(sample.TransferredIntoMediumPerArea));
+                var concentrationFloor = Simulation.NegligibleFloor.ConcentrationIn(result, face);
+                row.Add(Simulation.NegligibleFloor.Hides(sample.ConcentrationKgPerCubicMeter, concentrationFloor)
+                    ? "< " + DisplayFormat.Floor(format.MediumConcentrationValue(concentrationFloor!.Value, face))
+                    : format.MediumConcentrationValue(sample.ConcentrationKgPerCubicMeter, face));
+                row.Add(Simulation.NegligibleFloor.Hides(sample.TransferredIntoMediumPerArea, amountFloor)
+                    ? "< " + DisplayFormat.Floor(format.MassPerAreaValue(amountFloor))
+                    : format.MassPerAreaValue(sample.TransferredIntoMediumPerArea));
             }
 
             // Undefined (NaN) when the system starts at its final state.

@@ -21,10 +21,10 @@ public static class StackText
     internal static string Face(FaceCondition face, DisplayFormat format) => face switch
     {
         BathFace bath => $"bath \"{bath.Name}\" at {format.Concentration(bath.ConcentrationKgPerCubicMeter)} (K {DisplayFormat.Number(bath.PartitionCoefficient)}{Film(bath.FilmCoefficientMetersPerSecond)})",
-        CompartmentFace compartment => $"compartment \"{compartment.Name}\" {QuantityParser.FormatSi(compartment.VolumeCubicMeters, UnitTable.Get("mL"))} on {QuantityParser.FormatSi(compartment.ContactAreaSquareMeters, UnitTable.Get("cm2"))}, starting at {format.Concentration(compartment.InitialConcentrationKgPerCubicMeter)} (K {DisplayFormat.Number(compartment.PartitionCoefficient)}{Film(compartment.FilmCoefficientMetersPerSecond)})",
+        CompartmentFace compartment => $"compartment \"{compartment.Name}\" {DisplayFormat.Shown(compartment.VolumeCubicMeters, UnitTable.Get("mL"))} on {DisplayFormat.Shown(compartment.ContactAreaSquareMeters, UnitTable.Get("cm2"))}, starting at {format.Concentration(compartment.InitialConcentrationKgPerCubicMeter)} (K {DisplayFormat.Number(compartment.PartitionCoefficient)}{Film(compartment.FilmCoefficientMetersPerSecond)})",
         _ => "closed",
     };
 
     private static string Film(double? coefficient)
-        => coefficient is { } k ? $", film {QuantityParser.FormatSi(k, UnitTable.Get("cm/s"))}" : string.Empty;
+        => coefficient is { } k ? $", film {DisplayFormat.Shown(k, UnitTable.Get("cm/s"))}" : string.Empty;
 }

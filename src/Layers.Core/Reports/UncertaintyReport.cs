@@ -148,7 +148,7 @@ public static class UncertaintyReport
         };
         foreach (var series in outcome.Series.Where(series => NamedResults.Dimension(series.Result) == Units.Dimension.MassPerArea))
         {
-            lines.Add($"{series.Name} ({percents}):");
+            lines.Add($"{series.Label} ({percents}):");
             foreach (var time in outcome.BaseCase.ReportTimesSeconds)
             {
                 var index = IndexOf(outcome.TimesSeconds, time);
@@ -161,15 +161,24 @@ public static class UncertaintyReport
 
         foreach (var result in outcome.Results)
         {
-            var show = result.Result.Dimension == Units.Dimension.Time ? (Func<double, string>)format.Time : value => DisplayFormat.Number(value) + " " + result.Result.SiUnit;
-            lines.Add($"{result.Result.Describe()} ({percents}): {string.Join(" / ", result.Percentiles.Select(value => double.IsPositiveInfinity(value) ? "not reached" : show(value)))}");
+            // In the run's display units, as the console shows every other figure of the case.
+            Func<double, string> show = result.Result.Dimension switch
+            {
+                Units.Dimension.Time => format.Time,
+                Units.Dimension.MassPerArea => format.MassPerArea,
+                Units.Dimension.MassFlux => format.Flux,
+                Units.Dimension.MassConcentration => format.Concentration,
+                Units.Dimension.MassFraction => value => DisplayFormat.Shown(value, Units.UnitTable.Get("mg/kg")),
+                _ => value => DisplayFormat.Number(value) + " " + result.Result.SiUnit,
+            };
+            lines.Add($"{result.Result.Label} ({percents}): {string.Join(" / ", result.Percentiles.Select(value => double.IsPositiveInfinity(value) ? "not reached" : show(value)))}");
         }
 
         if (outcome.Exceedance is { } exceedance)
         {
             var limit = exceedance.Limit;
             lines.Add(string.Create(CultureInfo.InvariantCulture,
-                $"chance that {limit.Result.Describe()} exceeds {Units.QuantityParser.FormatSi(limit.ValueSi, limit.Unit)} ({limit.Origin}): {exceedance.Above} of {exceedance.Counted} samples = {DisplayFormat.Percent(exceedance.Probability)} (95 % interval {DisplayFormat.Percent(exceedance.Low)} to {DisplayFormat.Percent(exceedance.High)})"));
+                $"chance that {limit.Result.Label} exceeds {DisplayFormat.Shown(limit.ValueSi, limit.Unit)} ({limit.Origin}): {exceedance.Above} of {exceedance.Counted} samples = {DisplayFormat.Percent(exceedance.Probability)} (95 % interval {DisplayFormat.Percent(exceedance.Low)} to {DisplayFormat.Percent(exceedance.High)})"));
         }
 
         return lines;

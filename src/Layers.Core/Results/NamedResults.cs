@@ -65,6 +65,23 @@ public static class NamedResults
         NamedResult.TimeToLimit => "time to reach the specific migration limit",
     };
 
+    /// <summary>
+    /// The quantity in words without a time, for the tables and plots of studies: "mass per area received by the right
+    /// medium", "lag time". A result read at a time adds its time (see <c>ResultMeasure.Label</c>).
+    /// </summary>
+    public static string Quantity(NamedResult result) => result switch
+    {
+        NamedResult.LeftReceived => "mass per area received by the left medium",
+        NamedResult.RightReceived => "mass per area received by the right medium",
+        NamedResult.LeftConcentration => "concentration in the left medium",
+        NamedResult.RightConcentration => "concentration in the right medium",
+        NamedResult.FoodConcentration => "concentration in the food",
+        NamedResult.SteadyFlux => "steady flux",
+        NamedResult.LagTime => "lag time",
+        NamedResult.TimeTo90Percent => "time to 90 % of the final state",
+        NamedResult.TimeToLimit => "time to reach the specific migration limit",
+    };
+
     /// <summary>A short heading for a console column, e.g. "right received".</summary>
     public static string Heading(NamedResult result) => result switch
     {

@@ -84,7 +84,7 @@ public static class CaseVariation
     internal static StudyInput? ReadInput(JsonObject root, JsonObject holder, string at, string unit, List<CaseError> errors)
     {
         var (path, steps) = VariedPath.Read(root, holder, at, "varied", errors);
-        return steps is null ? null : new StudyInput(path, unit) { Steps = steps };
+        return steps is null ? null : new StudyInput(path, unit) { Steps = steps, Label = InputLabels.Of(root, steps) };
     }
 
     /// <summary>

@@ -126,12 +126,12 @@ public static class DesignSolver
         string message;
         if (defined.Count == 0)
         {
-            message = $"{settings.Result.Describe()} is not defined for any value of {input.Label} {range} ({points.Count} values tried)";
+            message = $"{settings.Result.Label} is not defined for any value of {input.Label} {range} ({points.Count} values tried)";
         }
         else
         {
             var undefined = points.Count - defined.Count;
-            message = $"no value of {input.Label} {range} gives {settings.Result.Describe()} = {Show(settings, settings.TargetSi)}: " +
+            message = $"no value of {input.Label} {range} gives {settings.Result.Label} = {Show(settings, settings.TargetSi)}: " +
                 $"over that range it lies between {Show(settings, defined.Min(point => point.ResultSi))} and {Show(settings, defined.Max(point => point.ResultSi))} " +
                 $"({points.Count} values tried{(undefined > 0 ? $", {undefined} without a result" : string.Empty)}); widen the range or change the target";
         }
@@ -143,7 +143,7 @@ public static class DesignSolver
     public static string Show(DesignSettings settings, double si)
     {
         ArgumentNullException.ThrowIfNull(settings);
-        return QuantityParser.FormatSi(si, settings.TargetUnit);
+        return QuantityParser.FormatSi(si, settings.TargetUnit).Replace(settings.TargetUnit.Symbol, settings.TargetUnit.ForPeople, StringComparison.Ordinal);
     }
 
     /// <summary>The runs made so far, by value of the search variable, so that no value is solved twice.</summary>

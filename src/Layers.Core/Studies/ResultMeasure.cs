@@ -27,7 +27,13 @@ public sealed record ResultMeasure(NamedResult Kind, double? AtSeconds = null, s
     /// <summary>The SI unit of the result, as in summary files.</summary>
     public string SiUnit => NamedResults.SiUnit(Kind).Symbol;
 
-    /// <summary>The name with its time, e.g. "rightReceived at 10 d".</summary>
+    /// <summary>
+    /// The result in words with its time, for tables and plots people read: "mass per area received by the right
+    /// medium at 10 d", "... at the end", "lag time".
+    /// </summary>
+    public string Label => IsAtTime ? $"{NamedResults.Quantity(Kind)} at {(AtText.Length > 0 ? AtText : "the end")}" : NamedResults.Quantity(Kind);
+
+    /// <summary>The case-file name with its time, e.g. "rightReceived at 10 d", for files read by programs.</summary>
     public string Describe() => AtText.Length > 0 ? $"{Name} at {AtText}" : Name;
 
     /// <summary>

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.Json.Nodes;
+using Layers.Core.Cases;
 
 namespace Layers.Core.Studies;
 
@@ -15,8 +16,11 @@ public sealed record StudyInput(string Path, string Unit)
     /// <summary>The parsed path (member names and indices).</summary>
     internal IReadOnlyList<object> Steps { get; init; } = [];
 
-    /// <summary>The path without <c>$.</c>, for tables and plots.</summary>
-    public string Label => Path.StartsWith("$.", StringComparison.Ordinal) ? Path[2..] : Path;
+    /// <summary>
+    /// The value in words for tables and plots, e.g. "membrane thickness" (<see cref="InputLabels"/>); the path stays
+    /// the key of JSON and CSV files.
+    /// </summary>
+    public string Label { get; init; } = InputLabels.Of(null, Path);
 
     /// <summary>A value as written into the case: the number with all its digits and the unit.</summary>
     public string Write(double number)
@@ -25,11 +29,11 @@ public sealed record StudyInput(string Path, string Unit)
         return Unit.Length == 0 ? text : $"{text} {Unit}";
     }
 
-    /// <summary>A value for display: four significant digits and the unit.</summary>
+    /// <summary>A value for display: four significant digits and the unit as people spell it ("25 µm").</summary>
     public string Show(double number)
     {
         var text = number.ToString("G4", CultureInfo.InvariantCulture);
-        return Unit.Length == 0 ? text : $"{text} {Unit}";
+        return Unit.Length == 0 ? text : $"{text} {Units.UnitSpelling.ForPeople(Unit)}";
     }
 
     /// <summary>The JSON node written at <see cref="Path"/> for a value: a string with the unit, or a plain number.</summary>

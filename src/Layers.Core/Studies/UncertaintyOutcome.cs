@@ -22,6 +22,9 @@ public sealed record SeriesSpread(NamedResult Result, IReadOnlyList<IReadOnlyLis
     /// <summary>The result's case-file name, e.g. <c>rightReceived</c>.</summary>
     public string Name => NamedResults.Name(Result);
 
+    /// <summary>The result in words, for console lines and plots.</summary>
+    public string Label => NamedResults.Quantity(Result);
+
     /// <summary>Its SI unit.</summary>
     public string SiUnit => NamedResults.SiUnit(Result).Symbol;
 }

@@ -8,7 +8,7 @@ namespace Layers.Core.Studies;
 public sealed record UncertainInput(StudyInput Input, Distribution Distribution)
 {
     /// <summary>"path: distribution (parameters with units)".</summary>
-    public string Describe() => $"{Input.Label}: {Distribution.Describe(Input.Unit)}";
+    public string Describe() => $"{Input.Label}: {Distribution.Describe(Units.UnitSpelling.ForPeople(Input.Unit))}";
 }
 
 /// <summary>A limit whose chance of being exceeded is reported.</summary>

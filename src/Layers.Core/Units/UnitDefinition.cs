@@ -19,6 +19,13 @@ public sealed record UnitDefinition(string Symbol, Dimension Dimension, double F
         : throw new ArgumentOutOfRangeException(
             nameof(FactorToSi), FactorToSi, "The factor must be finite and positive.");
 
+    /// <summary>
+    /// The symbol as texts for people write it (console, report.html, summary.md): the micro prefix as µ (U+00B5),
+    /// "µg/cm2", "µm", so that one spelling is used beside the plots' µg. Files read by programs (CSV and JSON headers)
+    /// keep the ASCII <see cref="Symbol"/>, which inputs accept too.
+    /// </summary>
+    public string ForPeople => UnitSpelling.ForPeople(Symbol);
+
     /// <summary>Converts a value given in this unit to the SI unit of <see cref="Dimension"/>.</summary>
     /// <param name="value">The value in this unit.</param>
     /// <returns><c>value * FactorToSi + OffsetToSi</c>.</returns>

@@ -34,11 +34,11 @@ public sealed class CheckCommandTests
     {
         var output = CliRun.Invoke("check", Demo).Output;
 
-        // 1000 mg/kg at 0.92 g/cm3 = 0.92 kg/m3 = 920 mg/L (mass fraction times density; SI Brochure 9th ed.,
-        // Tables 7 and 8), in the sealant's row under "initial c [mg/L]".
-        Assert.Contains("initial c [mg/L]", output, StringComparison.Ordinal);
+        // 1000 mg/kg at 0.92 g/cm3 = 0.92 kg/m3 inside the run (mass fraction times density; SI Brochure 9th ed.,
+        // Tables 7 and 8), shown back as written: every layer gives its density, so "initial c [mg/kg]".
+        Assert.Contains("initial c [mg/kg]", output, StringComparison.Ordinal);
         var sealant = output.Split('\n').Single(line => line.TrimStart().StartsWith("sealant", StringComparison.Ordinal));
-        Assert.Contains(" 920 ", sealant, StringComparison.Ordinal);
+        Assert.Contains(" 1000 ", sealant, StringComparison.Ordinal);
         // 1 kg / 0.92 g/cm3 = 1087 mL to four digits; 6 dm2 = 600 cm2 (SI Brochure 9th ed., Tables 7 and 8).
         Assert.Contains("1087 mL on 600 cm2", output, StringComparison.Ordinal);
     }

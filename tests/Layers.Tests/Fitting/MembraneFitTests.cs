@@ -73,7 +73,7 @@ public sealed class MembraneFitTests
 
         // What the data do determine is the product D K (steady flux D K c / L), in the unit of D.
         var product = finding.Combination!;
-        Assert.Equal("layers[0].diffusionCoefficient × layers[0].partitionCoefficient", product.Text);
+        Assert.Equal("membrane diffusion coefficient × membrane partition coefficient", product.Text);
         Assert.Equal("cm2/s", product.Unit);
         Assert.InRange(FitData.DiffusivityCm2PerS * FitData.PartitionCoefficient, product.Lower, product.Upper);
         Tolerance.Relative(FitData.DiffusivityCm2PerS * FitData.PartitionCoefficient, product.Value, 0.03, "D K");

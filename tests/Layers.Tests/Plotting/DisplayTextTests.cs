@@ -22,15 +22,15 @@ public sealed class DisplayTextTests
     }
 
     [Theory]
-    [InlineData(7200, "2\u00A0h")]
-    [InlineData(86400, "1\u00A0d")]
-    [InlineData(129600, "1.5\u00A0d")]
-    [InlineData(90, "1.5\u00A0min")]
-    [InlineData(0.5, "0.5\u00A0s")]
-    [InlineData(6538.6, "1.82\u00A0h")]
-    public void Times_are_written_in_the_largest_unit_they_fill(double seconds, string expected)
+    [InlineData(7200, "h", "2\u00A0h")]
+    [InlineData(86400, "h", "24\u00A0h")] // a 24 h run says "after 24 h", not "after 1 d"
+    [InlineData(129600, "d", "1.5\u00A0d")]
+    [InlineData(90, "min", "1.5\u00A0min")]
+    [InlineData(0.5, "d", "0.5\u00A0s")] // far below the run's unit: its own, named
+    [InlineData(6538.6, "h", "1.82\u00A0h")]
+    public void Times_are_written_in_the_run_unit_unless_far_from_it(double seconds, string runUnit, string expected)
     {
-        Assert.Equal(expected, DisplayText.Time(seconds));
+        Assert.Equal(expected, DisplayText.Time(seconds, UnitTable.Get(runUnit)));
     }
 
     [Theory]

@@ -41,7 +41,7 @@ public sealed class MigrationLimitPlotTests
 
         // The subtitle states the limit and the summary's time, in the display's own time format.
         var subtitle = model.Subtitle.Replace('\n', ' ');
-        Assert.Contains($"food reaches it at {DisplayText.Time(reached)}", subtitle, StringComparison.Ordinal);
+        Assert.Contains($"food reaches it at {DisplayText.Time(reached, result.Case.Display.Time)}", subtitle, StringComparison.Ordinal);
         Assert.Contains("specific migration limit", subtitle, StringComparison.Ordinal);
 
         // The crossing is marked where the solver found it, on the limit line, when that time lies on the axis.

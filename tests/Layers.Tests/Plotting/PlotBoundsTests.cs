@@ -105,8 +105,8 @@ public sealed class PlotBoundsTests
         var legend = model.Series.OfType<LineSeries>().Where(line => line.RenderInLegend).Select(line => line.Title).ToList();
         // The initial state (the reports start after t = 0) and 12 of the 40 report times, the first and the last.
         Assert.Equal(13, legend.Count);
-        Assert.Equal("t = " + DisplayText.Time(3600), legend[1]);
-        Assert.Equal("t = " + DisplayText.Time(40 * 3600), legend[^1]);
+        Assert.Equal("t = " + DisplayText.Time(3600, result.Case.Display.Time), legend[1]);
+        Assert.Equal("t = " + DisplayText.Time(40 * 3600, result.Case.Display.Time), legend[^1]);
         Assert.Contains("12 of the 40 report times", model.Subtitle.Replace('\n', ' '), StringComparison.Ordinal);
     }
 

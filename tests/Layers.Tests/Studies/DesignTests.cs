@@ -79,7 +79,7 @@ public sealed class DesignTests
         Assert.Equal(StudyStatus.NotReached, outcome.Status);
         Assert.Null(outcome.Answer);
         Assert.Equal(4, outcome.Points.Count);
-        Assert.StartsWith("no value of layers[0].thickness from 5 um to 20 um gives lagTime = 10 h: over that range it lies between", outcome.Message);
+        Assert.StartsWith("no value of membrane thickness from 5 µm to 20 µm gives lag time = 10 h: over that range it lies between", outcome.Message);
         Assert.Contains("widen the range or change the target", outcome.Message, StringComparison.Ordinal);
     }
 
@@ -94,7 +94,7 @@ public sealed class DesignTests
         var outcome = CliRun.Invoke("design", file, "--out", temp.Combine("out"), "--plot-width", "400", "--plot-height", "300");
 
         Assert.Equal(ExitCodes.NoTrustworthyAnswer, outcome.ExitCode);
-        Assert.Contains("no value of layers[0].thickness from 5 um to 20 um gives lagTime = 10 h", outcome.Error, StringComparison.Ordinal);
+        Assert.Contains("no value of membrane thickness from 5 µm to 20 µm gives lag time = 10 h", outcome.Error, StringComparison.Ordinal);
         var json = File.ReadAllText(temp.Combine("out", "reach.design", "design.json"));
         Assert.Contains("\"status\": \"notReached\"", json, StringComparison.Ordinal);
         Assert.True(Plotting.PngImage.HasSignature(File.ReadAllBytes(temp.Combine("out", "reach.design", "design.png"))));

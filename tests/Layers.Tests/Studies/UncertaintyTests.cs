@@ -161,7 +161,7 @@ public sealed class UncertaintyTests
         Assert.Equal(5, File.ReadAllLines(Path.Combine(folder, "samples.csv")).Length);
         Assert.Equal(6, File.ReadAllLines(temp.Combine("b", "spread.uncertainty", "samples.csv")).Length);
         Assert.StartsWith("time [s],rightReceived p5 [kg/m2],rightReceived p50 [kg/m2],rightReceived p95 [kg/m2]", File.ReadAllText(Path.Combine(folder, "percentiles.csv")), StringComparison.Ordinal);
-        Assert.Contains("chance that rightReceived at 1 h exceeds 1 ug/cm2", first.Output, StringComparison.Ordinal);
+        Assert.Contains("chance that mass per area received by the right medium at 1 h exceeds 1 µg/cm2", first.Output, StringComparison.Ordinal);
         Assert.Contains("not dosing advice", first.Output, StringComparison.Ordinal);
         Assert.NotEqual(
             File.ReadAllLines(Path.Combine(folder, "samples.csv"))[1],

@@ -33,4 +33,22 @@ public static class NegligibleFloor
             + Math.Abs(sample.Right?.TransferredIntoMediumPerArea ?? 0));
         return NumericsSettings.NegligibleFractionOfContent * Math.Max(content, result.Case.Left.InitialMassPerArea + result.Case.Right.InitialMassPerArea);
     }
+
+    /// <summary>
+    /// The floor as a concentration in a face medium, kg/m3: the floor amount spread over a compartment
+    /// (amount x contact area / volume); null for a medium whose concentration is an input (a bath) or a closed face.
+    /// </summary>
+    public static double? ConcentrationIn(SimulationResult result, FaceCondition face)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return face is CompartmentFace compartment
+            ? AmountPerArea(result) * compartment.ContactAreaSquareMeters / compartment.VolumeCubicMeters
+            : null;
+    }
+
+    /// <summary>
+    /// True when a figure is below the floor in magnitude and not zero: such a figure has no known accuracy (the error
+    /// estimate counts it as negligible), so reports for people show "&lt; floor" in its place, not its digits.
+    /// </summary>
+    public static bool Hides(double value, double? floor) => floor is { } level && value != 0 && Math.Abs(value) < level;
 }
