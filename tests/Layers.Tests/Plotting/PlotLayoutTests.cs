@@ -185,9 +185,10 @@ public sealed partial class PlotLayoutTests(PlotCases cases) : IClassFixture<Plo
 
         var legend = model.Series.OfType<LineSeries>().Where(line => line.RenderInLegend).Select(line => line.Title).ToList();
 
-        Assert.Contains("t = 4\u00A0d (under t = 8\u00A0d)", legend);
+        // A case built in code shows its times in hours (DisplayUnits' default), every curve in the run's one unit.
+        Assert.Contains("t = 96\u00A0h (under t = 192\u00A0h)", legend);
         Assert.Contains("t = 4\u00A0h", legend);
-        Assert.Contains("t = 8\u00A0d", legend);
+        Assert.Contains("t = 192\u00A0h", legend);
     }
 
     [Fact]
