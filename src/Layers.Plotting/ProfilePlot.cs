@@ -208,7 +208,9 @@ public static class ProfilePlot
             var layers = report.Profiles.Select((profile, layer) => (IReadOnlyList<DataPoint>)[.. profile.PositionsMeters.Zip(
                 profile.ConcentrationsKgPerCubicMeter,
                 (x, c) => new DataPoint(depthUnit.FromSi(x), concentrationUnit.FromSi(c / scale.LayerDivisor(layer))))]);
-            var label = sample.TimeSeconds == 0 ? "t = 0" : "t = " + DisplayText.Time(sample.TimeSeconds, result.Case.Display.Time);
+            var label = sample.TimeSeconds == 0
+                ? "t = 0"
+                : "t = " + DisplayText.Time(sample.TimeSeconds, result.Case.Display.Time) + PeriodMarks.EndOfPeriod(result.Case, sample.TimeSeconds);
             curves.Add(new Curve(
                 label,
                 PlotStyle.SeriesColor(index),

@@ -52,8 +52,8 @@ public static class TransferPlot
             return LayerHoldings(result, options, time, massUnit);
         }
 
-        var model = PlotFrame.Create(
-            simulation.Title, Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options, migration), options);
+        var subtitle = Subtitle(result, media, new Units(time.Unit, massUnit, concentrationUnit), options, migration);
+        var model = PlotFrame.Create(simulation.Title, PeriodMarks.Text(result, time) is { } marks ? subtitle.Append(marks) : subtitle, options);
         model.Axes.Add(time.Axis);
         var compartments = media.Where(medium => medium.Face.HasFiniteVolume).ToList();
         var secondScale = SecondScale(compartments);
@@ -90,6 +90,7 @@ public static class TransferPlot
             AddCrossing(model, time.Unit.FromSi(reached), massUnit.FromSi(migration.MassPerArea));
         }
 
+        PeriodMarks.Draw(model, result, time);
         return model;
     }
 

@@ -116,7 +116,7 @@ public static class ScheduleTables
         findings.Add(verdict.RisingFrom.Count > 0 ? "migration RISES between contacts" : "migration does not rise between contacts");
         rows.Add(["verdict (model)", limit, string.Join("; ", findings)]);
         return new TextTable(
-            "Repeated use: the food at the end of each contact with a fresh portion (the third contact is judged; Regulation (EU) No 10/2011, Art. 17)",
+            "Repeated use: the food at the end of each contact (the third is judged; EU 10/2011, Art. 17)",
             ["contact", "in the food", "note"],
             rows);
     }
