@@ -130,11 +130,17 @@ public static class CaseReader
         var title = root.Text("title") ?? Path.GetFileNameWithoutExtension(fileName);
         root.Text("description");
         var referenceName = ReadBasisAndReference(root, context);
-        var food = FoodContactReader.Read(root, context);
+        // The schedule first: periods that give temperatures stand for the food-contact stages.
+        var schedule = ScheduleReader.Read(root, context);
+        var food = FoodContactReader.Read(root, context, schedule?.Stages, root.PathOf("schedule"));
+        if (schedule?.Stages is not null && food is null)
+        {
+            root.Error("schedule", "gives temperatures, which only a case with foodContact uses (each layer's D at a temperature); add foodContact or leave the temperatures out");
+        }
+
         var errorsBeforeLayers = context.Errors.Count;
         var layers = LayerReader.Read(root, context);
         var layersRead = context.Errors.Count == errorsBeforeLayers;
-        var schedule = ScheduleReader.Read(root, context);
         var (duration, durationText) = ReadDuration(root, food, schedule?.Schedule, context);
         context.DurationSeconds = duration;
         context.DurationText = durationText;

@@ -56,7 +56,14 @@ internal static class FoodContactReader
     }
 
     /// <summary>First pass; null when the case has no <c>foodContact</c>.</summary>
-    public static Input? Read(JsonFields root, ReadContext context)
+    /// <param name="root">The case document.</param>
+    /// <param name="context">Errors and what the layers need to know.</param>
+    /// <param name="scheduleStages">
+    /// The stages the schedule's periods give by their temperatures, or null when none gives one; then
+    /// <c>stages</c> must be left out.
+    /// </param>
+    /// <param name="schedulePath">Where the schedule is, for messages.</param>
+    public static Input? Read(JsonFields root, ReadContext context, IReadOnlyList<TemperatureStage>? scheduleStages = null, string schedulePath = "$.schedule")
     {
         if (root.Member("foodContact") is not { } element
             || JsonFields.Open(element, root.PathOf("foodContact"), context.Errors, Keys) is not { } fields)
@@ -71,7 +78,23 @@ internal static class FoodContactReader
             fields.Error("food", $"expected \"left\" or \"right\"; got \"{input.Food}\"");
         }
 
-        ReadStages(fields, input, context);
+        if (scheduleStages is null)
+        {
+            ReadStages(fields, input, context);
+        }
+        else if (fields.Has("stages"))
+        {
+            fields.Error("stages", $"must be left out: the periods of {schedulePath} give the temperatures");
+        }
+        else
+        {
+            foreach (var stage in scheduleStages)
+            {
+                input.Stages.Add((stage, schedulePath, [], []));
+                input.StagePartitions.Add([]);
+            }
+        }
+
         ReadLayerDiffusion(fields, input, context);
         input.Limit = ReadContext.Positive(fields, "specificMigrationLimit", Dimension.MassFraction, required: false);
         input.DetectionLimit = ReadContext.Positive(fields, "detectionLimit", Dimension.MassFraction, required: false) ?? input.DetectionLimit;

@@ -16,18 +16,24 @@ internal static class ScheduleReader
     /// <summary>Most periods a schedule may run, repetitions counted (each writes a row to the period table).</summary>
     public const int MaxPeriods = 1000;
 
-    private static readonly string[] PeriodKeys = ["name", "duration", "renew", "repeat"];
+    private static readonly string[] PeriodKeys = ["name", "duration", "renew", "temperature", "repeat"];
     private static readonly string[] BlockKeys = ["name", "repeat", "periods"];
     private const string Example = "[ { \"name\": \"contact\", \"duration\": \"10 d\", \"renew\": [\"right\"], \"repeat\": 3 } ]";
 
     /// <summary>A period as written, with the paths its faces are named at.</summary>
-    private sealed record Written(string Name, double DurationSeconds, IReadOnlyList<(Side Side, string Path)> Renewed);
+    private sealed record Written(string Name, double DurationSeconds, IReadOnlyList<(Side Side, string Path)> Renewed, double? TemperatureKelvin, string Path);
 
-    /// <summary>
-    /// The schedule (null when none is given or it has errors), with the JSON path of every face a period names (also
-    /// when other parts have errors, so that every mistake is reported at once).
-    /// </summary>
-    public static (ContactSchedule? Schedule, IReadOnlyList<(Side Side, string Path)> NamedFaces)? Read(JsonFields root, ReadContext context)
+    /// <summary>What <see cref="Read"/> found.</summary>
+    /// <param name="Schedule">The schedule; null when it has errors.</param>
+    /// <param name="NamedFaces">Every face a period renews, with its path (also when other parts have errors).</param>
+    /// <param name="Stages">
+    /// The time-temperature stages the periods give when some period gives a temperature (consecutive periods at one
+    /// temperature make one stage); null when none does.
+    /// </param>
+    public sealed record Result(ContactSchedule? Schedule, IReadOnlyList<(Side Side, string Path)> NamedFaces, IReadOnlyList<TemperatureStage>? Stages);
+
+    /// <summary>The schedule, the faces it renews and the stages its temperatures give; null when the case has no schedule.</summary>
+    public static Result? Read(JsonFields root, ReadContext context)
     {
         if (root.Member("schedule") is not { } array)
         {
@@ -43,6 +49,7 @@ internal static class ScheduleReader
 
         var errorsBefore = context.Errors.Count;
         var periods = new List<SchedulePeriod>();
+        var written = new List<Written>();
         var named = new List<(Side, string)>();
         var start = 0.0;
         var index = 0;
@@ -68,7 +75,7 @@ internal static class ScheduleReader
             {
                 context.Errors.Add(new CaseError(path, string.Create(CultureInfo.InvariantCulture,
                     $"the schedule would run more than {MaxPeriods} periods (repetitions counted); shorten it or run it in parts")));
-                return (null, named);
+                return new Result(null, named, null);
             }
 
             for (var repetition = 1; repetition <= count; repetition++)
@@ -76,12 +83,55 @@ internal static class ScheduleReader
                 foreach (var (period, slot) in block.Select((period, slot) => (period, slot)))
                 {
                     periods.Add(new SchedulePeriod(period.Name, (index - 1, slot), repetition, count, start, period.DurationSeconds, period.Renewed.Select(face => face.Side).Distinct().ToArray()));
+                    written.Add(period);
                     start += period.DurationSeconds;
                 }
             }
         }
 
-        return (context.Errors.Count == errorsBefore && periods.Count > 0 ? new ContactSchedule(periods) : null, named);
+        var stages = Stages(periods, written, context);
+        return context.Errors.Count == errorsBefore && periods.Count > 0
+            ? new Result(new ContactSchedule(periods), named, stages)
+            : new Result(null, named, null);
+    }
+
+    /// <summary>
+    /// The stages the periods' temperatures give: a period without one keeps the temperature of the period before,
+    /// so the first must give one when any does; consecutive periods at one temperature make one stage, named after
+    /// the periods it spans.
+    /// </summary>
+    private static List<TemperatureStage>? Stages(List<SchedulePeriod> periods, List<Written> written, ReadContext context)
+    {
+        if (written.Count == 0 || written.All(period => period.TemperatureKelvin is null))
+        {
+            return null;
+        }
+
+        if (written[0].TemperatureKelvin is null)
+        {
+            context.Errors.Add(new CaseError(written[0].Path + ".temperature",
+                "is required in the first period, since a later period gives a temperature (each period keeps the temperature of the one before unless it gives its own)"));
+            return null;
+        }
+
+        var stages = new List<TemperatureStage>();
+        var first = 0;
+        var temperature = written[0].TemperatureKelvin!.Value;
+        for (var i = 1; i <= written.Count; i++)
+        {
+            var next = i < written.Count ? written[i].TemperatureKelvin ?? temperature : double.NaN;
+            if (next == temperature)
+            {
+                continue;
+            }
+
+            var name = i - first == 1 ? periods[first].Label : $"{periods[first].Label} to {periods[i - 1].Label}";
+            stages.Add(new TemperatureStage(name, periods[i - 1].EndSeconds - periods[first].StartSeconds, temperature));
+            first = i;
+            temperature = next;
+        }
+
+        return stages;
     }
 
     /// <summary>
@@ -159,7 +209,8 @@ internal static class ScheduleReader
         var name = period.Text("name") ?? defaultName;
         var duration = ReadContext.Positive(period, "duration", Dimension.Time, required: true);
         var renewed = Renewed(period, context);
-        return duration is { } seconds && renewed is not null ? new Written(name, seconds, renewed) : null;
+        var temperature = ReadContext.Positive(period, "temperature", Dimension.Temperature, required: false);
+        return duration is { } seconds && renewed is not null ? new Written(name, seconds, renewed, temperature, period.Path) : null;
     }
 
     private static List<(Side, string)>? Renewed(JsonFields period, ReadContext context)
