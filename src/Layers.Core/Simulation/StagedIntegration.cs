@@ -56,7 +56,10 @@ public static class StagedIntegration
             var shifted = new ShiftedObserver(observer, stage, length, baths, first: index == 0, last, outputTimes, state.Length);
             var horizon = last ? Math.Max(length, horizonSeconds - stage.StartSeconds) : length;
             var plan = new TimeLoopPlan(outputs, length, horizon, initialStep(stage, outputs[0]));
-            var shiftedEvents = events is null ? null : new ShiftedEvents(events, stage.StartSeconds);
+            // Events at the end of a stage other than the last are applied here, between the stages, to the state the next
+            // one starts from: inside the stage they would change only the loop's own copy, after the stage's end state
+            // was taken.
+            var shiftedEvents = events is null ? null : new ShiftedEvents(events, stage.StartSeconds, last ? double.PositiveInfinity : length);
             var stageState = (double[])state.Clone();
             stage.IntoStage(stageState);
             var statistics = new TransientSolver(stage.System, options).Run(stageState, plan, shifted, shiftedEvents, cancellation);
@@ -66,6 +69,12 @@ public static class StagedIntegration
             if (statistics.StopReason != StopReason.Completed)
             {
                 break;
+            }
+
+            if (!last && events is not null && events.TimesSeconds.Any(time => Math.Abs(time - stage.EndSeconds) <= 1e-12 * stage.EndSeconds))
+            {
+                state = (double[])state.Clone();
+                events.Apply(stage.EndSeconds, state);
             }
         }
 
@@ -88,12 +97,24 @@ public static class StagedIntegration
         StopReason = stage.StopReason,
     };
 
-    /// <summary>State events (receptor sampling) at times of the whole run, applied inside one stage.</summary>
-    private sealed class ShiftedEvents(IStateEvents inner, double offsetSeconds) : IStateEvents
+    /// <summary>
+    /// State events (receptor sampling, renewals) at times of the whole run, applied inside one stage: those before
+    /// <paramref name="endSeconds"/> on the stage's clock (the stage's length, or infinity for the last stage).
+    /// </summary>
+    private sealed class ShiftedEvents(IStateEvents inner, double offsetSeconds, double endSeconds) : IStateEvents
     {
-        public IReadOnlyList<double> TimesSeconds { get; } = inner.TimesSeconds.Select(time => time - offsetSeconds).ToArray();
+        public IReadOnlyList<double> TimesSeconds { get; } = inner.TimesSeconds
+            .Select(time => time - offsetSeconds)
+            .Where(time => time < endSeconds * (1 - 1e-12))
+            .ToArray();
 
-        public void Apply(double timeSeconds, Span<double> state) => inner.Apply(timeSeconds + offsetSeconds, state);
+        public void Apply(double timeSeconds, Span<double> state)
+        {
+            if (timeSeconds < endSeconds * (1 - 1e-12))
+            {
+                inner.Apply(timeSeconds + offsetSeconds, state);
+            }
+        }
     }
 
     /// <summary>
