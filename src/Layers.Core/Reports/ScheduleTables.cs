@@ -1,5 +1,7 @@
 using System.Globalization;
+using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.Simulation;
 
 namespace Layers.Core.Reports;
 
@@ -55,10 +57,18 @@ public static class ScheduleTables
         foreach (var medium in media)
         {
             var face = simulation.Face(medium.Side);
-            headers.Add($"{medium.Name}: received [{simulation.Display.MassPerArea.Symbol}]");
+            headers.Add($"{medium.Name}: received [{simulation.Display.MassPerArea.ForPeople}]");
             headers.Add($"{medium.Name}: at the end [{format.MediumConcentrationUnit(face)}]");
         }
 
+        // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
+        var amountFloor = NegligibleFloor.AmountPerArea(result);
+        string Received(double value) => NegligibleFloor.Hides(value, amountFloor)
+            ? "< " + DisplayFormat.Floor(format.MassPerAreaValue(amountFloor))
+            : format.MassPerAreaValue(value);
+        string AtEnd(double value, FaceCondition face) => NegligibleFloor.Hides(value, NegligibleFloor.ConcentrationIn(result, face))
+            ? "< " + DisplayFormat.Floor(format.MediumConcentrationValue(NegligibleFloor.ConcentrationIn(result, face)!.Value, face))
+            : format.MediumConcentrationValue(value, face);
         var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
         [
             outcome.Period.Label,
@@ -66,8 +76,8 @@ public static class ScheduleTables
             format.TimeValue(outcome.Period.EndSeconds),
             .. outcome.Media.SelectMany(medium => new[]
             {
-                format.MassPerAreaValue(medium.ReceivedKgPerSquareMeter) + (medium.FreshAtStart && outcome.Period.StartSeconds > 0 ? " (fresh)" : string.Empty),
-                format.MediumConcentrationValue(medium.ConcentrationAtEndKgPerCubicMeter, simulation.Face(medium.Side)),
+                Received(medium.ReceivedKgPerSquareMeter) + (medium.FreshAtStart && outcome.Period.StartSeconds > 0 ? " (fresh)" : string.Empty),
+                AtEnd(medium.ConcentrationAtEndKgPerCubicMeter, simulation.Face(medium.Side)),
             }),
         ]).ToList();
         return new TextTable("Periods (amounts received during each period; \"fresh\": the medium was renewed at its start)", headers, rows);
@@ -80,17 +90,22 @@ public static class ScheduleTables
         var headers = new List<string> { "period" };
         foreach (var medium in schedule.Periods[0].Media)
         {
-            headers.Add($"{medium.Name}: highest flux [{display.Flux.Symbol}]");
-            headers.Add($"{medium.Name}: lowest flux [{display.Flux.Symbol}]");
+            headers.Add($"{medium.Name}: highest flux [{display.Flux.ForPeople}]");
+            headers.Add($"{medium.Name}: lowest flux [{display.Flux.ForPeople}]");
         }
 
+        // A flux that would move less than the floor amount over the whole period is shown as "< floor".
+        var amountFloor = NegligibleFloor.AmountPerArea(result);
+        string Flux(double value, double periodSeconds) => NegligibleFloor.Hides(value, amountFloor / periodSeconds)
+            ? "< " + DisplayFormat.Floor(DisplayFormat.Number(display.Flux.FromSi(amountFloor / periodSeconds)))
+            : DisplayFormat.Number(display.Flux.FromSi(value));
         var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
         [
             outcome.Period.Label,
             .. outcome.Media.SelectMany(medium => new[]
             {
-                DisplayFormat.Number(display.Flux.FromSi(medium.HighestFluxKgPerSquareMeterSecond)),
-                DisplayFormat.Number(display.Flux.FromSi(medium.LowestFluxKgPerSquareMeterSecond)),
+                Flux(medium.HighestFluxKgPerSquareMeterSecond, outcome.Period.DurationSeconds),
+                Flux(medium.LowestFluxKgPerSquareMeterSecond, outcome.Period.DurationSeconds),
             }),
         ]).ToList();
         return new TextTable("Flux into each medium in each period (highest and lowest at the period's output times)", headers, rows);

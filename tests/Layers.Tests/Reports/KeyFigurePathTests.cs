@@ -11,8 +11,8 @@ namespace Layers.Tests.Reports;
 
 /// <summary>
 /// Every key figure the error estimate names sits in summary.json at its path, with the same value (docs/outputs.md,
-/// numericalError.figures[].path), on demos that between them have compartments, baths, named depths, permeation
-/// and food contact.
+/// numericalError.figures[].path), on demos that between them have compartments, baths, named depths, permeation,
+/// food contact and a schedule.
 /// </summary>
 public sealed partial class KeyFigurePathTests
 {
@@ -20,6 +20,7 @@ public sealed partial class KeyFigurePathTests
     [InlineData("cases/two-liquid-layers.json")]
     [InlineData("cases/membrane-time-lag.json")]
     [InlineData("cases/hot-fill-barrier-shelf-life.json")]
+    [InlineData("cases/repeated-dose-diffusion-cell.json")]
     public void Every_key_figure_is_at_its_path_in_summary_json_with_the_same_value(string relativePath)
     {
         var read = CaseReader.ReadFile(RepoRoot.File(relativePath.Split('/')));

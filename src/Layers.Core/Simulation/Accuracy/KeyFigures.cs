@@ -9,7 +9,7 @@ namespace Layers.Core.Simulation;
 /// that every path holds the same value there): amounts in every layer and medium, medium and layer-edge
 /// concentrations, the flux into each medium and the concentrations at the depths the case names, at every report
 /// time; times to 50/90/99 % of the final state; steady flux, flux at the end and lag
-/// time; the food-contact figures.
+/// time; the food-contact figures; what each period of a schedule delivered.
 /// </summary>
 public static class KeyFigures
 {
@@ -75,6 +75,7 @@ public static class KeyFigures
         }
 
         AddFinalState(figures, result);
+        AddSchedule(figures, result, amount);
         if (result.Permeation is { } permeation)
         {
             Add(figures, "$.permeation.steadyFluxKgPerSquareMeterSecond", FigureKind.Flux, permeation.SteadyFluxKgPerSquareMeterSecond, "steady flux", null, flux);
@@ -93,6 +94,41 @@ public static class KeyFigures
         }
 
         return figures;
+    }
+
+    /// <summary>
+    /// What each period of a schedule delivered into each compartment, its concentration at the period's end, the
+    /// highest and lowest flux into it (with the flux floor of the period's length), and what renewals carried away.
+    /// </summary>
+    private static void AddSchedule(List<KeyFigure> figures, SimulationResult result, double amount)
+    {
+        if (result.Schedule is not { } schedule)
+        {
+            return;
+        }
+
+        for (var p = 0; p < schedule.Periods.Count; p++)
+        {
+            var outcome = schedule.Periods[p];
+            var periodFlux = amount / outcome.Period.DurationSeconds;
+            for (var m = 0; m < outcome.Media.Count; m++)
+            {
+                var medium = outcome.Media[m];
+                var path = Indexed(Indexed("$.schedule.periods", p) + ".media", m);
+                var what = $"{outcome.Period.Label}: {medium.Name}";
+                var compartment = (CompartmentFace)result.Case.Face(medium.Side);
+                var end = outcome.Period.EndSeconds;
+                Add(figures, path + ".receivedKgPerSquareMeter", FigureKind.Amount, medium.ReceivedKgPerSquareMeter, what + " received in the period", end, amount);
+                Add(figures, path + ".concentrationAtEndKgPerCubicMeter", FigureKind.Concentration, medium.ConcentrationAtEndKgPerCubicMeter, what + " concentration at the end", end, amount / compartment.VolumePerAreaMeters);
+                Add(figures, path + ".highestFluxKgPerSquareMeterSecond", FigureKind.Flux, medium.HighestFluxKgPerSquareMeterSecond, what + " highest flux", end, periodFlux);
+                Add(figures, path + ".lowestFluxKgPerSquareMeterSecond", FigureKind.Flux, medium.LowestFluxKgPerSquareMeterSecond, what + " lowest flux", end, periodFlux);
+            }
+        }
+
+        for (var r = 0; r < schedule.Renewed.Count; r++)
+        {
+            Add(figures, Indexed("$.schedule.renewed", r) + ".carriedAwayKgPerSquareMeter", FigureKind.Amount, schedule.Renewed[r].CarriedAwayKgPerSquareMeter, schedule.Renewed[r].Name + ": carried away by renewals", null, amount);
+        }
     }
 
     private static void AddFinalState(List<KeyFigure> figures, SimulationResult result)
