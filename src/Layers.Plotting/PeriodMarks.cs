@@ -6,7 +6,7 @@ using OxyPlot.Annotations;
 namespace Layers.Plotting;
 
 /// <summary>
-/// The periods of a schedule on the plots: a dotted vertical line at the start of each period after the first on a time
+/// The periods of a schedule on the plots: a dashed vertical line at the start of each period after the first on a time
 /// axis, and on a profile the period a report time ends ("end of contact 2 of 3"). Past <see cref="MostMarked"/>
 /// periods the lines would merge into a grey band, so they are left out and the subtitle says so.
 /// </summary>
@@ -33,10 +33,10 @@ internal static class PeriodMarks
         }
 
         var renewed = starts.Any(period => period.Renewed.Count > 0);
-        return "dotted lines: the starts of the schedule's periods" + (renewed ? " (fresh media where a period renews them)" : string.Empty);
+        return "dashed vertical lines: the starts of the schedule's periods" + (renewed ? " (fresh media where a period renews them)" : string.Empty);
     }
 
-    /// <summary>Draws a dotted vertical line at each period start on the plotted range, unless there are too many.</summary>
+    /// <summary>Draws a dashed vertical line at each period start on the plotted range, unless there are too many.</summary>
     public static void Draw(PlotModel model, SimulationResult result, TimeAxis time)
     {
         var starts = Starts(result, time);
@@ -52,18 +52,18 @@ internal static class PeriodMarks
                 Type = LineAnnotationType.Vertical,
                 X = time.Unit.FromSi(period.StartSeconds),
                 Color = PlotStyle.Interface,
-                LineStyle = LineStyle.Dot,
+                LineStyle = LineStyle.Dash,
                 StrokeThickness = PlotStyle.InterfaceThickness,
                 Layer = AnnotationLayer.BelowSeries,
             });
         }
     }
 
-    /// <summary>" (end of contact 2 of 3)" when a time is the end of a period of the case's schedule; else empty.</summary>
+    /// <summary>" (end of 'contact 2 of 3')" when a time is the end of a period of the case's schedule; else empty.</summary>
     public static string EndOfPeriod(SimulationCase simulation, double timeSeconds)
     {
         var period = simulation.Schedule?.Periods.FirstOrDefault(period => Math.Abs(period.EndSeconds - timeSeconds) <= 1e-9 * period.EndSeconds);
-        return period is null ? string.Empty : $" (end of {period.Label})";
+        return period is null ? string.Empty : $" (end of '{period.Label}')";
     }
 
     private static List<SchedulePeriod>? Starts(SimulationResult result, TimeAxis time)

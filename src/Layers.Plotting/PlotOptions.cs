@@ -9,7 +9,8 @@ namespace Layers.Plotting;
 /// </param>
 /// <param name="LogTimeAxis">
 /// True for a logarithmic time axis on the transfer plot and on the approach-to-equilibrium plot. The permeation
-/// plot always uses a linear time axis, on which the steady-state asymptote is a straight line.
+/// plot always uses a linear time axis, on which the steady-state asymptote is a straight line, and so does the
+/// transfer plot of a case with a schedule, whose periods repeat on a linear clock.
 /// </param>
 public sealed record PlotOptions(
     int WidthPixels = 1200,

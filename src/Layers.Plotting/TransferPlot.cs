@@ -44,7 +44,8 @@ public static class TransferPlot
         var simulation = result.Case;
         var massUnit = DisplayText.MassPerAreaUnit(simulation.Display);
         var concentrationUnit = DisplayText.ConcentrationUnit(simulation.Display);
-        var time = TimeAxis.Create(result, options.LogTimeAxis);
+        // Periods of a schedule repeat on a linear clock (a dose a day); a log axis would crowd all but the first.
+        var time = TimeAxis.Create(result, options.LogTimeAxis && result.Case.Schedule is null);
         var samples = time.Samples(result).ToList();
         var media = Media(result, time.FirstSeconds, time.Unit, massUnit);
         if (media.Count == 0)

@@ -43,7 +43,7 @@ internal static class RunCommand
         var width = new Option<int>("--plot-width") { Description = "Width of the plots in pixels.", DefaultValueFactory = _ => 1200 };
         var height = new Option<int>("--plot-height") { Description = "Height of the plots in pixels.", DefaultValueFactory = _ => 800 };
         var logConcentration = new Option<bool>("--log-concentration") { Description = "Logarithmic concentration axis in profile.png." };
-        var linearTime = new Option<bool>("--linear-time") { Description = "Linear time axis in transfer.png and equilibrium.png or permeation.png (default logarithmic)." };
+        var linearTime = new Option<bool>("--linear-time") { Description = "Linear time axis in transfer.png and equilibrium.png or permeation.png (default logarithmic; transfer.png is linear for a case with a schedule)." };
         var command = new Command("run", "Solve cases and write their results; several cases, folders or a sweep run as a batch with a summary.");
         command.Arguments.Add(caseFile);
         command.Options.Add(outputRoot);

@@ -159,9 +159,11 @@ public static class CaseReader
             (foodSettings, layers) = FoodContactReader.Resolve(food, root, layers, left, right, context);
         }
 
+        var contactSchedule = schedule?.Schedule;
         if (schedule is { } read && left is not null && right is not null)
         {
             ScheduleReader.CheckFaces(read.NamedFaces, left, right, context);
+            contactSchedule = layersRead ? ScheduleLayerChanges.Resolve(read, layers, left, right, context) : null;
         }
 
         var permeationTest = PermeationTestReader.Read(root, context, fileName, right);
@@ -185,7 +187,7 @@ public static class CaseReader
             Display = display,
             FoodContact = foodSettings,
             PermeationTest = permeationTest,
-            Schedule = schedule?.Schedule,
+            Schedule = contactSchedule,
         };
         if (numerics.Method == SolutionMethod.Laplace && LaplaceApplicability.Of(simulation) is { IsApplicable: false } applicability)
         {

@@ -16,12 +16,19 @@ internal static class ScheduleReader
     /// <summary>Most periods a schedule may run, repetitions counted (each writes a row to the period table).</summary>
     public const int MaxPeriods = 1000;
 
-    private static readonly string[] PeriodKeys = ["name", "duration", "renew", "temperature", "repeat"];
+    private static readonly string[] PeriodKeys = ["name", "duration", "renew", "temperature", "remove", "apply", "repeat"];
     private static readonly string[] BlockKeys = ["name", "repeat", "periods"];
     private const string Example = "[ { \"name\": \"contact\", \"duration\": \"10 d\", \"renew\": [\"right\"], \"repeat\": 3 } ]";
 
     /// <summary>A period as written, with the paths its faces are named at.</summary>
-    private sealed record Written(string Name, double DurationSeconds, IReadOnlyList<(Side Side, string Path)> Renewed, double? TemperatureKelvin, string Path);
+    internal sealed record Written(
+        string Name,
+        double DurationSeconds,
+        IReadOnlyList<(Side Side, string Path)> Renewed,
+        double? TemperatureKelvin,
+        string Path,
+        IReadOnlyList<(string Layer, string Path)> Removed,
+        IReadOnlyList<(string Layer, string Path)> Applied);
 
     /// <summary>What <see cref="Read"/> found.</summary>
     /// <param name="Schedule">The schedule; null when it has errors.</param>
@@ -30,7 +37,9 @@ internal static class ScheduleReader
     /// The time-temperature stages the periods give when some period gives a temperature (consecutive periods at one
     /// temperature make one stage); null when none does.
     /// </param>
-    public sealed record Result(ContactSchedule? Schedule, IReadOnlyList<(Side Side, string Path)> NamedFaces, IReadOnlyList<TemperatureStage>? Stages);
+    /// <param name="PerPeriod">For each period run, the period as written (its layer changes by name, with paths).</param>
+    public sealed record Result(
+        ContactSchedule? Schedule, IReadOnlyList<(Side Side, string Path)> NamedFaces, IReadOnlyList<TemperatureStage>? Stages, IReadOnlyList<Written> PerPeriod);
 
     /// <summary>The schedule, the faces it renews and the stages its temperatures give; null when the case has no schedule.</summary>
     public static Result? Read(JsonFields root, ReadContext context)
@@ -75,7 +84,7 @@ internal static class ScheduleReader
             {
                 context.Errors.Add(new CaseError(path, string.Create(CultureInfo.InvariantCulture,
                     $"the schedule would run more than {MaxPeriods} periods (repetitions counted); shorten it or run it in parts")));
-                return new Result(null, named, null);
+                return new Result(null, named, null, []);
             }
 
             for (var repetition = 1; repetition <= count; repetition++)
@@ -91,8 +100,8 @@ internal static class ScheduleReader
 
         var stages = Stages(periods, written, context);
         return context.Errors.Count == errorsBefore && periods.Count > 0
-            ? new Result(new ContactSchedule(periods), named, stages)
-            : new Result(null, named, null);
+            ? new Result(new ContactSchedule(periods), named, stages, written)
+            : new Result(null, named, null, []);
     }
 
     /// <summary>
@@ -210,7 +219,41 @@ internal static class ScheduleReader
         var duration = ReadContext.Positive(period, "duration", Dimension.Time, required: true);
         var renewed = Renewed(period, context);
         var temperature = ReadContext.Positive(period, "temperature", Dimension.Temperature, required: false);
-        return duration is { } seconds && renewed is not null ? new Written(name, seconds, renewed, temperature, period.Path) : null;
+        var removed = LayerNames(period, "remove", context);
+        var applied = LayerNames(period, "apply", context);
+        return duration is { } seconds && renewed is not null && removed is not null && applied is not null
+            ? new Written(name, seconds, renewed, temperature, period.Path, removed, applied)
+            : null;
+    }
+
+    private static List<(string, string)>? LayerNames(JsonFields period, string key, ReadContext context)
+    {
+        if (period.Member(key) is not { } array)
+        {
+            return [];
+        }
+
+        if (array.ValueKind != JsonValueKind.Array)
+        {
+            period.Error(key, $"expected an array of layer names, e.g. [\"patch\"]; found {JsonFields.Describe(array)}");
+            return null;
+        }
+
+        var names = new List<(string, string)>();
+        var index = 0;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{period.PathOf(key)}[{index++}]";
+            if (element.ValueKind != JsonValueKind.String)
+            {
+                context.Errors.Add(new CaseError(path, $"expected a layer name; found {JsonFields.Describe(element)}"));
+                return null;
+            }
+
+            names.Add((element.GetString()!, path));
+        }
+
+        return names;
     }
 
     private static List<(Side, string)>? Renewed(JsonFields period, ReadContext context)

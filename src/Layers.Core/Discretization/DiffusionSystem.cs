@@ -91,6 +91,22 @@ public sealed class DiffusionSystem
     /// </summary>
     public double[]? Saturation { get; }
 
+    /// <summary>
+    /// The same system with the links between some neighbouring nodes cut (zero conductance): layers taken off the
+    /// stack keep their cells, which then exchange with nothing.
+    /// </summary>
+    /// <param name="links">Indices n of the links to cut, each between node n and node n + 1.</param>
+    internal DiffusionSystem WithLinksCut(IEnumerable<int> links)
+    {
+        var conductance = (double[])Conductance.Clone();
+        foreach (var link in links)
+        {
+            conductance[link] = 0;
+        }
+
+        return new DiffusionSystem(Grid, Capacity, conductance, HalfCellResistance, PartitionCoefficient, Left, Right, LeftBath, RightBath, FirstCellNode, Saturation);
+    }
+
     /// <summary>Number of unknowns.</summary>
     public int NodeCount => Capacity.Length;
 

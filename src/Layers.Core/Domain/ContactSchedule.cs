@@ -30,4 +30,27 @@ public sealed record ContactSchedule(IReadOnlyList<SchedulePeriod> Periods)
         var starts = RenewalTimes(side).Prepend(0.0).ToArray();
         return starts.Select((start, index) => (start, index + 1 < starts.Length ? starts[index + 1] : DurationSeconds)).ToArray();
     }
+
+    /// <summary>True when some period takes layers off or puts them on.</summary>
+    public bool ChangesLayers => Periods.Any(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0);
+
+    /// <summary>The layers that are off during the period that runs at <paramref name="timeSeconds"/> (the later one at a boundary).</summary>
+    public IReadOnlySet<int> LayersOffAt(double timeSeconds)
+    {
+        var off = new HashSet<int>();
+        foreach (var period in Periods.TakeWhile(period => period.StartSeconds <= timeSeconds * (1 + 1e-12)))
+        {
+            off.UnionWith(period.RemovedLayers.Select(change => change.Layer));
+            off.ExceptWith(period.AppliedLayers.Select(change => change.Layer));
+        }
+
+        return off;
+    }
+
+    /// <summary>The layers off at the end of the schedule.</summary>
+    public IReadOnlySet<int> LayersOffAtEnd => LayersOffAt(DurationSeconds);
+
+    /// <summary>The period starts at which layers are taken off or put on, s, ascending.</summary>
+    public IReadOnlyList<double> LayerChangeTimes =>
+        Periods.Where(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0).Select(period => period.StartSeconds).ToArray();
 }

@@ -15,9 +15,26 @@ namespace Layers.Core.Domain;
 public sealed record SchedulePeriod(
     string Name, (int Entry, int Period) Slot, int Repetition, int RepetitionCount, double StartSeconds, double DurationSeconds, IReadOnlyList<Side> Renewed)
 {
+    /// <summary>
+    /// The outer layers taken off at the start (a patch removed), by index in the stack, with the face they are taken
+    /// off from: what they hold leaves the system, and they stay off until applied again.
+    /// </summary>
+    public IReadOnlyList<LayerChange> RemovedLayers { get; init; } = [];
+
+    /// <summary>
+    /// The outer layers put on at the start fresh, loaded as the case writes them (a new patch): a layer that is on
+    /// already is replaced by a fresh one, and what the old one held leaves the system.
+    /// </summary>
+    public IReadOnlyList<LayerChange> AppliedLayers { get; init; } = [];
+
     /// <summary>End on the run's clock, s.</summary>
     public double EndSeconds => StartSeconds + DurationSeconds;
 
     /// <summary>"contact 2 of 3", or the name alone for a period that is not repeated.</summary>
     public string Label => RepetitionCount > 1 ? $"{Name} {Repetition} of {RepetitionCount}" : Name;
 }
+
+/// <summary>A layer taken off or put on at the start of a period, and the face of the stack it is taken off or put on at.</summary>
+/// <param name="Layer">Index of the layer in the stack.</param>
+/// <param name="Side">The outer face its block of removable layers touches.</param>
+public sealed record LayerChange(int Layer, Side Side);

@@ -51,6 +51,12 @@ public sealed class LaplaceApplicability
             reasons.Add("the schedule renews a compartment's medium at given times");
         }
 
+        if (simulation.Schedule is { ChangesLayers: true })
+        {
+            // Taking a layer off or putting one on changes the stack itself during the run.
+            reasons.Add("the schedule takes layers off or puts them on during the run");
+        }
+
         return new LaplaceApplicability(reasons);
     }
 }

@@ -53,12 +53,22 @@ public static class ScheduleTables
         var simulation = result.Case;
         var format = new DisplayFormat(simulation.Display);
         var media = schedule.Periods[0].Media;
+        var changes = schedule.Periods.Select(outcome => AtStart(simulation, outcome.Period)).ToList();
+        var anyChange = changes.Any(change => change.Length > 0);
         var headers = new List<string> { "period", $"from [{simulation.Display.Time.Symbol}]", $"to [{simulation.Display.Time.Symbol}]" };
+        if (anyChange)
+        {
+            headers.Add("at its start");
+        }
+
         foreach (var medium in media)
         {
             var face = simulation.Face(medium.Side);
             headers.Add($"{medium.Name}: received [{simulation.Display.MassPerArea.ForPeople}]");
-            headers.Add($"{medium.Name}: at the end [{format.MediumConcentrationUnit(face)}]");
+            if (face is CompartmentFace)
+            {
+                headers.Add($"{medium.Name}: at the end [{format.MediumConcentrationUnit(face)}]");
+            }
         }
 
         // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
@@ -74,13 +84,36 @@ public static class ScheduleTables
             outcome.Period.Label,
             format.TimeValue(outcome.Period.StartSeconds),
             format.TimeValue(outcome.Period.EndSeconds),
-            .. outcome.Media.SelectMany(medium => new[]
-            {
-                Received(medium.ReceivedKgPerSquareMeter) + (medium.FreshAtStart && outcome.Period.StartSeconds > 0 ? " (fresh)" : string.Empty),
-                AtEnd(medium.ConcentrationAtEndKgPerCubicMeter, simulation.Face(medium.Side)),
-            }),
+            .. anyChange ? [AtStart(simulation, outcome.Period)] : Array.Empty<string>(),
+            .. outcome.Media.SelectMany(medium => simulation.Face(medium.Side) is CompartmentFace face
+                ? new[] { Received(medium.ReceivedKgPerSquareMeter), AtEnd(medium.ConcentrationAtEndKgPerCubicMeter, face) }
+                : [Received(medium.ReceivedKgPerSquareMeter)]),
         ]).ToList();
-        return new TextTable("Periods (amounts received during each period; \"fresh\": the medium was renewed at its start)", headers, rows);
+        return new TextTable("Periods (amounts received during each period)", headers, rows);
+    }
+
+    /// <summary>What changes at a period's start, in words: "simulant renewed", "matrix put on fresh", "matrix taken off".</summary>
+    private static string AtStart(SimulationCase simulation, SchedulePeriod period)
+    {
+        if (period.StartSeconds == 0)
+        {
+            return string.Empty;
+        }
+
+        string Names(IEnumerable<LayerChange> changes) => string.Join(", ", changes.Select(change => simulation.Stack.Layers[change.Layer].Name));
+        var parts = new List<string>();
+        parts.AddRange(period.Renewed.Select(side => $"{simulation.Face(side).MediumName} renewed"));
+        if (period.AppliedLayers.Count > 0)
+        {
+            parts.Add($"{Names(period.AppliedLayers)} put on fresh");
+        }
+
+        if (period.RemovedLayers.Count > 0)
+        {
+            parts.Add($"{Names(period.RemovedLayers)} taken off");
+        }
+
+        return string.Join("; ", parts);
     }
 
     /// <summary>Peak and trough of the flux into each medium in each period: what a repeated dose delivers and how low it falls.</summary>

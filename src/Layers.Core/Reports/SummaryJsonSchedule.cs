@@ -58,6 +58,20 @@ internal static class SummaryJsonSchedule
         }
 
         json.WriteEndArray();
+        json.WriteStartArray("layerMoves");
+        foreach (var move in schedule.LayerMoves)
+        {
+            json.WriteStartObject();
+            json.WriteString("period", move.PeriodLabel);
+            json.WriteNumber("timeSeconds", move.TimeSeconds);
+            WriteNames(json, "takenOff", move.TakenOff);
+            WriteNames(json, "putOn", move.PutOn);
+            SummaryJson.WriteNullable(json, "takenAwayKgPerSquareMeter", move.TakenAwayKgPerSquareMeter);
+            json.WriteNumber("broughtKgPerSquareMeter", move.BroughtKgPerSquareMeter);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
         json.WriteStartArray("repetitions");
         foreach (var state in schedule.PeriodicSteadyStates)
         {
@@ -102,6 +116,17 @@ internal static class SummaryJsonSchedule
         json.WriteEndArray();
         json.WriteBoolean("complies", verdict.Complies);
         json.WriteEndObject();
+    }
+
+    private static void WriteNames(Utf8JsonWriter json, string key, IReadOnlyList<string> names)
+    {
+        json.WriteStartArray(key);
+        foreach (var name in names)
+        {
+            json.WriteStringValue(name);
+        }
+
+        json.WriteEndArray();
     }
 
     private static string SideName(Side side) => side == Side.Left ? "left" : "right";

@@ -11,7 +11,21 @@ public sealed record ScheduleSummary(
     IReadOnlyList<PeriodOutcome> Periods,
     IReadOnlyList<PeriodicSteadyState> PeriodicSteadyStates,
     RepeatedUseVerdict? RepeatedUse,
-    IReadOnlyList<RenewedMedium> Renewed);
+    IReadOnlyList<RenewedMedium> Renewed)
+{
+    /// <summary>Each taking off or putting on of layers, in order: with what it took away and brought, the mass balance closes.</summary>
+    public IReadOnlyList<LayerMove> LayerMoves { get; init; } = [];
+}
+
+/// <summary>Layers taken off or put on at the start of a period, and the mass per contact area that left and came with them.</summary>
+/// <param name="PeriodLabel">The period they start.</param>
+/// <param name="TimeSeconds">When, s.</param>
+/// <param name="TakenOff">The layers taken off (also those replaced by fresh ones).</param>
+/// <param name="PutOn">The layers put on fresh.</param>
+/// <param name="TakenAwayKgPerSquareMeter">What the layers taken off held, kg/m2.</param>
+/// <param name="BroughtKgPerSquareMeter">What the fresh layers hold as loaded, kg/m2.</param>
+public sealed record LayerMove(
+    string PeriodLabel, double TimeSeconds, IReadOnlyList<string> TakenOff, IReadOnlyList<string> PutOn, double TakenAwayKgPerSquareMeter, double BroughtKgPerSquareMeter);
 
 /// <summary>
 /// A medium the schedule renews: how often, and the mass per contact area its replaced portions took away, net of what
@@ -25,16 +39,16 @@ public sealed record RenewedMedium(Side Side, string Name, int Renewals, double 
 
 /// <summary>One period's results.</summary>
 /// <param name="Period">The period.</param>
-/// <param name="Media">Each face medium of finite volume, over this period.</param>
+/// <param name="Media">Each face medium (compartment or bath), over this period.</param>
 public sealed record PeriodOutcome(SchedulePeriod Period, IReadOnlyList<MediumInPeriod> Media);
 
-/// <summary>A compartment's medium over one period.</summary>
+/// <summary>A face medium over one period.</summary>
 /// <param name="Side">Its face.</param>
 /// <param name="Name">The medium's name.</param>
-/// <param name="FreshAtStart">True when the period starts with a fresh portion (the first period, or a renewal).</param>
+/// <param name="FreshAtStart">True when a compartment starts the period with a fresh portion (the first period, or a renewal); false for a bath.</param>
 /// <param name="ReceivedKgPerSquareMeter">Mass per contact area that crossed into it during the period, kg/m2.</param>
-/// <param name="ConcentrationAtEndKgPerCubicMeter">Its concentration at the period's end, before any renewal, kg/m3.</param>
-/// <param name="MassFractionAtEnd">The same as a mass fraction (kg/kg) when the medium's density is known; else null.</param>
+/// <param name="ConcentrationAtEndKgPerCubicMeter">Its concentration at the period's end, before any renewal, kg/m3 (a bath's own).</param>
+/// <param name="MassFractionAtEnd">The same as a mass fraction (kg/kg) for a compartment whose density is known; else null.</param>
 /// <param name="HighestFluxKgPerSquareMeterSecond">
 /// The highest flux into the medium at the period's output times (its end and evenly spaced times within it), kg/(m2 s):
 /// the peak of a dose as sampled, no higher than the true peak.

@@ -158,6 +158,41 @@ internal sealed class FinalStateTarget
         }
     }
 
+    /// <summary>
+    /// The final state when a schedule leaves layers off at its end: they hold nothing and exchange with nothing, so
+    /// their cells end empty; a closed system settles to the equilibrium of the layers still on (and its media) with the
+    /// mass left in it. The other final states (a bath's level, everything removed) are uniform and stand as they are
+    /// on the layers still on.
+    /// </summary>
+    internal FinalStateTarget WithLayersOff(SimulationCase simulation, DiffusionSystem system, IReadOnlySet<int> off, double? massLeftPerArea)
+    {
+        if (off.Count == 0)
+        {
+            return this;
+        }
+
+        var values = (double[])NodeValues.Clone();
+        var closedValue = ClosedValue;
+        if (Kind == FinalStateKind.ClosedEquilibrium)
+        {
+            var kept = simulation with { Stack = new LayerStack([.. simulation.Stack.Layers.Where((_, layer) => !off.Contains(layer))]) };
+            var closed = massLeftPerArea is { } left ? ClosedSystemEquilibrium.Of(kept, left) : ClosedSystemEquilibrium.Of(kept);
+            closedValue = closed.ContinuousVariable;
+            Array.Fill(values, closed.ContinuousVariable);
+        }
+
+        foreach (var node in off.SelectMany(layer => LayerPresence.NodesOf(system, layer)))
+        {
+            values[node] = 0;
+        }
+
+        return new FinalStateTarget(Kind, values, Steady, closedValue)
+        {
+            PartitionCase = PartitionCase,
+            MassLeftAfterSamplingPerArea = MassLeftAfterSamplingPerArea,
+        };
+    }
+
     /// <summary>Final concentration at the left and right edge of a layer, kg/m3.</summary>
     public (double Left, double Right) LayerEdges(SimulationCase simulation, int layer)
     {

@@ -10,6 +10,7 @@ namespace Layers.Core.Simulation;
 /// the face in its layer, second order), and the face value of u is their resistance-weighted mean,
 /// u_f = (v_a/R_a + v_b/R_b)/(1/R_a + 1/R_b); each side then reads c = K u_f with its own K, which shows the partition
 /// jump. An outer face's value is reconstructed by its face model (<see cref="FaceModel.FaceValue"/>) from its side.
+/// Between a layer a schedule has taken off and the rest nothing flows: each side's edge is its own side's value.
 /// </summary>
 internal sealed class ProfileBuilder
 {
@@ -25,8 +26,14 @@ internal sealed class ProfileBuilder
     }
 
     /// <summary>Profiles of the dissolved concentration (undissolved drug of a dispersed layer is not part of them).</summary>
-    public IReadOnlyList<LayerProfile> Build(ReadOnlySpan<double> content)
+    /// <param name="content">The state.</param>
+    /// <param name="timeSeconds">Its time: which layers a schedule has off then (before any change at that very time).</param>
+    public IReadOnlyList<LayerProfile> Build(ReadOnlySpan<double> content, double timeSeconds = 0)
     {
+        var off = _case.Schedule is { ChangesLayers: true } schedule && timeSeconds > 0
+            ? schedule.LayersOffAt(timeSeconds * (1 - 1e-9))
+            : null;
+        bool Cut(int layer, int neighbour) => off is not null && neighbour >= 0 && neighbour < _case.Stack.Count && off.Contains(layer) != off.Contains(neighbour);
         var state = Dissolved(content);
         var grid = _system.Grid;
         var cells = state.Slice(_system.FirstCellNode, grid.CellCount);
@@ -40,7 +47,7 @@ internal sealed class ProfileBuilder
             var concentrations = new double[count + 2];
             positions[0] = _case.Stack.LeftEdgeMeters(layerIndex);
             var firstNode = _system.FirstCellNode + first;
-            concentrations[0] = _system.ConcentrationOf(firstNode, FaceValue(cells, state, first - 1, first));
+            concentrations[0] = _system.ConcentrationOf(firstNode, Cut(layerIndex, layerIndex - 1) ? Side(cells, first, +1).Value : FaceValue(cells, state, first - 1, first));
             for (var i = 0; i < count; i++)
             {
                 positions[i + 1] = grid.CentresMeters[first + i];
@@ -48,7 +55,8 @@ internal sealed class ProfileBuilder
             }
 
             positions[^1] = positions[0] + layer.ThicknessMeters;
-            concentrations[^1] = _system.ConcentrationOf(firstNode + count - 1, FaceValue(cells, state, first + count - 1, first + count));
+            concentrations[^1] = _system.ConcentrationOf(
+                firstNode + count - 1, Cut(layerIndex, layerIndex + 1) ? Side(cells, first + count - 1, -1).Value : FaceValue(cells, state, first + count - 1, first + count));
             profiles.Add(new LayerProfile(layerIndex, layer.Name, positions, concentrations));
         }
 

@@ -79,7 +79,7 @@ internal sealed class ResultRecorder : ITimeLoopObserver
         LowestAmountRelative = Math.Min(LowestAmountRelative, _observables.LowestAmountRelative(sample, state, bathInflow));
         if (OutputSchedule.IsReportTime(_case, timeSeconds))
         {
-            var profiles = _profiles.Build(state);
+            var profiles = _profiles.Build(state, timeSeconds);
             _reports.Add(new ReportPoint(sample, profiles) { Depths = DepthReadings.Read(profiles, _case.ReportDepthsMeters) });
         }
 

@@ -9,12 +9,16 @@ namespace Layers.Core.Simulation;
 /// compartment's concentration drops by (V - v) / V and the mass v c leaves the system. Also replaces a compartment's
 /// whole medium by a fresh portion at the starts of the schedule's periods that renew it: the mass V (c - c_fresh)
 /// leaves. Keeps what was withdrawn, net of what fresh medium brought, so the mass balance and the cumulative amount
-/// received can account for it.
+/// received can account for it. Takes layers off the stack and puts fresh ones on where a schedule says so, counting what
+/// they take away and bring on the side they are on.
 /// </summary>
 internal sealed class SamplingEvents : IStateEvents
 {
     private readonly Sampled?[] _sides = new Sampled?[2];
     private readonly Renewed?[] _renewed = new Renewed?[2];
+    private readonly double[] _layersRemovedPerArea = new double[2];
+    private readonly IReadOnlyList<SchedulePeriod> _layerChanges;
+    private readonly double[] _initialState;
     private readonly DiffusionSystem _system;
 
     public SamplingEvents(DiscreteModel model)
@@ -35,8 +39,11 @@ internal sealed class SamplingEvents : IStateEvents
             }
         }
 
+        _initialState = model.InitialState;
+        _layerChanges = simulation.Schedule?.Periods.Where(period => period.StartSeconds > 0 && (period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0)).ToArray() ?? [];
         TimesSeconds = _sides.Where(sampled => sampled is not null).SelectMany(sampled => sampled!.Sampling.TimesSeconds)
             .Concat(_renewed.Where(renewed => renewed is not null).SelectMany(renewed => renewed!.TimesSeconds))
+            .Concat(_layerChanges.Select(period => period.StartSeconds))
             .Distinct().Order().ToArray();
     }
 
@@ -44,10 +51,11 @@ internal sealed class SamplingEvents : IStateEvents
     public IReadOnlyList<double> TimesSeconds { get; }
 
     /// <summary>True when some compartment is sampled.</summary>
-    public bool Any => _sides[0] is not null || _sides[1] is not null || _renewed[0] is not null || _renewed[1] is not null;
+    public bool Any => TimesSeconds.Count > 0;
 
     /// <summary>Mass per contact area withdrawn from the compartment on a side so far, kg/m2.</summary>
-    public double RemovedPerArea(Side side) => (_sides[(int)side]?.RemovedPerArea ?? 0) + (_renewed[(int)side]?.RemovedPerArea ?? 0);
+    public double RemovedPerArea(Side side) =>
+        (_sides[(int)side]?.RemovedPerArea ?? 0) + (_renewed[(int)side]?.RemovedPerArea ?? 0) + _layersRemovedPerArea[(int)side];
 
     /// <summary>The renewals of the medium on a side so far: time and the concentration of the portion replaced.</summary>
     public IReadOnlyList<(double TimeSeconds, double ConcentrationKgPerCubicMeter)> Renewals(Side side)
@@ -59,6 +67,29 @@ internal sealed class SamplingEvents : IStateEvents
 
     public void Apply(double timeSeconds, Span<double> state)
     {
+        foreach (var period in _layerChanges.Where(period => Math.Abs(period.StartSeconds - timeSeconds) <= 1e-9 * timeSeconds))
+        {
+            // A layer taken off leaves with what it holds; one put on comes fresh, loaded as the case writes it (a layer
+            // on already is replaced: the old one leaves with its content).
+            foreach (var change in period.RemovedLayers.Concat(period.AppliedLayers))
+            {
+                foreach (var node in LayerPresence.NodesOf(_system, change.Layer))
+                {
+                    _layersRemovedPerArea[(int)change.Side] += _system.Capacity[node] * state[node];
+                    state[node] = 0;
+                }
+            }
+
+            foreach (var change in period.AppliedLayers)
+            {
+                foreach (var node in LayerPresence.NodesOf(_system, change.Layer))
+                {
+                    state[node] = _initialState[node];
+                    _layersRemovedPerArea[(int)change.Side] -= _system.Capacity[node] * state[node];
+                }
+            }
+        }
+
         foreach (var renewed in _renewed)
         {
             if (renewed is null || !renewed.TimesSeconds.Any(time => Math.Abs(time - timeSeconds) <= 1e-9 * time))

@@ -33,9 +33,10 @@ public static class ScheduleAnalysis
             var media = new List<MediumInPeriod>();
             foreach (var side in new[] { Side.Left, Side.Right })
             {
-                if (simulation.Face(side) is CompartmentFace compartment && Face(end, side) is { } atEnd && Face(start, side) is { } atStart)
+                // A bath's amounts are as telling as a compartment's (the body a patch delivers into); its concentration is its own.
+                if (simulation.Face(side) is { IsOpen: true } face && Face(end, side) is { } atEnd && Face(start, side) is { } atStart)
                 {
-                    var fresh = period.StartSeconds == 0 || period.Renewed.Contains(side);
+                    var fresh = face is CompartmentFace && (period.StartSeconds == 0 || period.Renewed.Contains(side));
                     var concentration = atEnd.ConcentrationKgPerCubicMeter;
                     var fluxes = OutputSchedule.WithinPeriod(schedule, period)
                         .Select(time => At(series, time) is { } sample ? Face(sample, side)!.FluxIntoMediumKgPerSquareMeterSecond : double.NaN)
@@ -44,11 +45,11 @@ public static class ScheduleAnalysis
                         .ToArray();
                     media.Add(new MediumInPeriod(
                         side,
-                        compartment.Name,
+                        face.MediumName,
                         fresh,
                         atEnd.TransferredIntoMediumPerArea - atStart.TransferredIntoMediumPerArea,
                         concentration,
-                        concentration / compartment.DensityKgPerCubicMeter,
+                        concentration / (face as CompartmentFace)?.DensityKgPerCubicMeter,
                         fluxes.Max(),
                         fluxes.Min()));
                 }
@@ -59,7 +60,36 @@ public static class ScheduleAnalysis
         }
 
         return new ScheduleSummary(
-            outcomes, SteadyStates(outcomes, simulation.Numerics.Accuracy), RepeatedUse(simulation, schedule, series), Renewed(simulation, schedule, series));
+            outcomes, SteadyStates(outcomes, simulation.Numerics.Accuracy), RepeatedUse(simulation, schedule, series), Renewed(simulation, schedule, series))
+        {
+            LayerMoves = LayerMoves(simulation, schedule, series),
+        };
+    }
+
+    /// <summary>
+    /// Each taking off or putting on of layers: what the layers taken off held just before (the sample at that time is
+    /// taken before the change), and what the fresh ones bring as the case loads them.
+    /// </summary>
+    private static List<LayerMove> LayerMoves(SimulationCase simulation, ContactSchedule schedule, IReadOnlyList<StateSample> series)
+    {
+        var moves = new List<LayerMove>();
+        var layers = simulation.Stack.Layers;
+        foreach (var period in schedule.Periods.Where(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0))
+        {
+            var before = At(series, period.StartSeconds);
+            var off = schedule.LayersOffAt(period.StartSeconds * (1 - 1e-9));
+            var takenOff = period.RemovedLayers.Concat(period.AppliedLayers).Select(change => change.Layer).Where(layer => !off.Contains(layer)).ToArray();
+            var putOn = period.AppliedLayers.Select(change => change.Layer).ToArray();
+            moves.Add(new LayerMove(
+                period.Label,
+                period.StartSeconds,
+                [.. takenOff.Select(layer => layers[layer].Name)],
+                [.. putOn.Select(layer => layers[layer].Name)],
+                before is null ? double.NaN : takenOff.Sum(layer => before.LayerMassPerArea[layer]),
+                putOn.Sum(layer => layers[layer].InitialConcentrationKgPerCubicMeter * layers[layer].ThicknessMeters)));
+        }
+
+        return moves;
     }
 
     /// <summary>Each renewed medium and the net mass its replaced portions took away: V (c - c_fresh) per area at each renewal.</summary>

@@ -176,7 +176,7 @@ public static class Simulator
         var faces = new[] { simulation.Left, simulation.Right };
         if (!simulation.IsClosed
             || (faces.OfType<CompartmentFace>().All(compartment => compartment.Sampling is null)
-                && !(simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right))))
+                && !(simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right) || schedule.ChangesLayers)))
             || faces.OfType<CompartmentFace>().Any(compartment => compartment.RemovalRatePerSecond > 0))
         {
             return null;
@@ -199,8 +199,9 @@ public static class Simulator
         SimulationCase simulation, double? massLeftAfterSamplingPerArea = null)
     {
         var model = DiscreteModel.Build(simulation.WithFirstStageDiffusivities());
-        var stages = StageSystem.For(simulation, model.Grid, model.System);
-        var final = FinalStateTarget.ForStages(model, stages, massLeftAfterSamplingPerArea);
+        var stages = LayerPresence.Split(StageSystem.For(simulation, model.Grid, model.System), simulation);
+        var final = FinalStateTarget.ForStages(model, stages, massLeftAfterSamplingPerArea)
+            .WithLayersOff(simulation, model.System, simulation.Schedule?.LayersOffAtEnd ?? new HashSet<int>(), massLeftAfterSamplingPerArea);
         var sampling = new SamplingEvents(model);
         var recorder = new ResultRecorder(model, stages, final, sampling);
         return (model, final, sampling, recorder, stages);

@@ -23,6 +23,6 @@ public sealed class PeriodMarksTests
 
         var profile = ProfilePlot.Create(result, new PlotOptions());
         var legend = profile.Series.OfType<LineSeries>().Where(line => line.RenderInLegend).Select(line => line.Title).ToList();
-        Assert.Contains(legend, title => title.EndsWith("(end of contact 3 of 3)", StringComparison.Ordinal));
+        Assert.Contains(legend, title => title.EndsWith("(end of 'contact 3 of 3')", StringComparison.Ordinal));
     }
 }

@@ -116,13 +116,21 @@ public static class KeyFigures
                 var medium = outcome.Media[m];
                 var path = Indexed(Indexed("$.schedule.periods", p) + ".media", m);
                 var what = $"{outcome.Period.Label}: {medium.Name}";
-                var compartment = (CompartmentFace)result.Case.Face(medium.Side);
                 var end = outcome.Period.EndSeconds;
                 Add(figures, path + ".receivedKgPerSquareMeter", FigureKind.Amount, medium.ReceivedKgPerSquareMeter, what + " received in the period", end, amount);
-                Add(figures, path + ".concentrationAtEndKgPerCubicMeter", FigureKind.Concentration, medium.ConcentrationAtEndKgPerCubicMeter, what + " concentration at the end", end, amount / compartment.VolumePerAreaMeters);
+                if (result.Case.Face(medium.Side) is CompartmentFace compartment)
+                {
+                    Add(figures, path + ".concentrationAtEndKgPerCubicMeter", FigureKind.Concentration, medium.ConcentrationAtEndKgPerCubicMeter, what + " concentration at the end", end, amount / compartment.VolumePerAreaMeters);
+                }
+
                 Add(figures, path + ".highestFluxKgPerSquareMeterSecond", FigureKind.Flux, medium.HighestFluxKgPerSquareMeterSecond, what + " highest flux", end, periodFlux);
                 Add(figures, path + ".lowestFluxKgPerSquareMeterSecond", FigureKind.Flux, medium.LowestFluxKgPerSquareMeterSecond, what + " lowest flux", end, periodFlux);
             }
+        }
+
+        for (var move = 0; move < schedule.LayerMoves.Count; move++)
+        {
+            Add(figures, Indexed("$.schedule.layerMoves", move) + ".takenAwayKgPerSquareMeter", FigureKind.Amount, schedule.LayerMoves[move].TakenAwayKgPerSquareMeter, schedule.LayerMoves[move].PeriodLabel + ": taken away with the layers", schedule.LayerMoves[move].TimeSeconds, amount);
         }
 
         for (var r = 0; r < schedule.Renewed.Count; r++)
