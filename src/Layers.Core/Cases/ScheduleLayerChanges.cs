@@ -3,8 +3,9 @@ using Layers.Core.Domain;
 namespace Layers.Core.Cases;
 
 /// <summary>
-/// Turns the layers a schedule's periods take off (<c>remove</c>) or put on (<c>apply</c>) into layer indices once the
-/// layers and faces are read, and checks that the run can follow them: every layer is on at the start; only outer
+/// Turns the faces a schedule's periods close and open (<c>close</c>, <c>open</c>) and the layers they take off
+/// (<c>remove</c>) or put on (<c>apply</c>) into the schedule's changes once the layers and faces are read, and checks
+/// that the run can follow them: faces as <see cref="Faces"/> says; for layers, every layer is on at the start; only outer
 /// layers are ever off, in one block from a face inward, and that face is closed (nothing is left touching air or a
 /// medium through a gap); a layer is taken off only while on; some layer always stays on.
 /// </summary>
@@ -13,10 +14,18 @@ internal static class ScheduleLayerChanges
     /// <summary>The schedule with its layer changes, or null when there are errors (added to the context).</summary>
     public static ContactSchedule? Resolve(ScheduleReader.Result read, IReadOnlyList<Layer> layers, FaceCondition left, FaceCondition right, ReadContext context)
     {
-        if (read.Schedule is not { } schedule || read.PerPeriod.All(period => period.Removed.Count == 0 && period.Applied.Count == 0))
+        if (read.Schedule is not { } schedule)
         {
-            return read.Schedule;
+            return null;
         }
+
+        var withFaces = Faces(read, schedule, left, right, context);
+        if (withFaces is null || read.PerPeriod.All(period => period.Removed.Count == 0 && period.Applied.Count == 0))
+        {
+            return withFaces;
+        }
+
+        schedule = withFaces;
 
         var errorsBefore = context.Errors.Count;
         var known = string.Join(", ", layers.Select(layer => $"'{layer.Name}'"));
@@ -85,6 +94,69 @@ internal static class ScheduleLayerChanges
 
         return context.Errors.Count == errorsBefore ? new ContactSchedule(periods) : null;
     }
+
+    /// <summary>
+    /// The faces each period closes and opens, checked: the first period may close faces (they start closed) but open
+    /// none; only an open face is closed, only a face the schedule closed is opened; and every face is open again at
+    /// the end, where the final state needs every medium in contact. Null when there are errors.
+    /// </summary>
+    private static ContactSchedule? Faces(ScheduleReader.Result read, ContactSchedule schedule, FaceCondition left, FaceCondition right, ReadContext context)
+    {
+        if (read.PerPeriod.All(period => period.Closed.Count == 0 && period.Opened.Count == 0))
+        {
+            return schedule;
+        }
+
+        var errorsBefore = context.Errors.Count;
+        var closed = new Dictionary<Side, string>();
+        var periods = new List<SchedulePeriod>();
+        for (var p = 0; p < schedule.Periods.Count; p++)
+        {
+            var written = read.PerPeriod[p];
+            var label = schedule.Periods[p].Label;
+            // A face closed in the first period starts closed (a film in a reel before it is filled).
+            foreach (var (_, path) in p == 0 ? written.Opened : [])
+            {
+                context.Errors.Add(new CaseError(path, "every face with a medium is open at the start unless the first period closes it; open faces from the second period on"));
+            }
+
+            foreach (var (side, path) in written.Closed)
+            {
+                var face = side == Side.Left ? left : right;
+                if (!face.IsOpen)
+                {
+                    context.Errors.Add(new CaseError(path, $"the {Name(side)} face is {face.KindName}; only a face with a medium can be closed"));
+                }
+                else if (!closed.TryAdd(side, path))
+                {
+                    context.Errors.Add(new CaseError(path, $"the {Name(side)} face is closed already at the start of {label}"));
+                }
+            }
+
+            foreach (var (side, path) in written.Opened)
+            {
+                if (!closed.Remove(side))
+                {
+                    context.Errors.Add(new CaseError(path, $"the {Name(side)} face is open at the start of {label}; only a face a period closed can be opened"));
+                }
+            }
+
+            periods.Add(schedule.Periods[p] with
+            {
+                ClosedFaces = [.. written.Closed.Select(face => face.Side).Distinct()],
+                OpenedFaces = [.. written.Opened.Select(face => face.Side).Distinct()],
+            });
+        }
+
+        foreach (var (side, path) in closed)
+        {
+            context.Errors.Add(new CaseError(path, $"leaves the {Name(side)} face closed at the end of the schedule; open it again in a later period (the final state needs every medium in contact)"));
+        }
+
+        return context.Errors.Count == errorsBefore ? new ContactSchedule(periods) : null;
+    }
+
+    private static string Name(Side side) => side == Side.Left ? "left" : "right";
 
     private static List<(int Layer, string Path)>? Indices(IReadOnlyList<(string Layer, string Path)> names, IReadOnlyList<Layer> layers, string known, ReadContext context)
     {

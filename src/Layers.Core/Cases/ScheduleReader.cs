@@ -16,7 +16,7 @@ internal static class ScheduleReader
     /// <summary>Most periods a schedule may run, repetitions counted (each writes a row to the period table).</summary>
     public const int MaxPeriods = 1000;
 
-    private static readonly string[] PeriodKeys = ["name", "duration", "renew", "temperature", "remove", "apply", "repeat"];
+    private static readonly string[] PeriodKeys = ["name", "duration", "renew", "temperature", "remove", "apply", "close", "open", "repeat"];
     private static readonly string[] BlockKeys = ["name", "repeat", "periods"];
     private const string Example = "[ { \"name\": \"contact\", \"duration\": \"10 d\", \"renew\": [\"right\"], \"repeat\": 3 } ]";
 
@@ -28,7 +28,14 @@ internal static class ScheduleReader
         double? TemperatureKelvin,
         string Path,
         IReadOnlyList<(string Layer, string Path)> Removed,
-        IReadOnlyList<(string Layer, string Path)> Applied);
+        IReadOnlyList<(string Layer, string Path)> Applied)
+    {
+        /// <summary>The faces taken out of contact at the start, with their paths.</summary>
+        public IReadOnlyList<(Side Side, string Path)> Closed { get; init; } = [];
+
+        /// <summary>The faces brought back into contact at the start, with their paths.</summary>
+        public IReadOnlyList<(Side Side, string Path)> Opened { get; init; } = [];
+    }
 
     /// <summary>What <see cref="Read"/> found.</summary>
     /// <param name="Schedule">The schedule; null when it has errors.</param>
@@ -217,12 +224,14 @@ internal static class ScheduleReader
     {
         var name = period.Text("name") ?? defaultName;
         var duration = ReadContext.Positive(period, "duration", Dimension.Time, required: true);
-        var renewed = Renewed(period, context);
+        var renewed = Faces(period, "renew", "faces whose medium is replaced by a fresh one at the period's start", context);
+        var closed = Faces(period, "close", "faces whose medium is taken out of contact at the period's start", context);
+        var opened = Faces(period, "open", "faces whose medium is brought back into contact at the period's start", context);
         var temperature = ReadContext.Positive(period, "temperature", Dimension.Temperature, required: false);
         var removed = LayerNames(period, "remove", context);
         var applied = LayerNames(period, "apply", context);
-        return duration is { } seconds && renewed is not null && removed is not null && applied is not null
-            ? new Written(name, seconds, renewed, temperature, period.Path, removed, applied)
+        return duration is { } seconds && renewed is not null && removed is not null && applied is not null && closed is not null && opened is not null
+            ? new Written(name, seconds, renewed, temperature, period.Path, removed, applied) { Closed = closed, Opened = opened }
             : null;
     }
 
@@ -256,16 +265,16 @@ internal static class ScheduleReader
         return names;
     }
 
-    private static List<(Side, string)>? Renewed(JsonFields period, ReadContext context)
+    private static List<(Side, string)>? Faces(JsonFields period, string key, string what, ReadContext context)
     {
-        if (period.Member("renew") is not { } array)
+        if (period.Member(key) is not { } array)
         {
             return [];
         }
 
         if (array.ValueKind != JsonValueKind.Array)
         {
-            period.Error("renew", $"expected an array of faces whose medium is replaced by a fresh one at the period's start, e.g. [\"right\"]; found {JsonFields.Describe(array)}");
+            period.Error(key, $"expected an array of {what}, e.g. [\"right\"]; found {JsonFields.Describe(array)}");
             return null;
         }
 
@@ -273,7 +282,7 @@ internal static class ScheduleReader
         var index = 0;
         foreach (var element in array.EnumerateArray())
         {
-            var path = $"{period.PathOf("renew")}[{index++}]";
+            var path = $"{period.PathOf(key)}[{index++}]";
             switch (element.ValueKind == JsonValueKind.String ? element.GetString() : null)
             {
                 case "left":

@@ -107,6 +107,34 @@ public sealed class DiffusionSystem
         return new DiffusionSystem(Grid, Capacity, conductance, HalfCellResistance, PartitionCoefficient, Left, Right, LeftBath, RightBath, FirstCellNode, Saturation);
     }
 
+    /// <summary>
+    /// The same system with the medium on some faces out of contact: a compartment's link to the stack cut, a bath's
+    /// coupling removed. The compartment keeps its node and what it holds.
+    /// </summary>
+    internal DiffusionSystem WithFacesDetached(IReadOnlyCollection<Side> sides)
+    {
+        var conductance = (double[])Conductance.Clone();
+        var leftBath = LeftBath;
+        var rightBath = RightBath;
+        foreach (var side in sides)
+        {
+            if (Face(side).AddsNode)
+            {
+                conductance[side == Side.Left ? 0 : conductance.Length - 1] = 0;
+            }
+            else if (side == Side.Left)
+            {
+                leftBath = BathCoupling.None;
+            }
+            else
+            {
+                rightBath = BathCoupling.None;
+            }
+        }
+
+        return new DiffusionSystem(Grid, Capacity, conductance, HalfCellResistance, PartitionCoefficient, Left, Right, leftBath, rightBath, FirstCellNode, Saturation);
+    }
+
     /// <summary>Number of unknowns.</summary>
     public int NodeCount => Capacity.Length;
 

@@ -53,4 +53,23 @@ public sealed record ContactSchedule(IReadOnlyList<SchedulePeriod> Periods)
     /// <summary>The period starts at which layers are taken off or put on, s, ascending.</summary>
     public IReadOnlyList<double> LayerChangeTimes =>
         Periods.Where(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0).Select(period => period.StartSeconds).ToArray();
+
+    /// <summary>True when some period changes the stack or its contacts (layers off or on, faces closed or opened).</summary>
+    public bool ChangesContacts => Periods.Any(period => period.ChangesContacts);
+
+    /// <summary>The period starts at which the stack or its contacts change, s, ascending.</summary>
+    public IReadOnlyList<double> ContactChangeTimes => Periods.Where(period => period.ChangesContacts).Select(period => period.StartSeconds).ToArray();
+
+    /// <summary>The faces the schedule holds closed during the period that runs at <paramref name="timeSeconds"/> (the later one at a boundary).</summary>
+    public IReadOnlySet<Side> FacesClosedAt(double timeSeconds)
+    {
+        var closed = new HashSet<Side>();
+        foreach (var period in Periods.TakeWhile(period => period.StartSeconds <= timeSeconds * (1 + 1e-12)))
+        {
+            closed.UnionWith(period.ClosedFaces);
+            closed.ExceptWith(period.OpenedFaces);
+        }
+
+        return closed;
+    }
 }

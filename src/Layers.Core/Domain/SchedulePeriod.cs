@@ -27,6 +27,18 @@ public sealed record SchedulePeriod(
     /// </summary>
     public IReadOnlyList<LayerChange> AppliedLayers { get; init; } = [];
 
+    /// <summary>
+    /// The faces whose medium is taken out of contact at the start (a film in a reel before filling): nothing passes
+    /// there until a later period opens the face again; the medium keeps what it holds.
+    /// </summary>
+    public IReadOnlyList<Side> ClosedFaces { get; init; } = [];
+
+    /// <summary>The faces whose medium is brought back into contact at the start.</summary>
+    public IReadOnlyList<Side> OpenedFaces { get; init; } = [];
+
+    /// <summary>True when the stack or its contacts change at the start: layers off or on, faces closed or opened.</summary>
+    public bool ChangesContacts => RemovedLayers.Count > 0 || AppliedLayers.Count > 0 || ClosedFaces.Count > 0 || OpenedFaces.Count > 0;
+
     /// <summary>End on the run's clock, s.</summary>
     public double EndSeconds => StartSeconds + DurationSeconds;
 

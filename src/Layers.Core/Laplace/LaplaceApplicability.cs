@@ -57,6 +57,12 @@ public sealed class LaplaceApplicability
             reasons.Add("the schedule takes layers off or puts them on during the run");
         }
 
+        if (simulation.Schedule is { } contacts && contacts.Periods.Any(period => period.ClosedFaces.Count > 0))
+        {
+            // A face taken out of contact and brought back changes the system during the run.
+            reasons.Add("the schedule closes a face and opens it again during the run");
+        }
+
         return new LaplaceApplicability(reasons);
     }
 }

@@ -97,11 +97,13 @@ public static class ScheduleTables
     {
         if (period.StartSeconds == 0)
         {
-            return string.Empty;
+            return string.Join("; ", period.ClosedFaces.Select(side => $"{simulation.Face(side).MediumName} out of contact"));
         }
 
         string Names(IEnumerable<LayerChange> changes) => string.Join(", ", changes.Select(change => simulation.Stack.Layers[change.Layer].Name));
         var parts = new List<string>();
+        parts.AddRange(period.ClosedFaces.Select(side => $"{simulation.Face(side).MediumName} out of contact"));
+        parts.AddRange(period.OpenedFaces.Select(side => $"{simulation.Face(side).MediumName} in contact again"));
         parts.AddRange(period.Renewed.Select(side => $"{simulation.Face(side).MediumName} renewed"));
         if (period.AppliedLayers.Count > 0)
         {

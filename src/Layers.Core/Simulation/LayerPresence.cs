@@ -4,8 +4,9 @@ using Layers.Core.Domain;
 namespace Layers.Core.Simulation;
 
 /// <summary>
-/// The stages of a run whose schedule takes layers off or puts them on: each stage is split at those times, and while
-/// layers are off the link between them and the rest of the stack is cut. The cells of a layer that is off stay on the
+/// The stages of a run whose schedule takes layers off or puts them on, or closes and opens faces: each stage is split
+/// at those times; while layers are off the link between them and the rest of the stack is cut, and while a face is
+/// closed its medium is out of contact. The cells of a layer that is off stay on the
 /// grid, emptied when it is taken off (<see cref="SamplingEvents"/>), exchanging with nothing; so one grid serves the
 /// whole run and a layer put on again is loaded in the same cells.
 /// </summary>
@@ -13,12 +14,12 @@ internal static class LayerPresence
 {
     public static IReadOnlyList<StageSystem> Split(IReadOnlyList<StageSystem> stages, SimulationCase simulation)
     {
-        if (simulation.Schedule is not { ChangesLayers: true } schedule)
+        if (simulation.Schedule is not { ChangesContacts: true } schedule)
         {
             return stages;
         }
 
-        var changes = schedule.LayerChangeTimes;
+        var changes = schedule.ContactChangeTimes;
         var result = new List<StageSystem>();
         foreach (var stage in stages)
         {
@@ -27,11 +28,13 @@ internal static class LayerPresence
             for (var i = 0; i + 1 < bounds.Length; i++)
             {
                 var off = schedule.LayersOffAt(bounds[i]);
+                var closed = schedule.FacesClosedAt(bounds[i]);
+                var system = off.Count == 0 ? stage.System : stage.System.WithLinksCut(CutLinks(stage.System, off, simulation.Stack.Count));
                 result.Add(stage with
                 {
                     StartSeconds = bounds[i],
                     EndSeconds = bounds[i + 1],
-                    System = off.Count == 0 ? stage.System : stage.System.WithLinksCut(CutLinks(stage.System, off, simulation.Stack.Count)),
+                    System = closed.Count == 0 ? system : system.WithFacesDetached(closed),
                 });
             }
         }

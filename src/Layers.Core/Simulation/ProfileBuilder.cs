@@ -33,7 +33,13 @@ internal sealed class ProfileBuilder
         var off = _case.Schedule is { ChangesLayers: true } schedule && timeSeconds > 0
             ? schedule.LayersOffAt(timeSeconds * (1 - 1e-9))
             : null;
-        bool Cut(int layer, int neighbour) => off is not null && neighbour >= 0 && neighbour < _case.Stack.Count && off.Contains(layer) != off.Contains(neighbour);
+        var detached = _case.Schedule is { ChangesContacts: true } contacts && timeSeconds > 0
+            ? contacts.FacesClosedAt(timeSeconds * (1 - 1e-9))
+            : null;
+        bool Cut(int layer, int neighbour) =>
+            (neighbour < 0 && detached?.Contains(Domain.Side.Left) == true)
+            || (neighbour >= _case.Stack.Count && detached?.Contains(Domain.Side.Right) == true)
+            || (off is not null && neighbour >= 0 && neighbour < _case.Stack.Count && off.Contains(layer) != off.Contains(neighbour));
         var state = Dissolved(content);
         var grid = _system.Grid;
         var cells = state.Slice(_system.FirstCellNode, grid.CellCount);
