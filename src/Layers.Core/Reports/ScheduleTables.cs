@@ -153,7 +153,8 @@ public static class ScheduleTables
         {
             var judged = contact == verdict.JudgedContact ? "judged" : string.Empty;
             var rose = verdict.RisingFrom.Contains(contact - 1) ? "rose from the contact before" : string.Empty;
-            rows.Add([contact.ToString(CultureInfo.InvariantCulture), MgPerKg(verdict.Contacts[contact - 1]), string.Join("; ", new[] { judged, rose }.Where(note => note.Length > 0))]);
+            var over = verdict.LimitKgPerKg is { } limitValue && verdict.Contacts[contact - 1] > limitValue ? "above the limit" : string.Empty;
+            rows.Add([contact.ToString(CultureInfo.InvariantCulture), MgPerKg(verdict.Contacts[contact - 1]), string.Join("; ", new[] { judged, over, rose }.Where(note => note.Length > 0))]);
         }
 
         var limit = verdict.LimitKgPerKg is { } value ? $"limit {MgPerKg(value)}" : "no limit given";
