@@ -33,7 +33,7 @@ public static class FinalStateText
     {
         ArgumentNullException.ThrowIfNull(simulation);
         var sampled = new[] { simulation.Left, simulation.Right }.Any(face => face is CompartmentFace { Sampling: not null });
-        var renewed = simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right) || schedule.ChangesLayers);
+        var renewed = simulation.Schedule is { ChangesMass: true };
         return (sampled, renewed) switch
         {
             (true, true) => "sample or renewal",

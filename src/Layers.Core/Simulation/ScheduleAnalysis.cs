@@ -74,7 +74,7 @@ public static class ScheduleAnalysis
     {
         var moves = new List<LayerMove>();
         var layers = simulation.Stack.Layers;
-        foreach (var period in schedule.Periods.Where(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0))
+        foreach (var period in schedule.Periods.Where(period => period.ChangesLayers))
         {
             var before = At(series, period.StartSeconds);
             var off = schedule.LayersOffAt(period.StartSeconds * (1 - 1e-9));
