@@ -52,6 +52,13 @@ internal sealed class DisplayFormat(DisplayUnits units)
     public static string Floor(string shownNumber) =>
         NegligibleFloor.RoundedUp(double.Parse(shownNumber, CultureInfo.InvariantCulture)).ToString("G1", CultureInfo.InvariantCulture);
 
+    /// <summary>
+    /// A figure as a table for people shows it: <paramref name="shown"/> of the value, or "&lt; floor" in its place when
+    /// it lies below the run's reporting floor, where it has no known accuracy (<see cref="NegligibleFloor"/>).
+    /// </summary>
+    public static string OrFloor(double value, double? floor, Func<double, string> shown)
+        => NegligibleFloor.Hides(value, floor) ? "< " + Floor(shown(floor!.Value)) : shown(value);
+
     /// <summary>A number as the console tables show it: four significant digits, invariant culture.</summary>
     public static string Number(double value) => value.ToString("G4", CultureInfo.InvariantCulture);
 }
