@@ -347,8 +347,7 @@ public static class TransferPlot
     }
 
     /// <summary>A floor to one significant digit, as the console shows it.</summary>
-    private static double Floor(double value) =>
-        double.Parse(value.ToString("G1", System.Globalization.CultureInfo.InvariantCulture), System.Globalization.CultureInfo.InvariantCulture);
+    private static double Floor(double value) => NegligibleFloor.RoundedUp(value);
 
     private static IEnumerable<string> Subtitle(SimulationResult result, List<Medium> media, Units units, PlotOptions options, MigrationLimit? migration)
     {

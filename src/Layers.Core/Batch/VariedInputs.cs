@@ -1,4 +1,3 @@
-using System.Text;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using Layers.Core.Cases;
@@ -44,20 +43,20 @@ public static class VariedInputs
             paths.Clear();
         }
 
-        var labels = Labels(paths, roots.OfType<JsonNode>().ToList());
+        var labels = Labels(paths, roots.OfType<JsonObject>().FirstOrDefault());
         return leaves.Select(leaf => leaf is null ? (IReadOnlyList<SweepValue>)[] : paths.Select(path => Value(path, leaf[path], labels[path])).ToList()).ToList();
     }
 
     private static SweepValue Value(string path, Leaf leaf, string label) => SweepValues.Of(path, leaf.Text) with { Label = label };
 
     /// <summary>
-    /// The people label of a path: the owner's <c>name</c> (when every document that has the owner names it alike)
-    /// and the member in words, "sealant thickness"; the member alone at the top level, "duration"; the path's
-    /// members in words otherwise. Two paths that would share a label keep their paths.
+    /// The people label of each path (<see cref="InputLabels"/>, "sealant thickness"), read from the first document:
+    /// variants name their layers and media alike, as cases whose names differ get no inputs. Two paths that would share
+    /// a label keep their paths.
     /// </summary>
-    private static Dictionary<string, string> Labels(IReadOnlyList<string> paths, IReadOnlyList<JsonNode> roots)
+    private static Dictionary<string, string> Labels(IReadOnlyList<string> paths, JsonObject? first)
     {
-        var labels = paths.ToDictionary(path => path, path => Label(path, roots), StringComparer.Ordinal);
+        var labels = paths.ToDictionary(path => path, path => InputLabels.Of(first, path), StringComparer.Ordinal);
         foreach (var group in labels.GroupBy(pair => pair.Value, StringComparer.Ordinal).Where(group => group.Count() > 1).ToList())
         {
             foreach (var (path, _) in group)
@@ -67,69 +66,6 @@ public static class VariedInputs
         }
 
         return labels;
-    }
-
-    private static string Label(string path, IReadOnlyList<JsonNode> roots)
-    {
-        var cut = path.LastIndexOf('.');
-        var owner = path[..cut];
-        var member = Words(path[(cut + 1)..]);
-        if (owner == "$")
-        {
-            return member;
-        }
-
-        var names = roots.Select(root => At(root, owner)?["name"] is JsonValue value && value.TryGetValue<string>(out var name) ? name : null)
-            .OfType<string>().Distinct(StringComparer.Ordinal).ToList();
-        if (names.Count == 1 && member != "name")
-        {
-            return $"{names[0]} {member}";
-        }
-
-        return string.Join(' ', owner[2..].Split('.').Select(Words).Append(member));
-    }
-
-    /// <summary>The object at a path of the form the leaves are written in ("$.layers[2]"), or null.</summary>
-    private static JsonObject? At(JsonNode root, string path)
-    {
-        JsonNode? node = root;
-        foreach (var step in path[2..].Split('.'))
-        {
-            var bracket = step.IndexOf('[', StringComparison.Ordinal);
-            node = node is JsonObject member ? member[bracket < 0 ? step : step[..bracket]] : null;
-            if (bracket >= 0)
-            {
-                var index = int.Parse(step[(bracket + 1)..^1], System.Globalization.CultureInfo.InvariantCulture);
-                node = node is JsonArray array && index < array.Count ? array[index] : null;
-            }
-        }
-
-        return node as JsonObject;
-    }
-
-    /// <summary>camelCase in words: "diffusionCoefficient" to "diffusion coefficient", "layers[2]" to "layer 3".</summary>
-    private static string Words(string name)
-    {
-        var bracket = name.IndexOf('[', StringComparison.Ordinal);
-        if (bracket >= 0)
-        {
-            var index = int.Parse(name[(bracket + 1)..^1], System.Globalization.CultureInfo.InvariantCulture);
-            var plural = name[..bracket];
-            return $"{Words(plural.EndsWith('s') ? plural[..^1] : plural)} {index + 1}";
-        }
-
-        var text = new StringBuilder();
-        foreach (var c in name)
-        {
-            if (char.IsUpper(c) && text.Length > 0)
-            {
-                text.Append(' ');
-            }
-
-            text.Append(char.ToLowerInvariant(c));
-        }
-
-        return text.ToString();
     }
 
     private static JsonNode? Parse(string? document)

@@ -53,7 +53,7 @@ internal static class ScheduleLayerChanges
                 context.Errors.Add(new CaseError(path, $"'{layers[layer].Name}' is off already at the start of {schedule.Periods[p].Label}; put it on again with \"apply\" first"));
             }
 
-            foreach (var (layer, path) in changes.Count == 0 ? [] : removed.Concat(applied).Where(pair => layers[pair.Layer].SolubilityKgPerCubicMeter is not null))
+            foreach (var (layer, path) in removed.Concat(applied).Where(pair => layers[pair.Layer].SolubilityKgPerCubicMeter is not null))
             {
                 context.Errors.Add(new CaseError(path, $"'{layers[layer].Name}' has a solubility; a layer with undissolved substance cannot be taken off or put on"));
             }

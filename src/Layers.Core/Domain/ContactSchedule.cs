@@ -32,7 +32,13 @@ public sealed record ContactSchedule(IReadOnlyList<SchedulePeriod> Periods)
     }
 
     /// <summary>True when some period takes layers off or puts them on.</summary>
-    public bool ChangesLayers => Periods.Any(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0);
+    public bool ChangesLayers => Periods.Any(period => period.ChangesLayers);
+
+    /// <summary>
+    /// True when some period takes mass out of the system or brings it in: a renewed medium, layers taken off or put
+    /// on fresh.
+    /// </summary>
+    public bool ChangesMass => Renews(Side.Left) || Renews(Side.Right) || ChangesLayers;
 
     /// <summary>The layers that are off during the period that runs at <paramref name="timeSeconds"/> (the later one at a boundary).</summary>
     public IReadOnlySet<int> LayersOffAt(double timeSeconds)
@@ -49,10 +55,6 @@ public sealed record ContactSchedule(IReadOnlyList<SchedulePeriod> Periods)
 
     /// <summary>The layers off at the end of the schedule.</summary>
     public IReadOnlySet<int> LayersOffAtEnd => LayersOffAt(DurationSeconds);
-
-    /// <summary>The period starts at which layers are taken off or put on, s, ascending.</summary>
-    public IReadOnlyList<double> LayerChangeTimes =>
-        Periods.Where(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0).Select(period => period.StartSeconds).ToArray();
 
     /// <summary>True when some period changes the stack or its contacts (layers off or on, faces closed or opened).</summary>
     public bool ChangesContacts => Periods.Any(period => period.ChangesContacts);

@@ -36,8 +36,11 @@ public sealed record SchedulePeriod(
     /// <summary>The faces whose medium is brought back into contact at the start.</summary>
     public IReadOnlyList<Side> OpenedFaces { get; init; } = [];
 
+    /// <summary>True when layers are taken off or put on at the start.</summary>
+    public bool ChangesLayers => RemovedLayers.Count > 0 || AppliedLayers.Count > 0;
+
     /// <summary>True when the stack or its contacts change at the start: layers off or on, faces closed or opened.</summary>
-    public bool ChangesContacts => RemovedLayers.Count > 0 || AppliedLayers.Count > 0 || ClosedFaces.Count > 0 || OpenedFaces.Count > 0;
+    public bool ChangesContacts => ChangesLayers || ClosedFaces.Count > 0 || OpenedFaces.Count > 0;
 
     /// <summary>End on the run's clock, s.</summary>
     public double EndSeconds => StartSeconds + DurationSeconds;

@@ -84,10 +84,11 @@ internal static class FirstCrossings
     {
         ArgumentNullException.ThrowIfNull(value);
         var start = Math.Exp(Math.Log(upToSeconds) - (ScanDecades * Math.Log(10)));
+        // The scan starts from this point as a known value, so the quantity is not evaluated there twice.
         var initial = value(start);
         return initial == level ? start
-            : initial < level ? Find(value, [level], upToSeconds)[0]
-            : Find(time => -value(time), [-level], upToSeconds)[0];
+            : initial < level ? Find(value, [level], upToSeconds, [(start, initial)])[0]
+            : Find(time => -value(time), [-level], upToSeconds, [(start, -initial)])[0];
     }
 
     /// <summary>A level reached before the scan starts: step down a decade at a time until it is not, then bracket.</summary>

@@ -1,5 +1,6 @@
 using System.Globalization;
 using Layers.Core.Domain;
+using Layers.Core.Simulation;
 using Layers.Core.Units;
 
 namespace Layers.Core.Reports;
@@ -47,9 +48,16 @@ internal sealed class DisplayFormat(DisplayUnits units)
     /// <summary>A value in SI in a unit, four significant digits, with the unit as people spell it ("12.5 µg/cm2").</summary>
     public static string Shown(double siValue, UnitDefinition unit) => Number(unit.FromSi(siValue)) + " " + unit.ForPeople;
 
-    /// <summary>A floor shown in place of a figure below it: one significant digit of the number shown ("1E-05").</summary>
+    /// <summary>A floor shown in place of a figure below it: the number shown rounded up to one significant digit ("2E-05" for 1.4E-05).</summary>
     public static string Floor(string shownNumber) =>
-        double.Parse(shownNumber, CultureInfo.InvariantCulture).ToString("G1", CultureInfo.InvariantCulture);
+        NegligibleFloor.RoundedUp(double.Parse(shownNumber, CultureInfo.InvariantCulture)).ToString("G1", CultureInfo.InvariantCulture);
+
+    /// <summary>
+    /// A figure as a table for people shows it: <paramref name="shown"/> of the value, or "&lt; floor" in its place when
+    /// it lies below the run's reporting floor, where it has no known accuracy (<see cref="NegligibleFloor"/>).
+    /// </summary>
+    public static string OrFloor(double value, double? floor, Func<double, string> shown)
+        => NegligibleFloor.Hides(value, floor) ? "< " + Floor(shown(floor!.Value)) : shown(value);
 
     /// <summary>A number as the console tables show it: four significant digits, invariant culture.</summary>
     public static string Number(double value) => value.ToString("G4", CultureInfo.InvariantCulture);

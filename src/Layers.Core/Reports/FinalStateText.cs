@@ -25,12 +25,15 @@ public static class FinalStateText
         };
     }
 
-    /// <summary>What takes mass out of a closed system at given times: "sample", "renewal" or "sample or renewal".</summary>
+    /// <summary>
+    /// What takes mass out of a closed system (or brings it) at given times: "sample", "renewal" (of a medium or, by a
+    /// schedule, of the stack: layers taken off or put on fresh) or "sample or renewal".
+    /// </summary>
     public static string Withdrawal(SimulationCase simulation)
     {
         ArgumentNullException.ThrowIfNull(simulation);
         var sampled = new[] { simulation.Left, simulation.Right }.Any(face => face is CompartmentFace { Sampling: not null });
-        var renewed = simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right));
+        var renewed = simulation.Schedule is { ChangesMass: true };
         return (sampled, renewed) switch
         {
             (true, true) => "sample or renewal",

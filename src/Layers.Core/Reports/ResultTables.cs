@@ -33,12 +33,8 @@ public static class ResultTables
             {
                 var sample = (side == Side.Left ? report.Sample.Left : report.Sample.Right)!;
                 var concentrationFloor = Simulation.NegligibleFloor.ConcentrationIn(result, face);
-                row.Add(Simulation.NegligibleFloor.Hides(sample.ConcentrationKgPerCubicMeter, concentrationFloor)
-                    ? "< " + DisplayFormat.Floor(format.MediumConcentrationValue(concentrationFloor!.Value, face))
-                    : format.MediumConcentrationValue(sample.ConcentrationKgPerCubicMeter, face));
-                row.Add(Simulation.NegligibleFloor.Hides(sample.TransferredIntoMediumPerArea, amountFloor)
-                    ? "< " + DisplayFormat.Floor(format.MassPerAreaValue(amountFloor))
-                    : format.MassPerAreaValue(sample.TransferredIntoMediumPerArea));
+                row.Add(DisplayFormat.OrFloor(sample.ConcentrationKgPerCubicMeter, concentrationFloor, value => format.MediumConcentrationValue(value, face)));
+                row.Add(DisplayFormat.OrFloor(sample.TransferredIntoMediumPerArea, amountFloor, format.MassPerAreaValue));
             }
 
             // Undefined (NaN) when the system starts at its final state.

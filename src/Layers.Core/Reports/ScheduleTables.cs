@@ -73,12 +73,9 @@ public static class ScheduleTables
 
         // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
         var amountFloor = NegligibleFloor.AmountPerArea(result);
-        string Received(double value) => NegligibleFloor.Hides(value, amountFloor)
-            ? "< " + DisplayFormat.Floor(format.MassPerAreaValue(amountFloor))
-            : format.MassPerAreaValue(value);
-        string AtEnd(double value, FaceCondition face) => NegligibleFloor.Hides(value, NegligibleFloor.ConcentrationIn(result, face))
-            ? "< " + DisplayFormat.Floor(format.MediumConcentrationValue(NegligibleFloor.ConcentrationIn(result, face)!.Value, face))
-            : format.MediumConcentrationValue(value, face);
+        string Received(double value) => DisplayFormat.OrFloor(value, amountFloor, format.MassPerAreaValue);
+        string AtEnd(double value, FaceCondition face) =>
+            DisplayFormat.OrFloor(value, NegligibleFloor.ConcentrationIn(result, face), concentration => format.MediumConcentrationValue(concentration, face));
         var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
         [
             outcome.Period.Label,
@@ -131,9 +128,8 @@ public static class ScheduleTables
 
         // A flux that would move less than the floor amount over the whole period is shown as "< floor".
         var amountFloor = NegligibleFloor.AmountPerArea(result);
-        string Flux(double value, double periodSeconds) => NegligibleFloor.Hides(value, amountFloor / periodSeconds)
-            ? "< " + DisplayFormat.Floor(DisplayFormat.Number(display.Flux.FromSi(amountFloor / periodSeconds)))
-            : DisplayFormat.Number(display.Flux.FromSi(value));
+        string Flux(double value, double periodSeconds) =>
+            DisplayFormat.OrFloor(value, amountFloor / periodSeconds, flux => DisplayFormat.Number(display.Flux.FromSi(flux)));
         var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
         [
             outcome.Period.Label,

@@ -40,7 +40,7 @@ internal sealed class SamplingEvents : IStateEvents
         }
 
         _initialState = model.InitialState;
-        _layerChanges = simulation.Schedule?.Periods.Where(period => period.StartSeconds > 0 && (period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0)).ToArray() ?? [];
+        _layerChanges = simulation.Schedule?.Periods.Where(period => period.StartSeconds > 0 && period.ChangesLayers).ToArray() ?? [];
         TimesSeconds = _sides.Where(sampled => sampled is not null).SelectMany(sampled => sampled!.Sampling.TimesSeconds)
             .Concat(_renewed.Where(renewed => renewed is not null).SelectMany(renewed => renewed!.TimesSeconds))
             .Concat(_layerChanges.Select(period => period.StartSeconds))

@@ -74,7 +74,7 @@ public static class ScheduleAnalysis
     {
         var moves = new List<LayerMove>();
         var layers = simulation.Stack.Layers;
-        foreach (var period in schedule.Periods.Where(period => period.RemovedLayers.Count > 0 || period.AppliedLayers.Count > 0))
+        foreach (var period in schedule.Periods.Where(period => period.ChangesLayers))
         {
             var before = At(series, period.StartSeconds);
             var off = schedule.LayersOffAt(period.StartSeconds * (1 - 1e-9));
@@ -183,8 +183,27 @@ public static class ScheduleAnalysis
         return scale == 0 ? 0 : Math.Abs(now - before) / scale;
     }
 
+    /// <summary>
+    /// The sample at a time, or null: a binary search, as the series is in ascending time and a schedule asks for some
+    /// twenty samples per period of a series that may hold thousands.
+    /// </summary>
     private static StateSample? At(IReadOnlyList<StateSample> series, double timeSeconds)
-        => series.FirstOrDefault(sample => Math.Abs(sample.TimeSeconds - timeSeconds) <= 1e-9 * timeSeconds);
+    {
+        var (low, high) = (0, series.Count - 1);
+        while (low <= high)
+        {
+            var middle = (low + high) / 2;
+            var time = series[middle].TimeSeconds;
+            if (Math.Abs(time - timeSeconds) <= 1e-9 * timeSeconds)
+            {
+                return series[middle];
+            }
+
+            (low, high) = time < timeSeconds ? (middle + 1, high) : (low, middle - 1);
+        }
+
+        return null;
+    }
 
     private static FaceSample? Face(StateSample sample, Side side) => side == Side.Left ? sample.Left : sample.Right;
 }

@@ -176,7 +176,7 @@ public static class Simulator
         var faces = new[] { simulation.Left, simulation.Right };
         if (!simulation.IsClosed
             || (faces.OfType<CompartmentFace>().All(compartment => compartment.Sampling is null)
-                && !(simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right) || schedule.ChangesLayers)))
+                && simulation.Schedule is not { ChangesMass: true })
             || faces.OfType<CompartmentFace>().Any(compartment => compartment.RemovalRatePerSecond > 0))
         {
             return null;

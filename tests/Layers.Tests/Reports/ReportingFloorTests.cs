@@ -47,4 +47,19 @@ public sealed class ReportingFloorTests
         Tolerance.Relative(floor * 1e5, shownFloor, 0.5, "floor");
         Tolerance.Relative(late * 1e5, double.Parse(table.Rows[1][received], CultureInfo.InvariantCulture), 1e-3, "Q at 1 h");
     }
+
+    [Theory]
+    [InlineData(1.4e-5, 2e-5)]
+    [InlineData(1e-5, 1e-5)]
+    [InlineData(1.0000000000000002e-5, 1e-5)]
+    [InlineData(9.2e-7, 1e-6)]
+    [InlineData(3, 3)]
+    public void A_floor_is_shown_rounded_up_so_that_less_than_it_stays_true(double floor, double shown)
+    {
+        // Common practice, no source: a bound stated to one digit is rounded outward.
+        var rounded = NegligibleFloor.RoundedUp(floor);
+
+        Tolerance.Relative(shown, rounded, 1e-12, "floor as shown");
+        Assert.True(rounded >= floor * (1 - 1e-9));
+    }
 }

@@ -51,4 +51,21 @@ public static class NegligibleFloor
     /// estimate counts it as negligible), so reports for people show "&lt; floor" in its place, not its digits.
     /// </summary>
     public static bool Hides(double value, double? floor) => floor is { } level && value != 0 && Math.Abs(value) < level;
+
+    /// <summary>
+    /// The floor as people read it in "&lt; floor": rounded up to one significant digit, so that the statement stays
+    /// true for every value it hides (1.4E-05 reads "&lt; 2E-05", not "&lt; 1E-05"); a floor that is one digit already,
+    /// up to round-off, stays as it is.
+    /// </summary>
+    /// <param name="floor">The floor in the unit it is shown in, &gt; 0.</param>
+    public static double RoundedUp(double floor)
+    {
+        if (!(floor > 0) || !double.IsFinite(floor))
+        {
+            return floor;
+        }
+
+        var magnitude = Math.Pow(10, Math.Floor(Math.Log10(floor)));
+        return Math.Ceiling((floor / magnitude) - 1e-9) * magnitude;
+    }
 }
