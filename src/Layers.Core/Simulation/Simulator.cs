@@ -199,7 +199,7 @@ public static class Simulator
         SimulationCase simulation, double? massLeftAfterSamplingPerArea = null)
     {
         var model = DiscreteModel.Build(simulation.WithFirstStageDiffusivities());
-        var stages = LayerPresence.Split(StageSystem.For(simulation, model.Grid, model.System), simulation);
+        var stages = ScheduleStages.Split(StageSystem.For(simulation, model.Grid, model.System), simulation, model.System);
         var final = FinalStateTarget.ForStages(model, stages, massLeftAfterSamplingPerArea)
             .WithLayersOff(simulation, model.System, simulation.Schedule?.LayersOffAtEnd ?? new HashSet<int>(), massLeftAfterSamplingPerArea);
         var sampling = new SamplingEvents(model);
