@@ -72,11 +72,11 @@ internal static class ScheduleMedia
     private static Func<FaceCondition, FaceCondition>? Read(JsonFields fields, FaceCondition face, IReadOnlyList<TemperatureStage>? stages, ReadContext context)
     {
         var side = fields.Member("face")!.Value.GetString()!;
-        var (allowed, other) = face is BathFace ? (BathKeys, "a compartment") : (CompartmentKeys, "a bath");
+        var (allowed, other, own) = face is BathFace ? (BathKeys, "a compartment", "a bath") : (CompartmentKeys, "a bath", "a compartment");
         var misplaced = Keys.Where(key => fields.Has(key) && !allowed.Contains(key)).ToArray();
         foreach (var key in misplaced)
         {
-            fields.Error(key, $"is for {other}; the {side} face is {face.KindName}, whose fresh portion may give {string.Join(", ", allowed.Skip(1))}");
+            fields.Error(key, $"is for {other}; the {side} face holds {own}, whose fresh portion may give {string.Join(", ", allowed.Skip(1))}");
         }
 
         if (misplaced.Length > 0 || face is not (BathFace or CompartmentFace))

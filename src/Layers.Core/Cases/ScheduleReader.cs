@@ -115,11 +115,35 @@ internal static class ScheduleReader
             }
         }
 
+        ShortPeriods(periods, written, context);
         var stages = Stages(periods, written, context);
         return context.Errors.Count == errorsBefore && periods.Count > 0
             ? new Result(new ContactSchedule(periods), named, stages, written)
             : new Result(null, named, null, []);
     }
+
+    /// <summary>
+    /// A period shorter than <see cref="ShortestPeriodFraction"/> of the whole schedule is refused at its duration: the
+    /// run finds each period's results by its end time to 1e-9 of the time, so a shorter one could not be told from its
+    /// neighbours. Reported once per period as written, not once per repetition.
+    /// </summary>
+    private static void ShortPeriods(List<SchedulePeriod> periods, List<Written> written, ReadContext context)
+    {
+        if (periods.Count == 0)
+        {
+            return;
+        }
+
+        var total = periods[^1].EndSeconds;
+        foreach (var period in written.Where(period => period.DurationSeconds < ShortestPeriodFraction * total).Distinct())
+        {
+            context.Errors.Add(new CaseError(period.Path + ".duration", string.Create(CultureInfo.InvariantCulture,
+                $"is {period.DurationSeconds:G3} s, less than {ShortestPeriodFraction:G1} of the whole schedule ({total:G3} s), too short for the run to tell it from its neighbours; merge it into the next period or run that part as a case of its own")));
+        }
+    }
+
+    /// <summary>The shortest period a schedule may hold, as a fraction of the whole schedule.</summary>
+    public const double ShortestPeriodFraction = 1e-6;
 
     /// <summary>
     /// The stages the periods' temperatures give: a period without one keeps the temperature of the period before,
