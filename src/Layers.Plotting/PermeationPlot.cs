@@ -28,7 +28,8 @@ internal static class PermeationPlot
         var duration = simulation.DurationSeconds;
         var lag = permeation?.LagTimeSeconds;
 
-        var model = PlotFrame.Create(simulation.Title, Subtitle(result, receiver, time.Unit, massUnit), options);
+        var subtitle = Subtitle(result, receiver, time.Unit, massUnit);
+        var model = PlotFrame.Create(simulation.Title, PeriodMarks.Text(result, time) is { } marks ? subtitle.Append(marks) : subtitle, options);
         model.Axes.Add(time.Axis);
         var yAxis = PlotFrame.Linear(AxisPosition.Left, $"Cumulative amount received per area ({DisplayText.Unit(massUnit)})");
         model.Axes.Add(yAxis);
@@ -44,6 +45,7 @@ internal static class PermeationPlot
             .Where(pair => pair.Face is not null)
             .Select(pair => new DataPoint(time.Unit.FromSi(pair.TimeSeconds), massUnit.FromSi(pair.Face!.TransferredIntoMediumPerArea))));
         model.Series.Add(received);
+        PeriodMarks.Draw(model, result, time);
 
         var asymptote = new LineSeries
         {
@@ -131,7 +133,9 @@ internal static class PermeationPlot
 
     private static IEnumerable<string> Subtitle(SimulationResult result, string receiver, UnitDefinition timeUnit, UnitDefinition massUnit)
     {
-        yield return $"Cumulative amount received by {receiver}, with the steady-state asymptote";
+        yield return result.Case.Schedule is { ChangesMedia: true }
+            ? $"Cumulative amount received by {receiver}"
+            : $"Cumulative amount received by {receiver}, with the steady-state asymptote";
         if (result.Permeation is not { } permeation)
         {
             yield break;
@@ -142,6 +146,7 @@ internal static class PermeationPlot
         var duration = result.Case.DurationSeconds;
         var lagText = permeation.LagTimeSeconds switch
         {
+            null when result.Case.Schedule is { ChangesMedia: true } => "no lag time: the schedule changes a medium during the run",
             null => $"steady state not reached within {DisplayText.Time(result.FinalState.HorizonSeconds, result.Case.Display.Time)}: no lag time",
             { } lag when lag >= duration => $"lag time {DisplayText.Time(lag, result.Case.Display.Time)}, beyond the {DisplayText.Time(duration, result.Case.Display.Time)} simulated",
             { } lag => $"lag time {DisplayText.Time(lag, result.Case.Display.Time)}",
@@ -149,6 +154,7 @@ internal static class PermeationPlot
         var analytic = permeation.AnalyticLagTimeSeconds is { } reference
             ? $" (single membrane, L\u00B2/6D: {DisplayText.Time(reference, result.Case.Display.Time)})"
             : string.Empty;
-        yield return $"steady flux J = {fluxText};  {lagText}{analytic}";
+        var which = result.Case.Schedule is { ChangesMedia: true } ? "steady flux with the last period's media" : "steady flux";
+        yield return $"{which} J = {fluxText};  {lagText}{analytic}";
     }
 }

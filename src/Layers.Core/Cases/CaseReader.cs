@@ -164,6 +164,7 @@ public static class CaseReader
         {
             ScheduleReader.CheckFaces(read.NamedFaces, left, right, context);
             contactSchedule = layersRead ? ScheduleLayerChanges.Resolve(read, layers, left, right, context) : null;
+            contactSchedule = ScheduleMedia.Resolve(contactSchedule, read, left, right, foodSettings?.Stages, context);
         }
 
         var permeationTest = PermeationTestReader.Read(root, context, fileName, right);

@@ -35,18 +35,27 @@ internal static class ScheduleReader
 
         /// <summary>The faces brought back into contact at the start, with their paths.</summary>
         public IReadOnlyList<(Side Side, string Path)> Opened { get; init; } = [];
+
+        /// <summary>
+        /// The renewals that give the fresh portion other properties (<c>{ "face": "right", "volume": "200 mL" }</c>),
+        /// read once the faces are (<see cref="ScheduleMedia"/>).
+        /// </summary>
+        public IReadOnlyList<(Side Side, JsonFields Fields)> NewProperties { get; init; } = [];
     }
 
     /// <summary>What <see cref="Read"/> found.</summary>
     /// <param name="Schedule">The schedule; null when it has errors.</param>
-    /// <param name="NamedFaces">Every face a period renews, with its path (also when other parts have errors).</param>
+    /// <param name="NamedFaces">
+    /// Every face a period renews, with its path and whether the renewal gives the fresh portion other properties (also
+    /// when other parts have errors).
+    /// </param>
     /// <param name="Stages">
     /// The time-temperature stages the periods give when some period gives a temperature (consecutive periods at one
     /// temperature make one stage); null when none does.
     /// </param>
     /// <param name="PerPeriod">For each period run, the period as written (its layer changes by name, with paths).</param>
     public sealed record Result(
-        ContactSchedule? Schedule, IReadOnlyList<(Side Side, string Path)> NamedFaces, IReadOnlyList<TemperatureStage>? Stages, IReadOnlyList<Written> PerPeriod);
+        ContactSchedule? Schedule, IReadOnlyList<(Side Side, string Path, bool NewProperties)> NamedFaces, IReadOnlyList<TemperatureStage>? Stages, IReadOnlyList<Written> PerPeriod);
 
     /// <summary>The schedule, the faces it renews and the stages its temperatures give; null when the case has no schedule.</summary>
     public static Result? Read(JsonFields root, ReadContext context)
@@ -66,7 +75,7 @@ internal static class ScheduleReader
         var errorsBefore = context.Errors.Count;
         var periods = new List<SchedulePeriod>();
         var written = new List<Written>();
-        var named = new List<(Side, string)>();
+        var named = new List<(Side, string, bool)>();
         var start = 0.0;
         var index = 0;
         foreach (var element in array.EnumerateArray())
@@ -81,7 +90,8 @@ internal static class ScheduleReader
 
             var repeat = Repeat(entry, required: isBlock);
             var block = isBlock ? BlockPeriods(entry, context) : Period(entry, context, $"period {index}") is { } one ? [one] : [];
-            named.AddRange(block.SelectMany(period => period.Renewed));
+            named.AddRange(block.SelectMany(period => period.Renewed.Select(face =>
+                (face.Side, face.Path, period.NewProperties.Any(renewal => renewal.Fields.Path == face.Path)))));
             if (repeat is not { } count || block.Count == 0)
             {
                 continue;
@@ -105,11 +115,35 @@ internal static class ScheduleReader
             }
         }
 
+        ShortPeriods(periods, written, context);
         var stages = Stages(periods, written, context);
         return context.Errors.Count == errorsBefore && periods.Count > 0
             ? new Result(new ContactSchedule(periods), named, stages, written)
             : new Result(null, named, null, []);
     }
+
+    /// <summary>
+    /// A period shorter than <see cref="ShortestPeriodFraction"/> of the whole schedule is refused at its duration: the
+    /// run finds each period's results by its end time to 1e-9 of the time, so a shorter one could not be told from its
+    /// neighbours. Reported once per period as written, not once per repetition.
+    /// </summary>
+    private static void ShortPeriods(List<SchedulePeriod> periods, List<Written> written, ReadContext context)
+    {
+        if (periods.Count == 0)
+        {
+            return;
+        }
+
+        var total = periods[^1].EndSeconds;
+        foreach (var period in written.Where(period => period.DurationSeconds < ShortestPeriodFraction * total).Distinct())
+        {
+            context.Errors.Add(new CaseError(period.Path + ".duration", string.Create(CultureInfo.InvariantCulture,
+                $"is {period.DurationSeconds:G3} s, less than {ShortestPeriodFraction:G1} of the whole schedule ({total:G3} s), too short for the run to tell it from its neighbours; merge it into the next period or run that part as a case of its own")));
+        }
+    }
+
+    /// <summary>The shortest period a schedule may hold, as a fraction of the whole schedule.</summary>
+    public const double ShortestPeriodFraction = 1e-6;
 
     /// <summary>
     /// The stages the periods' temperatures give: a period without one keeps the temperature of the period before,
@@ -152,11 +186,11 @@ internal static class ScheduleReader
 
     /// <summary>
     /// Checks that each face a period renews holds a medium that can be replaced: a compartment without sampling or a
-    /// solubility of its own (a bath never changes, a closed face holds nothing).
+    /// solubility of its own, or a bath given new properties (a bath never changes otherwise, a closed face holds nothing).
     /// </summary>
-    public static void CheckFaces(IReadOnlyList<(Side Side, string Path)> named, FaceCondition left, FaceCondition right, ReadContext context)
+    public static void CheckFaces(IReadOnlyList<(Side Side, string Path, bool NewProperties)> named, FaceCondition left, FaceCondition right, ReadContext context)
     {
-        foreach (var (side, path) in named)
+        foreach (var (side, path, newProperties) in named)
         {
             var face = side == Side.Left ? left : right;
             var problem = face switch
@@ -164,8 +198,9 @@ internal static class ScheduleReader
                 CompartmentFace { Sampling: not null } => "its compartment is sampled, and renewing a sampled compartment is not supported; give one or the other",
                 CompartmentFace { SolubilityKgPerCubicMeter: not null } => "its compartment has a solubility, and renewing a medium with undissolved substance is not supported",
                 CompartmentFace => null,
-                BathFace => "it is a bath, whose concentration never changes; only a compartment's medium can be renewed",
-                _ => $"it is {face.KindName}; only a compartment's medium can be renewed",
+                BathFace when newProperties => null,
+                BathFace => "it is a bath, whose concentration never changes unless the renewal gives it another, e.g. { \"face\": \"left\", \"concentration\": \"2 mg/mL\" }",
+                _ => $"it is {face.KindName}; only a compartment's medium, or a bath's with new properties, can be renewed",
             };
             if (problem is not null)
             {
@@ -224,15 +259,90 @@ internal static class ScheduleReader
     {
         var name = period.Text("name") ?? defaultName;
         var duration = ReadContext.Positive(period, "duration", Dimension.Time, required: true);
-        var renewed = Faces(period, "renew", "faces whose medium is replaced by a fresh one at the period's start", context);
+        var renewals = Renewals(period, context);
+        var renewed = renewals?.Select(renewal => (renewal.Side, renewal.Path)).ToList();
         var closed = Faces(period, "close", "faces whose medium is taken out of contact at the period's start", context);
         var opened = Faces(period, "open", "faces whose medium is brought back into contact at the period's start", context);
         var temperature = ReadContext.Positive(period, "temperature", Dimension.Temperature, required: false);
         var removed = LayerNames(period, "remove", context);
         var applied = LayerNames(period, "apply", context);
         return duration is { } seconds && renewed is not null && removed is not null && applied is not null && closed is not null && opened is not null
-            ? new Written(name, seconds, renewed, temperature, period.Path, removed, applied) { Closed = closed, Opened = opened }
+            ? new Written(name, seconds, renewed, temperature, period.Path, removed, applied)
+            {
+                Closed = closed,
+                Opened = opened,
+                NewProperties = [.. renewals!.Where(renewal => renewal.Fields is not null).Select(renewal => (renewal.Side, renewal.Fields!))],
+            }
             : null;
+    }
+
+    /// <summary>
+    /// <c>renew</c>: faces, each <c>"left"</c> or <c>"right"</c> for a fresh portion like the one before, or an object
+    /// <c>{ "face": "right", ... }</c> that gives the fresh portion other properties.
+    /// </summary>
+    private static List<(Side Side, string Path, JsonFields? Fields)>? Renewals(JsonFields period, ReadContext context)
+    {
+        if (period.Member("renew") is not { } array)
+        {
+            return [];
+        }
+
+        if (array.ValueKind != JsonValueKind.Array)
+        {
+            period.Error("renew", $"expected an array of faces whose medium is replaced by a fresh one at the period's start, e.g. [\"right\"] or [{{ \"face\": \"right\", \"volume\": \"200 mL\" }}]; found {JsonFields.Describe(array)}");
+            return null;
+        }
+
+        var renewals = new List<(Side, string, JsonFields?)>();
+        var index = 0;
+        foreach (var element in array.EnumerateArray())
+        {
+            var path = $"{period.PathOf("renew")}[{index++}]";
+            if (element.ValueKind != JsonValueKind.Object)
+            {
+                if (FaceSide(element, path, context) is not { } side)
+                {
+                    return null;
+                }
+
+                renewals.Add((side, path, null));
+                continue;
+            }
+
+            if (JsonFields.Open(element, path, context.Errors, ScheduleMedia.Keys) is not { } fields)
+            {
+                return null;
+            }
+
+            if (!fields.Has("face"))
+            {
+                fields.Error("face", "is required: \"left\" or \"right\", the face whose medium is renewed");
+                return null;
+            }
+
+            if (FaceSide(fields.Member("face")!.Value, fields.PathOf("face"), context) is not { } named)
+            {
+                return null;
+            }
+
+            renewals.Add((named, path, fields));
+        }
+
+        return renewals;
+    }
+
+    private static Side? FaceSide(JsonElement element, string path, ReadContext context)
+    {
+        switch (element.ValueKind == JsonValueKind.String ? element.GetString() : null)
+        {
+            case "left":
+                return Side.Left;
+            case "right":
+                return Side.Right;
+            default:
+                context.Errors.Add(new CaseError(path, $"expected \"left\" or \"right\"; found {JsonFields.Describe(element)}"));
+                return null;
+        }
     }
 
     private static List<(string, string)>? LayerNames(JsonFields period, string key, ReadContext context)
@@ -283,18 +393,12 @@ internal static class ScheduleReader
         foreach (var element in array.EnumerateArray())
         {
             var path = $"{period.PathOf(key)}[{index++}]";
-            switch (element.ValueKind == JsonValueKind.String ? element.GetString() : null)
+            if (FaceSide(element, path, context) is not { } side)
             {
-                case "left":
-                    faces.Add((Side.Left, path));
-                    break;
-                case "right":
-                    faces.Add((Side.Right, path));
-                    break;
-                default:
-                    context.Errors.Add(new CaseError(path, $"expected \"left\" or \"right\"; found {JsonFields.Describe(element)}"));
-                    return null;
+                return null;
             }
+
+            faces.Add((side, path));
         }
 
         return faces;

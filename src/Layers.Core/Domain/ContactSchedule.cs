@@ -59,8 +59,48 @@ public sealed record ContactSchedule(IReadOnlyList<SchedulePeriod> Periods)
     /// <summary>True when some period changes the stack or its contacts (layers off or on, faces closed or opened).</summary>
     public bool ChangesContacts => Periods.Any(period => period.ChangesContacts);
 
-    /// <summary>The period starts at which the stack or its contacts change, s, ascending.</summary>
-    public IReadOnlyList<double> ContactChangeTimes => Periods.Where(period => period.ChangesContacts).Select(period => period.StartSeconds).ToArray();
+    /// <summary>
+    /// The period starts at which the discrete system changes (the stack, its contacts or a face's medium), s,
+    /// ascending.
+    /// </summary>
+    public IReadOnlyList<double> SystemChangeTimes => Periods.Where(period => period.ChangesSystem).Select(period => period.StartSeconds).ToArray();
+
+    /// <summary>True when some period brings a face medium with other properties than the one before.</summary>
+    public bool ChangesMedia => Periods.Any(period => period.NewMedia.Count > 0);
+
+    /// <summary>
+    /// The medium on a side during each period, in the order of <see cref="Periods"/>: the case's own until a period
+    /// brings one with other properties (<see cref="SchedulePeriod.NewMedia"/>).
+    /// </summary>
+    /// <param name="side">The face.</param>
+    /// <param name="first">The medium the case writes on that face, which stands from t = 0.</param>
+    public IReadOnlyList<FaceCondition> MediaByPeriod(Side side, FaceCondition first)
+    {
+        var media = new FaceCondition[Periods.Count];
+        var medium = first;
+        for (var p = 0; p < media.Length; p++)
+        {
+            medium = Periods[p].NewMedia.GetValueOrDefault(side, medium);
+            media[p] = medium;
+        }
+
+        return media;
+    }
+
+    /// <summary>
+    /// The medium on a side during the period that runs at <paramref name="timeSeconds"/>, the later one at a boundary
+    /// (the medium a period brings stands from its start).
+    /// </summary>
+    public FaceCondition MediumFrom(Side side, FaceCondition first, double timeSeconds)
+    {
+        var medium = first;
+        foreach (var period in Periods.TakeWhile(period => period.StartSeconds <= timeSeconds * (1 + 1e-12)))
+        {
+            medium = period.NewMedia.GetValueOrDefault(side, medium);
+        }
+
+        return medium;
+    }
 
     /// <summary>The faces the schedule holds closed during the period that runs at <paramref name="timeSeconds"/> (the later one at a boundary).</summary>
     public IReadOnlySet<Side> FacesClosedAt(double timeSeconds)

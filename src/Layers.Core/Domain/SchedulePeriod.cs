@@ -36,11 +36,24 @@ public sealed record SchedulePeriod(
     /// <summary>The faces whose medium is brought back into contact at the start.</summary>
     public IReadOnlyList<Side> OpenedFaces { get; init; } = [];
 
+    /// <summary>
+    /// The faces whose fresh portion at the start has other properties than the medium before it (another volume, K,
+    /// film or fresh concentration; a bath at another level), with the medium that stands on the face from this period
+    /// on, until a later period brings another. A face whose fresh portion is like the one before is not listed.
+    /// </summary>
+    public IReadOnlyDictionary<Side, FaceCondition> NewMedia { get; init; } = new Dictionary<Side, FaceCondition>();
+
     /// <summary>True when layers are taken off or put on at the start.</summary>
     public bool ChangesLayers => RemovedLayers.Count > 0 || AppliedLayers.Count > 0;
 
     /// <summary>True when the stack or its contacts change at the start: layers off or on, faces closed or opened.</summary>
     public bool ChangesContacts => ChangesLayers || ClosedFaces.Count > 0 || OpenedFaces.Count > 0;
+
+    /// <summary>
+    /// True when the discrete system changes at the start: the contacts change (<see cref="ChangesContacts"/>) or a face
+    /// takes a medium with other properties.
+    /// </summary>
+    public bool ChangesSystem => ChangesContacts || NewMedia.Count > 0;
 
     /// <summary>End on the run's clock, s.</summary>
     public double EndSeconds => StartSeconds + DurationSeconds;

@@ -71,8 +71,18 @@ public sealed record SimulationCase
     /// <summary>Permeation metrics asked for by the case, or null.</summary>
     public PermeationTest? PermeationTest { get; init; }
 
-    /// <summary>The face condition on the given side.</summary>
+    /// <summary>The face condition on the given side, as the case writes it: the medium in contact from t = 0.</summary>
     public FaceCondition Face(Side side) => side == Side.Left ? Left : Right;
+
+    /// <summary>
+    /// The medium on a side at the end of the run: the one the case writes, or the last a schedule brings with other
+    /// properties.
+    /// </summary>
+    public FaceCondition FaceAtEnd(Side side) => Schedule is { } schedule ? schedule.MediaByPeriod(side, Face(side))[^1] : Face(side);
+
+    /// <summary>Every medium that stands on a side during the run, once each, the case's own first.</summary>
+    public IReadOnlyList<FaceCondition> MediaOn(Side side) =>
+        Schedule is { } schedule ? schedule.MediaByPeriod(side, Face(side)).Distinct().ToArray() : [Face(side)];
 
     /// <summary>True when no mass can enter or leave: no face is a bath.</summary>
     public bool IsClosed => !Left.IsUnlimited && !Right.IsUnlimited;

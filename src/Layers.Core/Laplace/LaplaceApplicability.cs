@@ -8,6 +8,8 @@ namespace Layers.Core.Laplace;
 /// </summary>
 public sealed class LaplaceApplicability
 {
+    private static readonly Side[] Sides = [Side.Left, Side.Right];
+
     private LaplaceApplicability(IReadOnlyList<string> reasons)
     {
         Reasons = reasons;
@@ -45,10 +47,16 @@ public sealed class LaplaceApplicability
             }
         }
 
-        if (simulation.Schedule is { } schedule && (schedule.Renews(Side.Left) || schedule.Renews(Side.Right)))
+        if (simulation.Schedule is { } schedule && Sides.Any(side => schedule.Renews(side) && simulation.Face(side) is CompartmentFace))
         {
             // A renewed medium is emptied at given times: a jump in the medium, as with sampling.
             reasons.Add("the schedule renews a compartment's medium at given times");
+        }
+
+        if (simulation.Schedule is { } levels && Sides.Any(side => levels.Renews(side) && simulation.Face(side) is BathFace))
+        {
+            // The transform holds one bath level for the whole run.
+            reasons.Add("the schedule changes a bath at given times");
         }
 
         if (simulation.Schedule is { ChangesLayers: true })

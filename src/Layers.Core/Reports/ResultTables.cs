@@ -1,5 +1,6 @@
 using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.Simulation;
 
 namespace Layers.Core.Reports;
 
@@ -75,9 +76,11 @@ public static class ResultTables
         AddTimes(rows, TimeSeriesCsv.FaceName(simulation.Right), final.RightCompartment, result, format);
         if (result.Permeation is { } permeation)
         {
-            Add("steady flux", format.Flux(Math.Abs(permeation.SteadyFluxKgPerSquareMeterSecond)));
+            Add(Simulator.LagTimeDefined(simulation) ? "steady flux" : "steady flux with the last period's media", format.Flux(Math.Abs(permeation.SteadyFluxKgPerSquareMeterSecond)));
             Add("flux at the end", format.Flux(permeation.FluxAtEndKgPerSquareMeterSecond));
-            Add("lag time", permeation.LagTimeSeconds is { } lag ? format.Time(lag) : "steady state not reached");
+            Add("lag time", permeation.LagTimeSeconds is { } lag
+                ? format.Time(lag)
+                : Simulator.LagTimeDefined(simulation) ? "steady state not reached" : "not defined: the schedule changes a medium during the run");
             if (permeation.AnalyticLagTimeSeconds is { } analytic)
             {
                 Add("lag time L^2/(6D)", format.Time(analytic));

@@ -53,7 +53,7 @@ public static class ScheduleTables
         var simulation = result.Case;
         var format = new DisplayFormat(simulation.Display);
         var media = schedule.Periods[0].Media;
-        var changes = schedule.Periods.Select(outcome => AtStart(simulation, outcome.Period)).ToList();
+        var changes = schedule.Periods.Select(outcome => AtStart(simulation, outcome.Period, format)).ToList();
         var anyChange = changes.Any(change => change.Length > 0);
         var headers = new List<string> { "period", $"from [{simulation.Display.Time.Symbol}]", $"to [{simulation.Display.Time.Symbol}]" };
         if (anyChange)
@@ -81,7 +81,7 @@ public static class ScheduleTables
             outcome.Period.Label,
             format.TimeValue(outcome.Period.StartSeconds),
             format.TimeValue(outcome.Period.EndSeconds),
-            .. anyChange ? [AtStart(simulation, outcome.Period)] : Array.Empty<string>(),
+            .. anyChange ? [AtStart(simulation, outcome.Period, format)] : Array.Empty<string>(),
             .. outcome.Media.SelectMany(medium => simulation.Face(medium.Side) is CompartmentFace face
                 ? new[] { Received(medium.ReceivedKgPerSquareMeter), AtEnd(medium.ConcentrationAtEndKgPerCubicMeter, face) }
                 : [Received(medium.ReceivedKgPerSquareMeter)]),
@@ -89,8 +89,11 @@ public static class ScheduleTables
         return new TextTable("Periods (amounts received during each period)", headers, rows);
     }
 
-    /// <summary>What changes at a period's start, in words: "simulant renewed", "matrix put on fresh", "matrix taken off".</summary>
-    private static string AtStart(SimulationCase simulation, SchedulePeriod period)
+    /// <summary>
+    /// What changes at a period's start, in words: "simulant renewed", "matrix put on fresh", "matrix taken off"; a fresh
+    /// portion with other properties is described in full.
+    /// </summary>
+    private static string AtStart(SimulationCase simulation, SchedulePeriod period, DisplayFormat format)
     {
         if (period.StartSeconds == 0)
         {
@@ -101,7 +104,9 @@ public static class ScheduleTables
         var parts = new List<string>();
         parts.AddRange(period.ClosedFaces.Select(side => $"{simulation.Face(side).MediumName} out of contact"));
         parts.AddRange(period.OpenedFaces.Select(side => $"{simulation.Face(side).MediumName} in contact again"));
-        parts.AddRange(period.Renewed.Select(side => $"{simulation.Face(side).MediumName} renewed"));
+        parts.AddRange(period.Renewed.Select(side => period.NewMedia.TryGetValue(side, out var medium)
+            ? $"{simulation.Face(side).MediumName} renewed as {StackText.Face(medium, format)}"
+            : $"{simulation.Face(side).MediumName} renewed"));
         if (period.AppliedLayers.Count > 0)
         {
             parts.Add($"{Names(period.AppliedLayers)} put on fresh");

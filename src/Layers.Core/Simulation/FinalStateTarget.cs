@@ -37,6 +37,12 @@ internal sealed class FinalStateTarget
     private SimulationCase? PartitionCase { get; init; }
 
     /// <summary>
+    /// The system and case of the run's end (its last stage), with the factor from the case's own u to the end's
+    /// (null when they are the same): the media in contact at the end read their concentrations through them.
+    /// </summary>
+    private (SimulationCase Case, DiffusionSystem System, double[]? ToEnd) End { get; init; }
+
+    /// <summary>
     /// The final state of a staged run: that of its last stage, whose partition coefficients (and D) hold from the
     /// end of the run on, with the node values in the case's own u = c/K, as observers read states.
     /// </summary>
@@ -66,6 +72,7 @@ internal sealed class FinalStateTarget
         {
             PartitionCase = last.Case,
             MassLeftAfterSamplingPerArea = target.MassLeftAfterSamplingPerArea,
+            End = (last.Case, last.System, factors),
         };
     }
 
@@ -86,6 +93,7 @@ internal sealed class FinalStateTarget
             return new FinalStateTarget(FinalStateKind.ClosedEquilibrium, values, null, equilibrium)
             {
                 MassLeftAfterSamplingPerArea = massLeftAfterSamplingPerArea,
+                End = (original, system, null),
             };
         }
 
@@ -104,7 +112,7 @@ internal sealed class FinalStateTarget
         var kind = original.IsClosed
             ? FinalStateKind.AllRemoved
             : steady.FluxKgPerSquareMeterSecond == 0 ? FinalStateKind.BathEquilibrium : FinalStateKind.SteadyPermeation;
-        return new FinalStateTarget(kind, values, steady, null);
+        return new FinalStateTarget(kind, values, steady, null) { End = (original, system, null) };
     }
 
     /// <summary>The content w of the cells that keep the undissolved excess at a capped equilibrium, spread by storage.</summary>
@@ -181,7 +189,7 @@ internal sealed class FinalStateTarget
             Array.Fill(values, closed.ContinuousVariable);
         }
 
-        foreach (var node in off.SelectMany(layer => LayerPresence.NodesOf(system, layer)))
+        foreach (var node in off.SelectMany(layer => ScheduleStages.NodesOf(system, layer)))
         {
             values[node] = 0;
         }
@@ -190,6 +198,7 @@ internal sealed class FinalStateTarget
         {
             PartitionCase = PartitionCase,
             MassLeftAfterSamplingPerArea = MassLeftAfterSamplingPerArea,
+            End = End,
         };
     }
 
@@ -206,16 +215,15 @@ internal sealed class FinalStateTarget
     }
 
     /// <summary>
-    /// Final concentration in a face medium, or null for a closed face, kg/m3; a compartment's through the node map of
-    /// the case's own system, whose u the node values are in.
+    /// Final concentration in the medium on a side at the end of the run, or null for a closed face, kg/m3; a
+    /// compartment's through the node map of the end's system, in whose variable its node value is turned first.
     /// </summary>
-    public double? MediumConcentration(DiffusionSystem system, FaceCondition face, Side side)
+    public double? MediumConcentration(Side side)
     {
-        ArgumentNullException.ThrowIfNull(system);
         var node = side == Side.Left ? 0 : NodeValues.Length - 1;
-        return face switch
+        return End.Case.Face(side) switch
         {
-            CompartmentFace => system.ConcentrationOf(node, NodeValues[node]),
+            CompartmentFace => End.System.ConcentrationOf(node, End.ToEnd is { } factors ? NodeValues[node] * factors[node] : NodeValues[node]),
             BathFace bath => bath.ConcentrationKgPerCubicMeter,
             _ => null,
         };

@@ -11,14 +11,15 @@ namespace Layers.Core.Simulation;
 /// </summary>
 internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
 {
-    private readonly double _toMassFraction;
+    private readonly double[] _toMassFraction;
     private readonly int _node;
     private readonly IReadOnlyList<StageSystem> _stages;
     private readonly double[] _stageEnds;
     private readonly StateMeasure _measure;
     private double _previousTime;
+    private int _stage;
 
-    private FoodConcentrationWatcher(int node, double toMassFraction, IReadOnlyList<StageSystem> stages, double[] levels)
+    private FoodConcentrationWatcher(int node, double[] toMassFraction, IReadOnlyList<StageSystem> stages, double[] levels)
     {
         _node = node;
         _toMassFraction = toMassFraction;
@@ -35,14 +36,25 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
     /// <summary>For each level, the time the food first reached it within the history (run clock, s), or null.</summary>
     public double?[] CrossingSeconds { get; }
 
-    /// <summary>Food concentration at the end of each stage, kg/kg.</summary>
-    public IReadOnlyList<double> StageEndValues => _stageEnds;
+    /// <summary>Food concentration at the end of the run, kg/kg.</summary>
+    public double FinalValue => _stageEnds[^1];
 
-    /// <summary>Node index of the food compartment.</summary>
-    public int Node => _node;
+    /// <summary>
+    /// Food concentration at a stage's end, kg/kg: the end of the stage of the run (stages split where a schedule changes
+    /// the system) that ends at <paramref name="endSeconds"/>.
+    /// </summary>
+    public double ValueAtStageEnd(double endSeconds)
+    {
+        for (var index = 0; index < _stages.Count; index++)
+        {
+            if (Math.Abs(endSeconds - _stages[index].EndSeconds) <= 1e-12 * endSeconds)
+            {
+                return _stageEnds[index];
+            }
+        }
 
-    /// <summary>Factor from the food node's u to its mass fraction: K / density.</summary>
-    public double ToMassFraction => _toMassFraction;
+        throw new ArgumentOutOfRangeException(nameof(endSeconds), endSeconds, "no stage of the run ends there");
+    }
 
     /// <inheritdoc />
     public bool WantsMoreTime => false;
@@ -57,12 +69,19 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
         var levels = settings.SpecificMigrationLimit is { } limit
             ? new[] { settings.DetectionLimit, limit }
             : new[] { settings.DetectionLimit };
-        return new FoodConcentrationWatcher(
-            model.System.CompartmentNode(settings.FoodSide), food.PartitionCoefficient / density, stages, levels);
+        var node = model.System.CompartmentNode(settings.FoodSide);
+
+        // The food's mass fraction is K u over the density in the stage's own variable, whatever portion of food is in
+        // contact: a state in the case's variable is turned into the stage's first.
+        var factors = stages.Select(stage => stage.System.PartitionCoefficient[node] * (stage.ToStage?[node] ?? 1) / density).ToArray();
+        return new FoodConcentrationWatcher(node, factors, stages, levels);
     }
 
-    /// <summary>The food's mass fraction for a state.</summary>
-    public double ValueOf(ReadOnlySpan<double> state) => state[_node] * _toMassFraction;
+    /// <summary>The food's mass fraction for a state at the end of the run (in the last stage's portion of food).</summary>
+    public double ValueAtEnd(ReadOnlySpan<double> state) => state[_node] * _toMassFraction[^1];
+
+    /// <summary>The food's mass fraction for a state in the stage the watcher is in.</summary>
+    private double ValueOf(ReadOnlySpan<double> state) => state[_node] * _toMassFraction[_stage];
 
     /// <inheritdoc />
     public void OnOutput(double timeSeconds, ReadOnlySpan<double> state, BathTotals bathInflow)
@@ -89,6 +108,11 @@ internal sealed class FoodConcentrationWatcher : ITimeLoopObserver
         if (_previousTime >= end * (1 - 1e-12))
         {
             return;
+        }
+
+        while (_stage < _stages.Count - 1 && timeSeconds > _stages[_stage].EndSeconds * (1 + 1e-12))
+        {
+            _stage++;
         }
 
         var value = ValueOf(state);

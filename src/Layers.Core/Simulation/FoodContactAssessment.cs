@@ -30,9 +30,9 @@ internal static class FoodContactAssessment
         ArgumentNullException.ThrowIfNull(model);
         var (grid, own, initial) = (model.Grid, model.System, model.InitialState);
         var settings = simulation.FoodContact!;
-        var food = (CompartmentFace)simulation.Face(settings.FoodSide);
+        var food = (CompartmentFace)simulation.FaceAtEnd(settings.FoodSide);
         var density = food.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
-        var final = watcher.StageEndValues[^1];
+        var final = watcher.FinalValue;
         var foodMassPerArea = food.VolumePerAreaMeters * density;
         var detection = watcher.CrossingSeconds[0];
         var limit = watcher.Levels.Length > 1 ? watcher.CrossingSeconds[1] : null;
@@ -67,7 +67,7 @@ internal static class FoodContactAssessment
     {
         var outcome = StagedIntegration.Run(
             stages, start, [], 0, (stage, first) => Simulator.InitialStep(stage.Case, grid, first), simulation.Numerics.Solver, NullObserver.Instance, cancellation: cancellation);
-        return outcome.Statistics.StopReason == StopReason.Completed ? watcher.ValueOf(outcome.FinalState) : double.NaN;
+        return outcome.Statistics.StopReason == StopReason.Completed ? watcher.ValueAtEnd(outcome.FinalState) : double.NaN;
     }
 
     private static TestComparison Compare(
@@ -151,7 +151,7 @@ internal static class FoodContactAssessment
                 .Select((layer, layerIndex) => (layer.Name, stage.LayerPartitionOf(layerIndex, layer.PartitionCoefficient)))
                 .Append((food.Name, stage.FacePartitionOf(settings.FoodSide, food.PartitionCoefficient)))
                 .ToArray();
-            reports.Add(new StageReport(stage.Name, start, start + stage.DurationSeconds, stage.TemperatureKelvin, values, watcher.StageEndValues[index])
+            reports.Add(new StageReport(stage.Name, start, start + stage.DurationSeconds, stage.TemperatureKelvin, values, watcher.ValueAtStageEnd(start + stage.DurationSeconds))
             {
                 Partitions = partitions,
             });

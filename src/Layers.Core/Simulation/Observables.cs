@@ -17,11 +17,11 @@ internal sealed class Observables
     private readonly double _initialDistance;
     private readonly bool _startsAtFinalState;
     private readonly SamplingEvents? _sampling;
-    private readonly FaceFlux _flux;
+    private readonly FaceReadings _readings;
 
     public Observables(DiscreteModel model, IReadOnlyList<StageSystem> stages, FinalStateTarget final, SamplingEvents? sampling = null)
     {
-        _flux = new FaceFlux(stages);
+        _readings = new FaceReadings(stages);
         var system = model.System;
         ReadOnlySpan<double> initialState = model.InitialState;
         _sampling = sampling;
@@ -138,12 +138,12 @@ internal sealed class Observables
                 + (_sampling?.RemovedPerArea(side) ?? 0)
                 - bathInflow;
             return new FaceSample(
-                transferred, _system.ConcentrationOf(node, state[node]), _flux.IntoMedium(side, time, state), CompartmentFraction(side, state));
+                transferred, _readings.InMedium(side, time, state)!.Value, _readings.IntoMedium(side, time, state), CompartmentFraction(side, state));
         }
 
         // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
-        return _case.Face(side) is BathFace bath
-            ? new FaceSample(0 - bathInflow, bath.ConcentrationKgPerCubicMeter, _flux.IntoMedium(side, time, state), null)
+        return _case.Face(side) is BathFace
+            ? new FaceSample(0 - bathInflow, _readings.InMedium(side, time, state)!.Value, _readings.IntoMedium(side, time, state), null)
             : null;
     }
 

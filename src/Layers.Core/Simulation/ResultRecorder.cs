@@ -109,8 +109,8 @@ internal sealed class ResultRecorder : ITimeLoopObserver
     public FinalStateSummary Summary(double horizonSeconds, double? lastSampleSeconds = null) => new(
         _final.Kind,
         Enumerable.Range(0, _case.Stack.Count).Select(layer => _final.LayerEdges(_case, layer)).ToArray(),
-        _final.MediumConcentration(_system, _case.Left, Side.Left),
-        _final.MediumConcentration(_system, _case.Right, Side.Right),
+        _final.MediumConcentration(Side.Left),
+        _final.MediumConcentration(Side.Right),
         Times(_systemTracker)!,
         Times(_leftTracker),
         Times(_rightTracker),

@@ -33,9 +33,9 @@ internal sealed class SamplingEvents : IStateEvents
                 _sides[(int)side] = new Sampled(compartment, sampling, system.CompartmentNode(side));
             }
 
-            if (simulation.Face(side) is CompartmentFace renewable && simulation.Schedule is { } schedule && schedule.Renews(side))
+            if (simulation.Face(side) is CompartmentFace && simulation.Schedule is { } schedule && schedule.Renews(side))
             {
-                _renewed[(int)side] = new Renewed(renewable, schedule.RenewalTimes(side), system.CompartmentNode(side));
+                _renewed[(int)side] = new Renewed(Portions(schedule, side, simulation.Face(side)), system.CompartmentNode(side));
             }
         }
 
@@ -73,7 +73,7 @@ internal sealed class SamplingEvents : IStateEvents
             // on already is replaced: the old one leaves with its content).
             foreach (var change in period.RemovedLayers.Concat(period.AppliedLayers))
             {
-                foreach (var node in LayerPresence.NodesOf(_system, change.Layer))
+                foreach (var node in ScheduleStages.NodesOf(_system, change.Layer))
                 {
                     _layersRemovedPerArea[(int)change.Side] += _system.Capacity[node] * state[node];
                     state[node] = 0;
@@ -82,7 +82,7 @@ internal sealed class SamplingEvents : IStateEvents
 
             foreach (var change in period.AppliedLayers)
             {
-                foreach (var node in LayerPresence.NodesOf(_system, change.Layer))
+                foreach (var node in ScheduleStages.NodesOf(_system, change.Layer))
                 {
                     state[node] = _initialState[node];
                     _layersRemovedPerArea[(int)change.Side] -= _system.Capacity[node] * state[node];
@@ -97,14 +97,15 @@ internal sealed class SamplingEvents : IStateEvents
                 continue;
             }
 
-            var compartment = renewed.Compartment;
-            var concentration = _system.ConcentrationOf(renewed.Node, state[renewed.Node]);
-            var fresh = compartment.InitialConcentrationKgPerCubicMeter;
-            renewed.Replaced.Add((timeSeconds, concentration));
-            renewed.RemovedPerArea += (concentration - fresh) * compartment.VolumePerAreaMeters;
-
-            // c is proportional to the node's u (c = K u), so the fresh portion's u is c_fresh over c at u = 1.
-            state[renewed.Node] = fresh == 0 ? 0 : fresh / _system.ConcentrationOf(renewed.Node, 1);
+            // The node's u is in the case's own variable, whose storage times u is the content whatever portion is in
+            // contact: the old portion leaves with its content, the fresh one brings c_fresh over its own volume.
+            var (_, old, fresh) = renewed.Portions.First(portion => Math.Abs(portion.TimeSeconds - timeSeconds) <= 1e-9 * portion.TimeSeconds);
+            var storage = _system.Capacity[renewed.Node];
+            var content = storage * state[renewed.Node];
+            var brought = fresh.InitialMassPerArea;
+            renewed.Replaced.Add((timeSeconds, content / old.VolumePerAreaMeters));
+            renewed.RemovedPerArea += content - brought;
+            state[renewed.Node] = brought == 0 ? 0 : brought / storage;
         }
 
         foreach (var sampled in _sides)
@@ -122,11 +123,21 @@ internal sealed class SamplingEvents : IStateEvents
         }
     }
 
-    private sealed class Renewed(CompartmentFace compartment, IReadOnlyList<double> timesSeconds, int node)
+    /// <summary>Each renewal of the medium on a side: its time, the portion that leaves and the fresh one that comes.</summary>
+    private static (double TimeSeconds, CompartmentFace Old, CompartmentFace Fresh)[] Portions(ContactSchedule schedule, Side side, FaceCondition first)
     {
-        public CompartmentFace Compartment { get; } = compartment;
+        var media = schedule.MediaByPeriod(side, first);
+        return Enumerable.Range(1, schedule.Periods.Count - 1)
+            .Where(p => schedule.Periods[p].Renewed.Contains(side))
+            .Select(p => (schedule.Periods[p].StartSeconds, (CompartmentFace)media[p - 1], (CompartmentFace)media[p]))
+            .ToArray();
+    }
 
-        public IReadOnlyList<double> TimesSeconds { get; } = timesSeconds;
+    private sealed class Renewed((double TimeSeconds, CompartmentFace Old, CompartmentFace Fresh)[] portions, int node)
+    {
+        public (double TimeSeconds, CompartmentFace Old, CompartmentFace Fresh)[] Portions { get; } = portions;
+
+        public IEnumerable<double> TimesSeconds => Portions.Select(portion => portion.TimeSeconds);
 
         public int Node { get; } = node;
 

@@ -23,8 +23,10 @@ public static class ScheduleAnalysis
 
         var outcomes = new List<PeriodOutcome>();
         var start = series[0];
-        foreach (var period in schedule.Periods)
+        var mediaBySide = new[] { schedule.MediaByPeriod(Side.Left, simulation.Left), schedule.MediaByPeriod(Side.Right, simulation.Right) };
+        for (var p = 0; p < schedule.Periods.Count; p++)
         {
+            var period = schedule.Periods[p];
             if (At(series, period.EndSeconds) is not { } end)
             {
                 return null;
@@ -34,7 +36,7 @@ public static class ScheduleAnalysis
             foreach (var side in new[] { Side.Left, Side.Right })
             {
                 // A bath's amounts are as telling as a compartment's (the body a patch delivers into); its concentration is its own.
-                if (simulation.Face(side) is { IsOpen: true } face && Face(end, side) is { } atEnd && Face(start, side) is { } atStart)
+                if (mediaBySide[(int)side][p] is { IsOpen: true } face && Face(end, side) is { } atEnd && Face(start, side) is { } atStart)
                 {
                     var fresh = face is CompartmentFace && (period.StartSeconds == 0 || period.Renewed.Contains(side));
                     var concentration = atEnd.ConcentrationKgPerCubicMeter;
@@ -92,7 +94,11 @@ public static class ScheduleAnalysis
         return moves;
     }
 
-    /// <summary>Each renewed medium and the net mass its replaced portions took away: V (c - c_fresh) per area at each renewal.</summary>
+    /// <summary>
+    /// Each renewed medium and the net mass its replaced portions took away: at each renewal, what the portion leaving
+    /// held, V c per area, less what the fresh one brings, V' c_fresh per area (the same portion again, or one with other
+    /// properties).
+    /// </summary>
     private static List<RenewedMedium> Renewed(SimulationCase simulation, ContactSchedule schedule, IReadOnlyList<StateSample> series)
     {
         var result = new List<RenewedMedium>();
@@ -103,11 +109,12 @@ public static class ScheduleAnalysis
                 continue;
             }
 
-            var times = schedule.RenewalTimes(side);
-            var carried = times.Sum(time => At(series, time) is { } sample && Face(sample, side) is { } face
-                ? (face.ConcentrationKgPerCubicMeter - compartment.InitialConcentrationKgPerCubicMeter) * compartment.VolumePerAreaMeters
+            var media = schedule.MediaByPeriod(side, compartment);
+            var renewals = Enumerable.Range(1, schedule.Periods.Count - 1).Where(p => schedule.Periods[p].Renewed.Contains(side)).ToArray();
+            var carried = renewals.Sum(p => At(series, schedule.Periods[p].StartSeconds) is { } sample && Face(sample, side) is { } face
+                ? (face.ConcentrationKgPerCubicMeter * ((CompartmentFace)media[p - 1]).VolumePerAreaMeters) - media[p].InitialMassPerArea
                 : double.NaN);
-            result.Add(new RenewedMedium(side, compartment.Name, times.Count, carried));
+            result.Add(new RenewedMedium(side, compartment.Name, renewals.Length, carried));
         }
 
         return result;
@@ -159,15 +166,17 @@ public static class ScheduleAnalysis
         var density = compartment.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
         var contacts = new List<double>();
         var migration = new List<double>();
-        foreach (var (_, endSeconds) in schedule.Contacts(food.FoodSide))
+        foreach (var (startSeconds, endSeconds) in schedule.Contacts(food.FoodSide))
         {
             if (At(series, endSeconds) is not { } end || Face(end, food.FoodSide) is not { } face)
             {
                 return null;
             }
 
+            // Each contact's portion of food may have a volume and a fresh concentration of its own.
+            var portion = (CompartmentFace)schedule.MediumFrom(food.FoodSide, compartment, startSeconds);
             contacts.Add(face.ConcentrationKgPerCubicMeter / density);
-            migration.Add((face.ConcentrationKgPerCubicMeter - compartment.InitialConcentrationKgPerCubicMeter) * compartment.VolumePerAreaMeters);
+            migration.Add((face.ConcentrationKgPerCubicMeter - portion.InitialConcentrationKgPerCubicMeter) * portion.VolumePerAreaMeters);
         }
 
         var accuracy = simulation.Numerics.Accuracy;

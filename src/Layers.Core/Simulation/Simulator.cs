@@ -122,8 +122,8 @@ public static class Simulator
                 ? new PermeationSummary(
                     final.Steady!.FluxKgPerSquareMeterSecond,
                     recorder.FluxAtEnd,
-                    recorder.LagTimeSeconds,
-                    SingleMembrane.LagTimeSeconds(model.Case))
+                    LagTimeDefined(simulation) ? recorder.LagTimeSeconds : null,
+                    LagTimeDefined(simulation) ? SingleMembrane.LagTimeSeconds(model.Case) : null)
                 : null,
             WorstMassBalanceError = recorder.WorstMassBalanceError,
             DispersedLayers = undissolved?.Summaries ?? [],
@@ -136,6 +136,12 @@ public static class Simulator
                 : FoodContactAssessment.Assess(simulation, model, stages, watcher, cancellation),
         };
     }
+
+    /// <summary>
+    /// Whether the lag time of the amount received means anything: not when a schedule changes a medium during the run
+    /// (a donor raised in steps), as the straight line it is the intercept of belongs to one level from t = 0.
+    /// </summary>
+    internal static bool LagTimeDefined(SimulationCase simulation) => simulation.Schedule is not { ChangesMedia: true };
 
     /// <summary>
     /// Solves a case up to its duration and no further, and returns only the integral quantities at its output
@@ -199,7 +205,7 @@ public static class Simulator
         SimulationCase simulation, double? massLeftAfterSamplingPerArea = null)
     {
         var model = DiscreteModel.Build(simulation.WithFirstStageDiffusivities());
-        var stages = LayerPresence.Split(StageSystem.For(simulation, model.Grid, model.System), simulation);
+        var stages = ScheduleStages.Split(StageSystem.For(simulation, model.Grid, model.System), simulation, model.System);
         var final = FinalStateTarget.ForStages(model, stages, massLeftAfterSamplingPerArea)
             .WithLayersOff(simulation, model.System, simulation.Schedule?.LayersOffAtEnd ?? new HashSet<int>(), massLeftAfterSamplingPerArea);
         var sampling = new SamplingEvents(model);

@@ -14,10 +14,11 @@ namespace Layers.Core.Simulation;
 public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, double StartSeconds, double EndSeconds)
 {
     /// <summary>
-    /// Per node, the factor from the case's own u = c/K to this stage's, K_case / K_stage (the ratio of the
-    /// storages, as both share the grid); null when the stage keeps the case's partition coefficients.
-    /// States outside a stage are always in the case's own variable, so a concentration carries over unchanged
-    /// when K changes and the mass, storage times u, is the same on both sides of a stage boundary.
+    /// Per node, the factor from the case's own u = c/K to this stage's: the ratio of the storages, Cap_case /
+    /// Cap_stage, which is K_case / K_stage for a cell (both share the grid) and for a compartment whose volume stays;
+    /// null when the stage keeps the case's storages. States outside a stage are always in the case's own variable, so
+    /// the mass, storage times u, is the same on both sides of a stage boundary, and a concentration carries over
+    /// unchanged when K changes.
     /// </summary>
     public double[]? ToStage { get; init; }
 
@@ -64,7 +65,7 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
             var system = firstIsOwn && result.Count == 0 && !stage.HasPartitionOverrides
                 ? own
                 : DiffusionSystemBuilder.Build(stageCase, grid).System;
-            result.Add(new StageSystem(stageCase, system, start, end) { ToStage = stage.HasPartitionOverrides ? PartitionRatio(own, system) : null });
+            result.Add(new StageSystem(stageCase, system, start, end) { ToStage = stage.HasPartitionOverrides ? StorageRatio(own, system) : null });
             start = end;
         }
 
@@ -96,15 +97,15 @@ public sealed record StageSystem(SimulationCase Case, DiffusionSystem System, do
     }
 
     /// <summary>
-    /// K_case / K_stage per node, from the two systems' node maps of K: the storages' ratio, as a node's storage is
-    /// its size (the same in both, on one grid) times its K.
+    /// Cap_case / Cap_stage per node, from the two systems' storages (both positive at every node): the factor that keeps
+    /// the mass of every node when a state passes from the case's variable to the stage's.
     /// </summary>
-    internal static double[] PartitionRatio(DiffusionSystem own, DiffusionSystem stage)
+    internal static double[] StorageRatio(DiffusionSystem own, DiffusionSystem stage)
     {
         var ratio = new double[own.NodeCount];
         for (var n = 0; n < ratio.Length; n++)
         {
-            ratio[n] = own.PartitionCoefficient[n] / stage.PartitionCoefficient[n];
+            ratio[n] = own.Capacity[n] / stage.Capacity[n];
         }
 
         return ratio;

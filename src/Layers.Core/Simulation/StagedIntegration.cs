@@ -59,7 +59,7 @@ public static class StagedIntegration
             // Events at the end of a stage other than the last are applied here, between the stages, to the state the next
             // one starts from: inside the stage they would change only the loop's own copy, after the stage's end state
             // was taken.
-            var shiftedEvents = events is null ? null : new ShiftedEvents(events, stage.StartSeconds, last ? double.PositiveInfinity : length);
+            var shiftedEvents = events is null ? null : new ShiftedEvents(events, stage, last ? double.PositiveInfinity : length);
             var stageState = (double[])state.Clone();
             stage.IntoStage(stageState);
             var statistics = new TransientSolver(stage.System, options).Run(stageState, plan, shifted, shiftedEvents, cancellation);
@@ -99,12 +99,14 @@ public static class StagedIntegration
 
     /// <summary>
     /// State events (receptor sampling, renewals) at times of the whole run, applied inside one stage: those before
-    /// <paramref name="endSeconds"/> on the stage's clock (the stage's length, or infinity for the last stage).
+    /// <paramref name="endSeconds"/> on the stage's clock (the stage's length, or infinity for the last stage). Events
+    /// work in the case's own variable, as between stages, so a stage with storages of its own hands them its state
+    /// turned into that variable and takes it back.
     /// </summary>
-    private sealed class ShiftedEvents(IStateEvents inner, double offsetSeconds, double endSeconds) : IStateEvents
+    private sealed class ShiftedEvents(IStateEvents inner, StageSystem stage, double endSeconds) : IStateEvents
     {
         public IReadOnlyList<double> TimesSeconds { get; } = inner.TimesSeconds
-            .Select(time => time - offsetSeconds)
+            .Select(time => time - stage.StartSeconds)
             .Where(time => time < endSeconds * (1 - 1e-12))
             .ToArray();
 
@@ -112,7 +114,9 @@ public static class StagedIntegration
         {
             if (timeSeconds < endSeconds * (1 - 1e-12))
             {
-                inner.Apply(timeSeconds + offsetSeconds, state);
+                stage.OutOfStage(state);
+                inner.Apply(timeSeconds + stage.StartSeconds, state);
+                stage.IntoStage(state);
             }
         }
     }

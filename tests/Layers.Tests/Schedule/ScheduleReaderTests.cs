@@ -56,7 +56,7 @@ public sealed class ScheduleReaderTests
             ("$.schedule", """[ { "duration": "10 d", "renew": ["left", "right"] } ]""")));
 
         Assert.Equal(
-            ["$.schedule[0].renew[0]: cannot renew the left face: it is a bath, whose concentration never changes; only a compartment's medium can be renewed"],
+            ["$.schedule[0].renew[0]: cannot renew the left face: it is a bath, whose concentration never changes unless the renewal gives it another, e.g. { \"face\": \"left\", \"concentration\": \"2 mg/mL\" }"],
             CaseJson.ErrorLines(read));
     }
 }

@@ -54,9 +54,12 @@ public static class KeyFigures
             var medium = face.MediumName;
             Series(path + ".transferredMassPerAreaKgPerSquareMeter", FigureKind.Amount, medium + ": received per area", amount, report => Pick(report).TransferredIntoMediumPerArea);
             Series(path + ".fluxIntoMediumKgPerSquareMeterSecond", FigureKind.Flux, medium + ": flux into the medium", flux, report => Pick(report).FluxIntoMediumKgPerSquareMeterSecond);
-            if (face is CompartmentFace compartment)
+            if (face is CompartmentFace)
             {
-                var concentration = amount * compartment.ContactAreaSquareMeters / compartment.VolumeCubicMeters;
+                // The floor of a concentration: the amount scale over the largest portion a schedule brings (the case's own
+                // without one), the smallest concentration that scale can make.
+                var portion = result.Case.MediaOn(side).OfType<CompartmentFace>().MaxBy(medium => medium.VolumePerAreaMeters)!;
+                var concentration = amount * portion.ContactAreaSquareMeters / portion.VolumeCubicMeters;
                 Series(path + ".concentrationKgPerCubicMeter", FigureKind.Concentration, medium + ": concentration", concentration, report => Pick(report).ConcentrationKgPerCubicMeter);
             }
         }
@@ -107,6 +110,7 @@ public static class KeyFigures
             return;
         }
 
+        var mediaBySide = new[] { result.Case.Schedule!.MediaByPeriod(Side.Left, result.Case.Left), result.Case.Schedule!.MediaByPeriod(Side.Right, result.Case.Right) };
         for (var p = 0; p < schedule.Periods.Count; p++)
         {
             var outcome = schedule.Periods[p];
@@ -118,7 +122,7 @@ public static class KeyFigures
                 var what = $"{outcome.Period.Label}: {medium.Name}";
                 var end = outcome.Period.EndSeconds;
                 Add(figures, path + ".receivedKgPerSquareMeter", FigureKind.Amount, medium.ReceivedKgPerSquareMeter, what + " received in the period", end, amount);
-                if (result.Case.Face(medium.Side) is CompartmentFace compartment)
+                if (mediaBySide[(int)medium.Side][p] is CompartmentFace compartment)
                 {
                     Add(figures, path + ".concentrationAtEndKgPerCubicMeter", FigureKind.Concentration, medium.ConcentrationAtEndKgPerCubicMeter, what + " concentration at the end", end, amount / compartment.VolumePerAreaMeters);
                 }

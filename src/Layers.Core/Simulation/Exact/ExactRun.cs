@@ -46,8 +46,8 @@ internal static class ExactRun
         var summary = new FinalStateSummary(
             final.Kind,
             [.. Enumerable.Range(0, simulation.Stack.Count).Select(layer => final.LayerEdges(simulation, layer))],
-            final.MediumConcentration(model.System, simulation.Left, Side.Left),
-            final.MediumConcentration(model.System, simulation.Right, Side.Right),
+            final.MediumConcentration(Side.Left),
+            final.MediumConcentration(Side.Right),
             SystemTimes(sampler.Distance, solution, horizon, [.. samples.Select(sample => (sample.TimeSeconds, sample.FractionOfFinalState))]),
             CompartmentTimes(sampler, solution, Side.Left, horizon, samples),
             CompartmentTimes(sampler, solution, Side.Right, horizon, samples),

@@ -1,0 +1,72 @@
+using Layers.Core.Domain;
+
+namespace Layers.Core.Simulation;
+
+/// <summary>
+/// What a face medium reads at an output time, from the stage that time lies in: the flux into it (a temperature stage
+/// has its own D, so its own conductances, and may have its own K, so its own u = c/K) and its concentration (a
+/// schedule may bring a portion with another volume or K, or a bath at another level).
+/// </summary>
+internal sealed class FaceReadings
+{
+    private readonly IReadOnlyList<StageSystem> _stages;
+
+    public FaceReadings(IReadOnlyList<StageSystem> stages)
+    {
+        ArgumentNullException.ThrowIfNull(stages);
+        _stages = stages;
+    }
+
+    /// <summary>
+    /// Flux into the medium on a side, kg/(m2 s), for a state in the case's own u = c/K. An output at the boundary of
+    /// two stages reads the stage that ends there (the flux jumps with D at that instant, and the state is the one
+    /// before that moment's changes); a time past the last stage (the search beyond the duration) reads the last.
+    /// </summary>
+    public double IntoMedium(Side side, double timeSeconds, ReadOnlySpan<double> state)
+    {
+        var stage = StageAt(timeSeconds);
+        return stage.System.FluxIntoMedium(side, InStage(stage, state));
+    }
+
+    /// <summary>
+    /// Concentration in the medium on a side, kg/m3, for a state in the case's own u = c/K: a compartment's content over
+    /// the volume of the portion in contact, a bath's own level; null for a closed face. The stage as for
+    /// <see cref="IntoMedium"/>.
+    /// </summary>
+    public double? InMedium(Side side, double timeSeconds, ReadOnlySpan<double> state)
+    {
+        var stage = StageAt(timeSeconds);
+        var node = stage.System.CompartmentNode(side);
+        if (node >= 0)
+        {
+            return stage.System.ConcentrationOf(node, stage.ToStage is { } factors ? state[node] * factors[node] : state[node]);
+        }
+
+        return (stage.Case.Face(side) as BathFace)?.ConcentrationKgPerCubicMeter;
+    }
+
+    private static ReadOnlySpan<double> InStage(StageSystem stage, ReadOnlySpan<double> state)
+    {
+        if (stage.ToStage is null)
+        {
+            return state;
+        }
+
+        var inStage = state.ToArray();
+        stage.IntoStage(inStage);
+        return inStage;
+    }
+
+    private StageSystem StageAt(double timeSeconds)
+    {
+        foreach (var stage in _stages)
+        {
+            if (timeSeconds <= stage.EndSeconds * (1 + 1e-12))
+            {
+                return stage;
+            }
+        }
+
+        return _stages[^1];
+    }
+}
