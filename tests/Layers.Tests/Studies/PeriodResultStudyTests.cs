@@ -196,5 +196,45 @@ public sealed class PeriodResultStudyTests
         Assert.False(design.Result.AtJudgedContact);
     }
 
+    [Fact]
+    public void Whether_a_study_reads_the_judged_contact_agrees_with_whether_the_run_judges_contacts()
+    {
+        var renewed = File.ReadAllText(RepoRoot.File("cases", "reusable-container-three-contacts.json"));
+        var kept = renewed.Replace("\"renew\": [\"right\"], ", string.Empty, StringComparison.Ordinal);
+
+        foreach (var json in new[] { renewed, kept })
+        {
+            var simulation = CaseJson.Read(json).Case!;
+            var result = Simulator.Run(simulation);
+            Assert.True(result.Completed, result.FailureReason);
+            Assert.Equal(result.Schedule!.RepeatedUse is not null, ResultMeasure.JudgesContacts(simulation));
+        }
+
+        Assert.True(ResultMeasure.JudgesContacts(CaseJson.Read(renewed).Case!));
+    }
+
+    [Fact]
+    public void A_period_that_is_not_repeated_is_named_by_its_name_alone()
+    {
+        var json = CaseJson.With(
+            File.ReadAllText(RepoRoot.File("cases", "daily-patch-week.json")),
+            ("$.uncertainty", """
+                { "inputs": [ { "path": "$.layers[1].thickness", "distribution": "uniform", "min": "40 um", "max": "60 um" } ],
+                  "results": [ { "name": "rightPeriodReceived", "period": "first patch" }, { "name": "rightPeriodReceived", "period": "after removal" },
+                               { "name": "rightPeriodLowestFlux", "period": "new patch 6 of 6" } ] }
+                """));
+        var (_, baseCase, study) = StudyCases.Uncertainty(json);
+
+        var result = Simulator.Run(baseCase);
+
+        Assert.True(result.Completed, result.FailureReason);
+        var periods = result.Schedule!.Periods;
+        Assert.Equal(8, periods.Count);
+        Assert.Equal(Medium(periods[0], Side.Right).ReceivedKgPerSquareMeter, study.Results[0].Read(result));
+        Assert.Equal(Medium(periods[7], Side.Right).ReceivedKgPerSquareMeter, study.Results[1].Read(result));
+        Assert.Equal(Medium(periods[6], Side.Right).LowestFluxKgPerSquareMeterSecond, study.Results[2].Read(result));
+        Assert.Equal("mass per area received by the right medium in 'after removal'", study.Results[1].Label);
+    }
+
     private static MediumInPeriod Medium(PeriodOutcome period, Side side) => period.Media.Single(medium => medium.Side == side);
 }
