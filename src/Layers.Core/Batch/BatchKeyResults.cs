@@ -91,7 +91,7 @@ public sealed record BatchKeyResults(
             : (null, null);
     }
 
-    /// <summary>The value of a named result, SI.</summary>
+    /// <summary>The value of a named result of <see cref="NamedResults.InBatchSummary"/>, SI.</summary>
     public double? Pick(NamedResult which) => which switch
     {
         NamedResult.LeftReceived => LeftReceivedKgPerSquareMeter,
@@ -103,5 +103,9 @@ public sealed record BatchKeyResults(
         NamedResult.RightConcentration => RightConcentrationKgPerCubicMeter,
         NamedResult.FoodConcentration => FoodConcentrationKgPerKg,
         NamedResult.TimeToLimit => TimeToLimitSeconds,
+        NamedResult.LeftPeriodReceived or NamedResult.RightPeriodReceived or NamedResult.LeftPeriodLowestFlux
+            or NamedResult.RightPeriodLowestFlux or NamedResult.LeftPeriodHighestFlux or NamedResult.RightPeriodHighestFlux
+            or NamedResult.LeftPeriodEndConcentration or NamedResult.RightPeriodEndConcentration
+            => throw new ArgumentOutOfRangeException(nameof(which), which, "a batch row holds no period's figure: it names no period"),
     };
 }

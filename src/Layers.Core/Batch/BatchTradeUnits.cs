@@ -19,7 +19,7 @@ public static class BatchTradeUnits
     /// <summary>Mass received by a medium per contact area.</summary>
     public static UnitDefinition Received { get; } = UnitTable.Get("ug/cm2");
 
-    /// <summary>Steady flux.</summary>
+    /// <summary>Steady flux, and the lowest and highest flux of a period.</summary>
     public static UnitDefinition Flux { get; } = UnitTable.Get("ug/cm2/h");
 
     /// <summary>Lag time, time to 90 %, time to the limit.</summary>
@@ -31,10 +31,12 @@ public static class BatchTradeUnits
     /// <summary>The trade unit a named result is shown in (a sweep plot's axis).</summary>
     public static UnitDefinition Of(NamedResult result) => result switch
     {
-        NamedResult.LeftReceived or NamedResult.RightReceived => Received,
-        NamedResult.LeftConcentration or NamedResult.RightConcentration => MediumConcentration,
+        NamedResult.LeftReceived or NamedResult.RightReceived or NamedResult.LeftPeriodReceived or NamedResult.RightPeriodReceived => Received,
+        NamedResult.LeftConcentration or NamedResult.RightConcentration
+            or NamedResult.LeftPeriodEndConcentration or NamedResult.RightPeriodEndConcentration => MediumConcentration,
         NamedResult.FoodConcentration => FoodConcentration,
-        NamedResult.SteadyFlux => Flux,
+        NamedResult.SteadyFlux or NamedResult.LeftPeriodLowestFlux or NamedResult.RightPeriodLowestFlux
+            or NamedResult.LeftPeriodHighestFlux or NamedResult.RightPeriodHighestFlux => Flux,
         NamedResult.LagTime or NamedResult.TimeTo90Percent or NamedResult.TimeToLimit => Time,
     };
 

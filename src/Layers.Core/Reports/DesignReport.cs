@@ -29,6 +29,7 @@ public static class DesignReport
             json.WriteStartObject("result");
             json.WriteString("name", settings.Result.Name);
             StudyJson.Number(json, "atSeconds", settings.Result.AtSeconds);
+            json.WriteString("period", settings.Result.Period);
             json.WriteString("unit", settings.Result.SiUnit);
             json.WriteNumber("target", settings.TargetSi);
             json.WriteEndObject();

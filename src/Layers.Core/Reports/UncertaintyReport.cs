@@ -60,6 +60,7 @@ public static class UncertaintyReport
                 json.WriteStartObject();
                 json.WriteString("name", result.Result.Name);
                 StudyJson.Number(json, "atSeconds", result.Result.AtSeconds);
+                json.WriteString("period", result.Result.Period);
                 json.WriteString("unit", result.Result.SiUnit);
                 StudyJson.Numbers(json, "percentiles", result.Percentiles);
                 json.WriteNumber("samplesWithoutResult", result.Undefined);
@@ -195,6 +196,7 @@ public static class UncertaintyReport
         json.WriteStartObject("limit");
         json.WriteString("result", exceedance.Limit.Result.Name);
         StudyJson.Number(json, "atSeconds", exceedance.Limit.Result.AtSeconds);
+        json.WriteString("period", exceedance.Limit.Result.Period);
         json.WriteString("unit", exceedance.Limit.Result.SiUnit);
         json.WriteNumber("value", exceedance.Limit.ValueSi);
         json.WriteString("origin", exceedance.Limit.Origin);

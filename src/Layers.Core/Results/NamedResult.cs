@@ -34,4 +34,28 @@ public enum NamedResult
 
     /// <summary><c>timeToLimit</c>: when the food first reaches the specific migration limit, s.</summary>
     TimeToLimit,
+
+    /// <summary><c>leftPeriodReceived</c>: mass per area the left medium received during one period of the schedule, kg/m2.</summary>
+    LeftPeriodReceived,
+
+    /// <summary><c>rightPeriodReceived</c>: mass per area the right medium received during one period of the schedule, kg/m2.</summary>
+    RightPeriodReceived,
+
+    /// <summary><c>leftPeriodLowestFlux</c>: lowest flux into the left medium in one period as sampled (the trough), kg/(m2 s).</summary>
+    LeftPeriodLowestFlux,
+
+    /// <summary><c>rightPeriodLowestFlux</c>: lowest flux into the right medium in one period as sampled (the trough), kg/(m2 s).</summary>
+    RightPeriodLowestFlux,
+
+    /// <summary><c>leftPeriodHighestFlux</c>: highest flux into the left medium in one period as sampled (the peak), kg/(m2 s).</summary>
+    LeftPeriodHighestFlux,
+
+    /// <summary><c>rightPeriodHighestFlux</c>: highest flux into the right medium in one period as sampled (the peak), kg/(m2 s).</summary>
+    RightPeriodHighestFlux,
+
+    /// <summary><c>leftPeriodEndConcentration</c>: concentration in the left medium at the end of one period, before any renewal, kg/m3.</summary>
+    LeftPeriodEndConcentration,
+
+    /// <summary><c>rightPeriodEndConcentration</c>: concentration in the right medium at the end of one period, before any renewal, kg/m3.</summary>
+    RightPeriodEndConcentration,
 }

@@ -14,8 +14,9 @@ public static class NamedResults
     public static IReadOnlyList<NamedResult> All { get; } = Enum.GetValues<NamedResult>();
 
     /// <summary>
-    /// The results a batch summary lists (and a sweep can plot), in column order: every named result, the five that
-    /// earlier summaries listed first so that their columns keep their places.
+    /// The results a batch summary lists (and a sweep can plot), in column order: every named result but the figures of
+    /// one period (a batch row names no period, and a summary with a column per period and medium would be read by no
+    /// one), the five that earlier summaries listed first so that their columns keep their places.
     /// </summary>
     public static IReadOnlyList<NamedResult> InBatchSummary { get; } =
     [
@@ -38,6 +39,10 @@ public static class NamedResults
         NamedResult.FoodConcentration => Units.Dimension.MassFraction,
         NamedResult.SteadyFlux => Units.Dimension.MassFlux,
         NamedResult.LagTime or NamedResult.TimeTo90Percent or NamedResult.TimeToLimit => Units.Dimension.Time,
+        NamedResult.LeftPeriodReceived or NamedResult.RightPeriodReceived => Units.Dimension.MassPerArea,
+        NamedResult.LeftPeriodLowestFlux or NamedResult.RightPeriodLowestFlux
+            or NamedResult.LeftPeriodHighestFlux or NamedResult.RightPeriodHighestFlux => Units.Dimension.MassFlux,
+        NamedResult.LeftPeriodEndConcentration or NamedResult.RightPeriodEndConcentration => Units.Dimension.MassConcentration,
     };
 
     /// <summary>The SI unit of the result as the unit table writes it, e.g. <c>kg/m2</c>.</summary>
@@ -49,6 +54,20 @@ public static class NamedResults
         NamedResult.LeftReceived or NamedResult.RightReceived or NamedResult.LeftConcentration
             or NamedResult.RightConcentration or NamedResult.FoodConcentration => true,
         NamedResult.SteadyFlux or NamedResult.LagTime or NamedResult.TimeTo90Percent or NamedResult.TimeToLimit => false,
+        NamedResult.LeftPeriodReceived or NamedResult.RightPeriodReceived or NamedResult.LeftPeriodLowestFlux
+            or NamedResult.RightPeriodLowestFlux or NamedResult.LeftPeriodHighestFlux or NamedResult.RightPeriodHighestFlux
+            or NamedResult.LeftPeriodEndConcentration or NamedResult.RightPeriodEndConcentration => false,
+    };
+
+    /// <summary>True for the figures of one period of a schedule (and accept <c>period</c>): read off the run's per-period outcomes.</summary>
+    public static bool IsReadInPeriod(NamedResult result) => result switch
+    {
+        NamedResult.LeftReceived or NamedResult.RightReceived or NamedResult.LeftConcentration or NamedResult.RightConcentration
+            or NamedResult.FoodConcentration or NamedResult.SteadyFlux or NamedResult.LagTime or NamedResult.TimeTo90Percent
+            or NamedResult.TimeToLimit => false,
+        NamedResult.LeftPeriodReceived or NamedResult.RightPeriodReceived or NamedResult.LeftPeriodLowestFlux
+            or NamedResult.RightPeriodLowestFlux or NamedResult.LeftPeriodHighestFlux or NamedResult.RightPeriodHighestFlux
+            or NamedResult.LeftPeriodEndConcentration or NamedResult.RightPeriodEndConcentration => true,
     };
 
     /// <summary>The result in words, read at the end of the duration, as a plot title names it.</summary>
@@ -63,11 +82,20 @@ public static class NamedResults
         NamedResult.LagTime => "lag time",
         NamedResult.TimeTo90Percent => "time to 90 % of the final state",
         NamedResult.TimeToLimit => "time to reach the specific migration limit",
+        NamedResult.LeftPeriodReceived => "received by the left medium in one period",
+        NamedResult.RightPeriodReceived => "received by the right medium in one period",
+        NamedResult.LeftPeriodLowestFlux => "lowest flux into the left medium in one period",
+        NamedResult.RightPeriodLowestFlux => "lowest flux into the right medium in one period",
+        NamedResult.LeftPeriodHighestFlux => "highest flux into the left medium in one period",
+        NamedResult.RightPeriodHighestFlux => "highest flux into the right medium in one period",
+        NamedResult.LeftPeriodEndConcentration => "concentration in the left medium at the end of one period",
+        NamedResult.RightPeriodEndConcentration => "concentration in the right medium at the end of one period",
     };
 
     /// <summary>
     /// The quantity in words without a time, for the tables and plots of studies: "mass per area received by the right
-    /// medium", "lag time". A result read at a time adds its time (see <c>ResultMeasure.Label</c>).
+    /// medium", "lag time". A result read at a time adds its time, a figure of one period its period (see
+    /// <c>ResultMeasure.Label</c>).
     /// </summary>
     public static string Quantity(NamedResult result) => result switch
     {
@@ -80,6 +108,14 @@ public static class NamedResults
         NamedResult.LagTime => "lag time",
         NamedResult.TimeTo90Percent => "time to 90 % of the final state",
         NamedResult.TimeToLimit => "time to reach the specific migration limit",
+        NamedResult.LeftPeriodReceived => "mass per area received by the left medium",
+        NamedResult.RightPeriodReceived => "mass per area received by the right medium",
+        NamedResult.LeftPeriodLowestFlux => "lowest flux into the left medium",
+        NamedResult.RightPeriodLowestFlux => "lowest flux into the right medium",
+        NamedResult.LeftPeriodHighestFlux => "highest flux into the left medium",
+        NamedResult.RightPeriodHighestFlux => "highest flux into the right medium",
+        NamedResult.LeftPeriodEndConcentration => "concentration in the left medium",
+        NamedResult.RightPeriodEndConcentration => "concentration in the right medium",
     };
 
     /// <summary>A short heading for a console column, e.g. "right received".</summary>
@@ -94,9 +130,20 @@ public static class NamedResults
         NamedResult.LagTime => "lag time",
         NamedResult.TimeTo90Percent => "90 % time",
         NamedResult.TimeToLimit => "time to limit",
+        NamedResult.LeftPeriodReceived => "left period received",
+        NamedResult.RightPeriodReceived => "right period received",
+        NamedResult.LeftPeriodLowestFlux => "left period trough",
+        NamedResult.RightPeriodLowestFlux => "right period trough",
+        NamedResult.LeftPeriodHighestFlux => "left period peak",
+        NamedResult.RightPeriodHighestFlux => "right period peak",
+        NamedResult.LeftPeriodEndConcentration => "left period end concentration",
+        NamedResult.RightPeriodEndConcentration => "right period end concentration",
     };
 
-    /// <summary>The key of the result in summary.csv and summary.json of a batch: name and SI unit in one word.</summary>
+    /// <summary>
+    /// The key of the result in summary.csv and summary.json of a batch: name and SI unit in one word. Only the results
+    /// of <see cref="InBatchSummary"/> have one; asking for a period's figure is a mistake in the caller.
+    /// </summary>
     public static string SummaryKey(NamedResult result) => result switch
     {
         NamedResult.LeftReceived => "leftReceivedKgPerSquareMeter",
@@ -108,5 +155,9 @@ public static class NamedResults
         NamedResult.RightConcentration => "rightConcentrationKgPerCubicMeter",
         NamedResult.FoodConcentration => "foodConcentrationKgPerKg",
         NamedResult.TimeToLimit => "timeToLimitSeconds",
+        NamedResult.LeftPeriodReceived or NamedResult.RightPeriodReceived or NamedResult.LeftPeriodLowestFlux
+            or NamedResult.RightPeriodLowestFlux or NamedResult.LeftPeriodHighestFlux or NamedResult.RightPeriodHighestFlux
+            or NamedResult.LeftPeriodEndConcentration or NamedResult.RightPeriodEndConcentration
+            => throw new ArgumentOutOfRangeException(nameof(result), result, "a period's figure is not a column of a batch summary"),
     };
 }

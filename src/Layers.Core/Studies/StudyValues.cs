@@ -11,32 +11,35 @@ namespace Layers.Core.Studies;
 internal static class StudyValues
 {
     /// <summary>
-    /// A result: a name (<c>"lagTime"</c>) or <c>{ "name": "rightReceived", "at": "10 d" }</c>, checked against the
-    /// base case.
+    /// A result: a name (<c>"lagTime"</c>), <c>{ "name": "rightReceived", "at": "10 d" }</c> or, for a figure of one
+    /// period of a schedule, <c>{ "name": "rightPeriodReceived", "period": "dose 7 of 7" }</c> (without
+    /// <c>period</c>, the last period), checked against the base case.
     /// </summary>
     public static ResultMeasure? Measure(JsonNode? node, string at, SimulationCase baseCase, List<CaseError> errors)
     {
         var expected = string.Join(", ", NamedResults.ByName.Keys);
         string? name = null;
         JsonNode? time = null;
+        JsonNode? period = null;
         if (node is JsonValue value && value.TryGetValue<string>(out var text))
         {
             name = text;
         }
         else if (node is JsonObject member)
         {
-            Unknown(member, at, ["name", "at"], errors);
+            Unknown(member, at, ["name", "at", "period"], errors);
             name = member["name"] is JsonValue named && named.TryGetValue<string>(out var given) ? given : null;
             time = member["at"];
+            period = member["period"];
         }
 
         if (name is null || !NamedResults.ByName.TryGetValue(name, out var kind))
         {
-            errors.Add(new CaseError(at, $"must be one of {expected}, or {{ \"name\": ..., \"at\": \"10 d\" }}; got {node?.ToJsonString() ?? "nothing"}"));
+            errors.Add(new CaseError(at, $"must be one of {expected}, or {{ \"name\": ..., \"at\": \"10 d\" }}, or {{ \"name\": ..., \"period\": \"dose 7 of 7\" }}; got {node?.ToJsonString() ?? "nothing"}"));
             return null;
         }
 
-        var measure = new ResultMeasure(kind);
+        var measure = new ResultMeasure(kind) { AtJudgedContact = kind == NamedResult.FoodConcentration && ResultMeasure.JudgesContacts(baseCase) };
         if (time is not null)
         {
             if (!measure.IsAtTime)
@@ -53,9 +56,32 @@ internal static class StudyValues
             measure = measure with { AtSeconds = seconds.SiValue, AtText = ((JsonValue)time).GetValue<string>() };
         }
 
+        if (period is not null)
+        {
+            if (!measure.IsInPeriod)
+            {
+                errors.Add(new CaseError($"{at}.period", $"{name} is not a figure of one period; leave out 'period'"));
+                return null;
+            }
+
+            if (period is not JsonValue label || !label.TryGetValue<string>(out var periodLabel) || periodLabel.Length == 0)
+            {
+                errors.Add(new CaseError($"{at}.period", $"expected a period's label as text, e.g. \"dose 7 of 7\"; got {period.ToJsonString()}"));
+                return null;
+            }
+
+            measure = measure with { Period = periodLabel };
+        }
+
         if (measure.Problem(baseCase) is { } problem)
         {
             errors.Add(new CaseError(at, problem));
+            return null;
+        }
+
+        if (measure.PeriodProblem(baseCase) is { } unknown)
+        {
+            errors.Add(new CaseError($"{at}.period", unknown));
             return null;
         }
 

@@ -225,14 +225,21 @@ public static class UncertaintyReader
             .ToList();
     }
 
-    /// <summary>The limit given, or by default the specific migration limit of a food-contact case.</summary>
+    /// <summary>
+    /// The limit given, or by default the specific migration limit of a food-contact case, against the food at the end
+    /// (of the judged contact, for an article tested in repeated contacts, as the run's own verdict reads it).
+    /// </summary>
     private static StudyLimit? ReadLimit(JsonObject study, SimulationCase baseCase, List<CaseError> errors)
     {
         var at = $"{At}.limit";
         if (study["limit"] is null)
         {
             return baseCase.FoodContact?.SpecificMigrationLimit is { } limit
-                ? new StudyLimit(new ResultMeasure(NamedResult.FoodConcentration), limit, UnitTable.Get("mg/kg"), "$.foodContact.specificMigrationLimit")
+                ? new StudyLimit(
+                    new ResultMeasure(NamedResult.FoodConcentration) { AtJudgedContact = ResultMeasure.JudgesContacts(baseCase) },
+                    limit,
+                    UnitTable.Get("mg/kg"),
+                    "$.foodContact.specificMigrationLimit")
                 : null;
         }
 
