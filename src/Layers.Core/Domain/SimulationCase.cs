@@ -84,6 +84,13 @@ public sealed record SimulationCase
     public IReadOnlyList<FaceCondition> MediaOn(Side side) =>
         Schedule is { } schedule ? schedule.MediaByPeriod(side, Face(side)).Distinct().ToArray() : [Face(side)];
 
+    /// <summary>
+    /// True when a run judges the food at the end of each contact for repeated use: a food-contact case whose food
+    /// compartment the schedule renews (each contact then has a fresh portion of food).
+    /// </summary>
+    public bool JudgesRepeatedUse =>
+        FoodContact is { } food && Schedule is { } schedule && schedule.Renews(food.FoodSide) && Face(food.FoodSide) is CompartmentFace;
+
     /// <summary>True when no mass can enter or leave: no face is a bath.</summary>
     public bool IsClosed => !Left.IsUnlimited && !Right.IsUnlimited;
 }

@@ -156,12 +156,13 @@ public static class ScheduleAnalysis
     /// </summary>
     private static RepeatedUseVerdict? RepeatedUse(SimulationCase simulation, ContactSchedule schedule, IReadOnlyList<StateSample> series)
     {
-        if (simulation.FoodContact is not { } food
-            || !schedule.Renews(food.FoodSide)
-            || simulation.Face(food.FoodSide) is not CompartmentFace compartment)
+        if (!simulation.JudgesRepeatedUse)
         {
             return null;
         }
+
+        var food = simulation.FoodContact!;
+        var compartment = (CompartmentFace)simulation.Face(food.FoodSide);
 
         var density = compartment.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
         var contacts = new List<double>();

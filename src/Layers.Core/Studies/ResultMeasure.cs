@@ -149,15 +149,6 @@ public sealed record ResultMeasure(NamedResult Kind, double? AtSeconds = null, s
         return labels.Contains(wanted, StringComparer.Ordinal) ? null : $"no period is labelled '{wanted}'; the periods are {Listed(labels)}";
     }
 
-    /// <summary>
-    /// True when a run of the case judges the food at the end of each contact for repeated use: a food-contact case
-    /// whose food compartment the schedule renews (the condition on which <c>ScheduleAnalysis</c> gives a
-    /// <see cref="RepeatedUseVerdict"/>).
-    /// </summary>
-    public static bool JudgesContacts(SimulationCase simulation) =>
-        simulation?.FoodContact is { } food && simulation.Schedule is { } schedule && schedule.Renews(food.FoodSide)
-        && simulation.Face(food.FoodSide) is CompartmentFace;
-
     private string? NeedsMedium(SimulationCase simulation, Side side) => !simulation.Face(side).IsOpen
         ? $"{Name} needs a medium on the {Words(side)}; the {Words(side)} face is closed"
         : null;

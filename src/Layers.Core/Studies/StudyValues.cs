@@ -39,7 +39,7 @@ internal static class StudyValues
             return null;
         }
 
-        var measure = new ResultMeasure(kind) { AtJudgedContact = kind == NamedResult.FoodConcentration && ResultMeasure.JudgesContacts(baseCase) };
+        var measure = new ResultMeasure(kind) { AtJudgedContact = kind == NamedResult.FoodConcentration && baseCase.JudgesRepeatedUse };
         if (time is not null)
         {
             if (!measure.IsAtTime)

@@ -236,7 +236,7 @@ public static class UncertaintyReader
         {
             return baseCase.FoodContact?.SpecificMigrationLimit is { } limit
                 ? new StudyLimit(
-                    new ResultMeasure(NamedResult.FoodConcentration) { AtJudgedContact = ResultMeasure.JudgesContacts(baseCase) },
+                    new ResultMeasure(NamedResult.FoodConcentration) { AtJudgedContact = baseCase.JudgesRepeatedUse },
                     limit,
                     UnitTable.Get("mg/kg"),
                     "$.foodContact.specificMigrationLimit")

@@ -207,10 +207,10 @@ public sealed class PeriodResultStudyTests
             var simulation = CaseJson.Read(json).Case!;
             var result = Simulator.Run(simulation);
             Assert.True(result.Completed, result.FailureReason);
-            Assert.Equal(result.Schedule!.RepeatedUse is not null, ResultMeasure.JudgesContacts(simulation));
+            Assert.Equal(result.Schedule!.RepeatedUse is not null, simulation.JudgesRepeatedUse);
         }
 
-        Assert.True(ResultMeasure.JudgesContacts(CaseJson.Read(renewed).Case!));
+        Assert.True(CaseJson.Read(renewed).Case!.JudgesRepeatedUse);
     }
 
     [Fact]
