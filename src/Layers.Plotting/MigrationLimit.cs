@@ -16,6 +16,16 @@ internal sealed record MigrationLimit(double MassPerArea, Side FoodSide, double?
     /// <summary>The label drawn beside the line.</summary>
     public const string Label = "specific migration limit";
 
+    /// <summary>
+    /// For food renewed by a schedule (an article for repeated use), the repeated-use verdict: each fresh portion is held
+    /// to the limit by its own concentration, which the cumulative amount no longer shows, so the line is drawn on the
+    /// food's concentration (<see cref="FoodConcentrationKgPerCubicMeter"/>) instead; null for one contact.
+    /// </summary>
+    public RepeatedUseVerdict? PerContact { get; init; }
+
+    /// <summary>The limit as the food's concentration, kg/m3 (the mass fraction times the food's density).</summary>
+    public double FoodConcentrationKgPerCubicMeter { get; init; }
+
     /// <summary>The limit of a result with food-contact figures and a limit above the food's initial content, else null.</summary>
     public static MigrationLimit? Of(SimulationResult result)
     {
@@ -27,6 +37,12 @@ internal sealed record MigrationLimit(double MassPerArea, Side FoodSide, double?
 
         var initialFraction = compartment.InitialConcentrationKgPerCubicMeter / food.FoodDensityKgPerCubicMeter;
         var perArea = (limit - initialFraction) * food.FoodDensityKgPerCubicMeter * compartment.VolumePerAreaMeters;
-        return perArea > 0 ? new MigrationLimit(perArea, food.FoodSide, food.LimitReachedSeconds) : null;
+        return perArea > 0
+            ? new MigrationLimit(perArea, food.FoodSide, food.LimitReachedSeconds)
+            {
+                PerContact = result.Schedule?.RepeatedUse,
+                FoodConcentrationKgPerCubicMeter = limit * food.FoodDensityKgPerCubicMeter,
+            }
+            : null;
     }
 }

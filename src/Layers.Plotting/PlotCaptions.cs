@@ -47,7 +47,11 @@ internal static class PlotCaptions
             _ => string.Empty,
         };
 
-        if (MigrationLimit.Of(result) is not null)
+        if (MigrationLimit.Of(result) is { PerContact: not null })
+        {
+            text += "The food is renewed, so the amount it received no longer reads as its concentration: the dashed red line in the panel is the specific migration limit, which each fresh portion's concentration is held to. ";
+        }
+        else if (MigrationLimit.Of(result) is not null)
         {
             text += "The dashed red line is the specific migration limit as a mass per contact area; where the food's curve meets it, the food reaches the limit. ";
         }

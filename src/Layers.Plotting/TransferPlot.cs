@@ -36,7 +36,7 @@ public static class TransferPlot
         ArgumentNullException.ThrowIfNull(options);
         options.Validate();
         var migration = options.LimitMassPerArea is null ? MigrationLimit.Of(result) : null;
-        if (migration is not null)
+        if (migration is { PerContact: null })
         {
             options = options with { LimitMassPerArea = migration.MassPerArea, LimitLabel = MigrationLimit.Label };
         }
@@ -57,7 +57,7 @@ public static class TransferPlot
         var model = PlotFrame.Create(simulation.Title, PeriodMarks.Text(result, time) is { } marks ? subtitle.Append(marks) : subtitle, options);
         model.Axes.Add(time.Axis);
         var compartments = media.Where(medium => medium.Face.HasFiniteVolume).ToList();
-        var secondScale = SecondScale(compartments);
+        var secondScale = SecondScale(compartments, result.Case);
         var panel = compartments.Count > 0 && !secondScale;
         var massAxis = PlotFrame.Linear(AxisPosition.Left, $"Transferred per contact area ({DisplayText.Unit(massUnit)})");
         massAxis.Key = MassAxisKey;
@@ -78,17 +78,28 @@ public static class TransferPlot
         else if (panel)
         {
             massAxis.StartPosition = 0.42;
-            AddConcentrationPanel(model, media, samples, time.Unit, concentrationUnit);
+            var scale = PanelScale(compartments, simulation.Display, concentrationUnit);
+            AddConcentrationPanel(model, media, samples, time.Unit, scale, simulation);
+            if (migration is { PerContact: not null })
+            {
+                // Each fresh portion of food is held to the limit by its own concentration: the line sits in the panel.
+                var level = scale.Unit.FromSi(migration.FoodConcentrationKgPerCubicMeter / scale.Divisor);
+                AddLimit(model, options, level, MigrationLimit.Label, scale.Unit, ConcentrationAxisKey);
+                if (migration.ReachedSeconds is { } first && time.Covers(first, simulation.DurationSeconds))
+                {
+                    AddCrossing(model, time.Unit.FromSi(first), level, ConcentrationAxisKey);
+                }
+            }
         }
 
         if (options.LimitMassPerArea is { } limit)
         {
-            AddLimit(model, options, massUnit.FromSi(limit), options.LimitLabel, massUnit);
+            AddLimit(model, options, massUnit.FromSi(limit), options.LimitLabel, massUnit, MassAxisKey);
         }
 
-        if (migration is { ReachedSeconds: { } reached } && time.Covers(reached, simulation.DurationSeconds))
+        if (migration is { PerContact: null, ReachedSeconds: { } reached } && time.Covers(reached, simulation.DurationSeconds))
         {
-            AddCrossing(model, time.Unit.FromSi(reached), massUnit.FromSi(migration.MassPerArea));
+            AddCrossing(model, time.Unit.FromSi(reached), massUnit.FromSi(migration.MassPerArea), MassAxisKey);
         }
 
         PeriodMarks.Draw(model, result, time);
@@ -99,12 +110,17 @@ public static class TransferPlot
     /// True when the compartment's concentration is c0 + m / (V/A) for the amount m it received: not so once samples or
     /// first-order removal take some of it out, since m counts what they took and the compartment no longer holds it.
     /// </summary>
-    private static bool KeepsWhatItReceives(CompartmentFace compartment)
-        => compartment.Sampling is null && compartment.RemovalRatePerSecond <= 0;
+    private static bool KeepsWhatItReceives(CompartmentFace compartment, Side side, SimulationCase simulation)
+        => compartment.Sampling is null && compartment.RemovalRatePerSecond <= 0 && simulation.Schedule?.Renews(side) != true;
 
     // One receiving compartment that keeps all it receives: its concentration is a second scale on the amounts.
-    private static bool SecondScale(List<Medium> compartments) =>
-        compartments.Count == 1 && !compartments[0].Flipped && KeepsWhatItReceives((CompartmentFace)compartments[0].Face);
+    private static bool SecondScale(List<Medium> compartments, SimulationCase simulation) =>
+        compartments.Count == 1 && !compartments[0].Flipped && KeepsWhatItReceives((CompartmentFace)compartments[0].Face, compartments[0].Side, simulation);
+
+    // The panel's unit: the one compartment's own (a mass fraction of food where the display asks for one), else the
+    // case's concentration unit for all of them.
+    private static (UnitDefinition Unit, double Divisor) PanelScale(List<Medium> compartments, DisplayUnits display, UnitDefinition concentrationUnit)
+        => compartments.Count == 1 ? MediumScale((CompartmentFace)compartments[0].Face, display) : (concentrationUnit, 1);
 
     /// <summary>Where the plot shows the compartments' concentrations: nowhere, on a right-hand scale, or in a panel.</summary>
     internal static CompartmentConcentrations ConcentrationsShown(SimulationResult result)
@@ -113,19 +129,19 @@ public static class TransferPlot
             .Where(medium => medium.Face.HasFiniteVolume)
             .ToList();
         return compartments.Count == 0 ? CompartmentConcentrations.None
-            : SecondScale(compartments) ? CompartmentConcentrations.RightScale
+            : SecondScale(compartments, result.Case) ? CompartmentConcentrations.RightScale
             : CompartmentConcentrations.Panel;
     }
 
     // The solver's crossing time on the limit line; between output times the plotted curve is a straight chord, so
     // near a steep start it may cross the line elsewhere: the marker and the subtitle give the solver's time.
-    private static void AddCrossing(PlotModel model, double time, double level)
+    private static void AddCrossing(PlotModel model, double time, double level, string axisKey)
     {
         model.Annotations.Add(new PointAnnotation
         {
             X = time,
             Y = level,
-            YAxisKey = MassAxisKey,
+            YAxisKey = axisKey,
             Shape = MarkerType.Diamond,
             Size = PlotStyle.MarkerSize + 1,
             Fill = PlotStyle.Limit,
@@ -232,9 +248,9 @@ public static class TransferPlot
             : (DisplayText.ConcentrationUnit(display), 1);
 
     private static void AddConcentrationPanel(
-        PlotModel model, List<Medium> media, List<StateSample> samples, UnitDefinition timeUnit, UnitDefinition concentrationUnit)
+        PlotModel model, List<Medium> media, List<StateSample> samples, UnitDefinition timeUnit, (UnitDefinition Unit, double Divisor) scale, SimulationCase simulation)
     {
-        var axis = PlotFrame.Linear(AxisPosition.Left, $"Concentration ({DisplayText.Unit(concentrationUnit)})");
+        var axis = PlotFrame.Linear(AxisPosition.Left, $"Concentration ({DisplayText.Unit(scale.Unit)})");
         axis.Key = ConcentrationAxisKey;
         axis.StartPosition = 0;
         axis.EndPosition = 0.34;
@@ -249,24 +265,46 @@ public static class TransferPlot
             }
 
             var side = media[i].Side;
+            var fresh = FreshPortions(simulation, side);
+            DataPoint Point(double seconds, double kgPerCubicMeter) => new(timeUnit.FromSi(seconds), scale.Unit.FromSi(kgPerCubicMeter / scale.Divisor));
+
+            // The sample at a renewal is taken before it: the fresh portion's level follows at the same time, so the
+            // curve drops straight down rather than along a chord to the next output.
             var points = samples
                 .Select(sample => (sample.TimeSeconds, Face: side == Side.Left ? sample.Left : sample.Right))
                 .Where(pair => pair.Face is not null)
-                .Select(pair => new DataPoint(timeUnit.FromSi(pair.TimeSeconds), concentrationUnit.FromSi(pair.Face!.ConcentrationKgPerCubicMeter)));
+                .SelectMany(pair => fresh.FirstOrDefault(renewal => Math.Abs(renewal.Seconds - pair.TimeSeconds) <= 1e-9 * renewal.Seconds) is { Seconds: > 0 } renewal
+                    ? new[] { Point(pair.TimeSeconds, pair.Face!.ConcentrationKgPerCubicMeter), Point(pair.TimeSeconds, renewal.Level) }
+                    : [Point(pair.TimeSeconds, pair.Face!.ConcentrationKgPerCubicMeter)]);
             var series = Line(media[i].Name, points, i, ConcentrationAxisKey);
             series.RenderInLegend = false;
             model.Series.Add(series);
         }
     }
 
+    /// <summary>The times a schedule renews the medium on a side, with the fresh portion's concentration, kg/m3.</summary>
+    private static (double Seconds, double Level)[] FreshPortions(SimulationCase simulation, Side side)
+    {
+        if (simulation.Schedule is not { } schedule || !schedule.Renews(side))
+        {
+            return [];
+        }
+
+        var media = schedule.MediaByPeriod(side, simulation.Face(side));
+        return Enumerable.Range(1, schedule.Periods.Count - 1)
+            .Where(p => schedule.Periods[p].Renewed.Contains(side) && media[p] is CompartmentFace)
+            .Select(p => (schedule.Periods[p].StartSeconds, ((CompartmentFace)media[p]).InitialConcentrationKgPerCubicMeter))
+            .ToArray();
+    }
+
     // A dashed horizontal line with its label just above or below it, where no curve runs.
-    private static void AddLimit(PlotModel model, PlotOptions options, double value, string label, UnitDefinition massUnit)
+    private static void AddLimit(PlotModel model, PlotOptions options, double value, string label, UnitDefinition unit, string axisKey)
     {
         model.Annotations.Add(new LineAnnotation
         {
             Type = LineAnnotationType.Horizontal,
             Y = value,
-            YAxisKey = MassAxisKey,
+            YAxisKey = axisKey,
             Color = PlotStyle.Limit,
             StrokeThickness = PlotStyle.ReferenceThickness * 1.25,
             LineStyle = LineStyle.Dash,
@@ -274,7 +312,7 @@ public static class TransferPlot
         });
         using var pass = LayoutPass.Run(model, options);
         var xAxis = model.Axes.First(axis => axis.IsHorizontal());
-        var yAxis = model.Axes.First(axis => axis.Key == MassAxisKey);
+        var yAxis = model.Axes.First(axis => axis.Key == axisKey);
         var placer = new LabelPlacer(pass.PlotArea);
         foreach (var series in model.Series.OfType<LineSeries>())
         {
@@ -282,7 +320,7 @@ public static class TransferPlot
             placer.ReserveLine([.. series.Points.Select(point => new ScreenPoint(xAxis.Transform(point.X), seriesAxis.Transform(point.Y)))], 2);
         }
 
-        var text = $"{label} {DisplayText.Quantity(value, massUnit)}";
+        var text = $"{label} {DisplayText.Quantity(value, unit)}";
         var size = Labels.BoxSize(pass, text);
         var area = pass.PlotArea;
         var y = yAxis.Transform(value);
@@ -380,6 +418,20 @@ public static class TransferPlot
         {
             yield return LimitText(media, limit, options.LimitLabel, units, migration, result.Case.Display.Time);
         }
+        else if (migration is { PerContact: { } verdict } && result.Case.Face(migration.FoodSide) is CompartmentFace food)
+        {
+            yield return RepeatedUseText(verdict, Shown(migration.FoodConcentrationKgPerCubicMeter, MediumScale(food, result.Case.Display)));
+        }
+    }
+
+    /// <summary>The limit held against each fresh portion of food, and the repeated-use verdict at the judged contact.</summary>
+    private static string RepeatedUseText(RepeatedUseVerdict verdict, string limit)
+    {
+        var judged = verdict.LimitExceeded ? "above the limit" : "within the limit";
+        var rising = verdict.RisingFrom.Count > 0
+            ? $"; migration rises after contact {string.Join(", ", verdict.RisingFrom)}"
+            : string.Empty;
+        return $"{MigrationLimit.Label} {limit} in each fresh portion of food; contact {verdict.JudgedContact} is judged: {judged}{rising}";
     }
 
     private static string LimitText(List<Medium> media, double limit, string label, Units units, MigrationLimit? migration, UnitDefinition timeUnit)

@@ -59,3 +59,39 @@ public sealed class MigrationLimitPlotTests
         }
     }
 }
+
+/// <summary>
+/// An article for repeated use: the food is renewed, so what it received in all no longer reads as its concentration.
+/// The limit is then drawn on the food's concentration, in the panel under the amounts, at the limit itself (a mass
+/// fraction of food), and the subtitle gives the repeated-use verdict of the run.
+/// </summary>
+public sealed class RepeatedUseLimitPlotTests
+{
+    [Fact]
+    public void The_limit_sits_on_the_food_concentration_and_each_renewal_drops_to_the_fresh_portion()
+    {
+        var read = CaseDocument.ReadFile(Layers.Tests.TestSupport.RepoRoot.File("cases", "reusable-container-three-contacts.json"));
+        Assert.True(read.IsValid, read.FormatErrors());
+        var result = Simulator.Run(read.Case!);
+        var verdict = result.Schedule!.RepeatedUse!;
+
+        var model = TransferPlot.Create(result, new PlotOptions());
+
+        Assert.Equal(CompartmentConcentrations.Panel, TransferPlot.ConcentrationsShown(result));
+        var line = model.Annotations.OfType<LineAnnotation>().Single(annotation => annotation.Type == LineAnnotationType.Horizontal);
+        Assert.Equal("concentration", line.YAxisKey);
+        Assert.Equal(verdict.LimitKgPerKg!.Value * 1e6, line.Y, 9);
+        var subtitle = model.Subtitle.Replace('\n', ' ');
+        Assert.Contains($"contact {verdict.JudgedContact} is judged: {(verdict.LimitExceeded ? "above" : "within")} the limit", subtitle, StringComparison.Ordinal);
+
+        // At each renewal the curve drops straight down to the fresh portion (free of the substance here).
+        var food = model.Series.OfType<OxyPlot.Series.LineSeries>().Single(series => series.YAxisKey == "concentration");
+        foreach (var renewal in result.Case.Schedule!.RenewalTimes(Layers.Core.Domain.Side.Right))
+        {
+            var at = food.Points.Where(point => Math.Abs(point.X - (renewal / 86400)) <= 1e-9 * renewal).ToList();
+            Assert.Equal(2, at.Count);
+            Assert.True(at[0].Y > 0);
+            Assert.Equal(0, at[1].Y);
+        }
+    }
+}
