@@ -401,7 +401,7 @@ public static class TransferPlot
             var amount = NegligibleFloor.Hides(transferred, amountFloor)
                 ? "< " + DisplayText.Quantity(Floor(massUnit.FromSi(amountFloor)), massUnit)
                 : DisplayText.Quantity(massUnit.FromSi(transferred), massUnit);
-            var concentrationFloor = NegligibleFloor.ConcentrationIn(result, medium.Face);
+            var concentrationFloor = NegligibleFloor.ConcentrationIn(result, medium.Side);
             var concentration = medium.Face is CompartmentFace compartment && face is not null
                 ? NegligibleFloor.Hides(face.ConcentrationKgPerCubicMeter, concentrationFloor)
                     ? $" (< {Shown(concentrationFloor!.Value, MediumScale(compartment, result.Case.Display), floor: true)})"

@@ -33,7 +33,7 @@ public static class ResultTables
             foreach (var (side, face) in media)
             {
                 var sample = (side == Side.Left ? report.Sample.Left : report.Sample.Right)!;
-                var concentrationFloor = Simulation.NegligibleFloor.ConcentrationIn(result, face);
+                var concentrationFloor = Simulation.NegligibleFloor.ConcentrationIn(result, side);
                 row.Add(DisplayFormat.OrFloor(sample.ConcentrationKgPerCubicMeter, concentrationFloor, value => format.MediumConcentrationValue(value, face)));
                 row.Add(DisplayFormat.OrFloor(sample.TransferredIntoMediumPerArea, amountFloor, format.MassPerAreaValue));
             }

@@ -74,8 +74,8 @@ public static class ScheduleTables
         // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
         var amountFloor = NegligibleFloor.AmountPerArea(result);
         string Received(double value) => DisplayFormat.OrFloor(value, amountFloor, format.MassPerAreaValue);
-        string AtEnd(double value, FaceCondition face) =>
-            DisplayFormat.OrFloor(value, NegligibleFloor.ConcentrationIn(result, face), concentration => format.MediumConcentrationValue(concentration, face));
+        string AtEnd(double value, Side side, FaceCondition face) =>
+            DisplayFormat.OrFloor(value, NegligibleFloor.ConcentrationIn(result, side), concentration => format.MediumConcentrationValue(concentration, face));
         var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
         [
             outcome.Period.Label,
@@ -83,7 +83,7 @@ public static class ScheduleTables
             format.TimeValue(outcome.Period.EndSeconds),
             .. anyChange ? [AtStart(simulation, outcome.Period, format)] : Array.Empty<string>(),
             .. outcome.Media.SelectMany(medium => simulation.Face(medium.Side) is CompartmentFace face
-                ? new[] { Received(medium.ReceivedKgPerSquareMeter), AtEnd(medium.ConcentrationAtEndKgPerCubicMeter, face) }
+                ? new[] { Received(medium.ReceivedKgPerSquareMeter), AtEnd(medium.ConcentrationAtEndKgPerCubicMeter, medium.Side, face) }
                 : [Received(medium.ReceivedKgPerSquareMeter)]),
         ]).ToList();
         return new TextTable("Periods (amounts received during each period)", headers, rows);

@@ -117,6 +117,19 @@ public sealed class NewMediumTests
         Assert.Equal(low, result.Schedule!.Periods[0].Media.Single(medium => medium.Side == Side.Left).ConcentrationAtEndKgPerCubicMeter);
     }
 
+    [Fact]
+    public void The_tables_hide_a_concentration_below_the_same_floor_the_accuracy_promise_uses()
+    {
+        // A later portion six times the first: its concentrations are the lowest a given amount can make, so both the
+        // key figures and the "< floor" of the tables take their floor from it.
+        var result = Simulator.Run(TwoContacts(Cases.Compartment(0.5 * Thickness), Cases.Compartment(3 * Thickness), Cases.FiniteVolumes));
+        var floor = NegligibleFloor.ConcentrationIn(result, Side.Right)!.Value;
+
+        Tolerance.Relative(NegligibleFloor.AmountPerArea(result) / (3 * Thickness), floor, 1e-12, "floor over the larger portion");
+        var figure = result.NumericalError!.Figures.Select(error => error.Figure).First(figure => figure.Path.StartsWith("$.faces.right.concentrationKgPerCubicMeter", StringComparison.Ordinal));
+        Tolerance.Relative(floor, figure.NegligibleBelow, 1e-12, "the key figure's floor");
+    }
+
     private static SimulationCase TwoContacts(CompartmentFace first, CompartmentFace second, NumericsSettings numerics)
         => Cases.Make(Cases.Closed, first, EquilibratingSeconds + SecondSeconds, null, numerics, Cases.Layer("sheet", Thickness, Diffusivity, 1, InitialConcentration)) with
         {

@@ -54,11 +54,9 @@ public static class KeyFigures
             var medium = face.MediumName;
             Series(path + ".transferredMassPerAreaKgPerSquareMeter", FigureKind.Amount, medium + ": received per area", amount, report => Pick(report).TransferredIntoMediumPerArea);
             Series(path + ".fluxIntoMediumKgPerSquareMeterSecond", FigureKind.Flux, medium + ": flux into the medium", flux, report => Pick(report).FluxIntoMediumKgPerSquareMeterSecond);
-            if (face is CompartmentFace)
+            if (NegligibleFloor.LargestPortion(result.Case, side) is { } portion)
             {
-                // The floor of a concentration: the amount scale over the largest portion a schedule brings (the case's own
-                // without one), the smallest concentration that scale can make.
-                var portion = result.Case.MediaOn(side).OfType<CompartmentFace>().MaxBy(medium => medium.VolumePerAreaMeters)!;
+                // The floor of a concentration: the amount scale over the largest portion, the lowest concentration it makes.
                 var concentration = amount * portion.ContactAreaSquareMeters / portion.VolumeCubicMeters;
                 Series(path + ".concentrationKgPerCubicMeter", FigureKind.Concentration, medium + ": concentration", concentration, report => Pick(report).ConcentrationKgPerCubicMeter);
             }

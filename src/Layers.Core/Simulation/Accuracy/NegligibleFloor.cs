@@ -35,16 +35,24 @@ public static class NegligibleFloor
     }
 
     /// <summary>
-    /// The floor as a concentration in a face medium, kg/m3: the floor amount spread over a compartment
-    /// (amount x contact area / volume); null for a medium whose concentration is an input (a bath) or a closed face.
+    /// The floor as a concentration in the medium on a side, kg/m3: the floor amount spread over the compartment
+    /// (amount x contact area / volume; over the largest portion a schedule brings, the lowest concentration it can
+    /// make); null for a medium whose concentration is an input (a bath) or a closed face.
     /// </summary>
-    public static double? ConcentrationIn(SimulationResult result, FaceCondition face)
+    public static double? ConcentrationIn(SimulationResult result, Side side)
     {
         ArgumentNullException.ThrowIfNull(result);
-        return face is CompartmentFace compartment
-            ? AmountPerArea(result) * compartment.ContactAreaSquareMeters / compartment.VolumeCubicMeters
+        return LargestPortion(result.Case, side) is { } portion
+            ? AmountPerArea(result) * portion.ContactAreaSquareMeters / portion.VolumeCubicMeters
             : null;
     }
+
+    /// <summary>
+    /// The compartment portion on a side with the largest volume per contact area (the case's own without a schedule
+    /// that brings others): a given amount makes its lowest concentration there. Null for a bath or a closed face.
+    /// </summary>
+    internal static CompartmentFace? LargestPortion(SimulationCase simulation, Side side)
+        => simulation.MediaOn(side).OfType<CompartmentFace>().MaxBy(portion => portion.VolumePerAreaMeters);
 
     /// <summary>
     /// True when a figure is below the floor in magnitude and not zero: such a figure has no known accuracy (the error
