@@ -105,7 +105,8 @@ public static class FoodContactTables
         {
             foreach (var (layer, perVolume, fraction) in loading.Layers)
             {
-                Add($"maximum initial concentration: {layer}", double.IsPositiveInfinity(perVolume)
+                var judged = result.Schedule?.RepeatedUse is { } verdict ? $" (limit at contact {verdict.JudgedContact})" : string.Empty;
+                Add($"maximum initial concentration: {layer}{judged}", double.IsPositiveInfinity(perVolume)
                     ? "no limit (nothing reaches the food)"
                     : fraction is { } f ? MgPerKg(f) : format.Concentration(perVolume));
             }

@@ -24,6 +24,7 @@ internal static class FoodContactAssessment
         DiscreteModel model,
         IReadOnlyList<StageSystem> stages,
         FoodConcentrationWatcher watcher,
+        RepeatedUseVerdict? repeatedUse,
         CancellationToken cancellation)
     {
         ArgumentNullException.ThrowIfNull(simulation);
@@ -56,7 +57,9 @@ internal static class FoodContactAssessment
             DetectionReachedSeconds = detection,
             BarrierLags = BarrierLags(simulation, settings),
             Test = settings.TestCondition is { } test ? Compare(simulation, grid, own, settings, test, initial, watcher, cancellation) : null,
-            MaximumLoading = settings.SpecificMigrationLimit is { } sml ? Loading(simulation, grid, stages, final, sml, watcher, cancellation) : null,
+            MaximumLoading = settings.SpecificMigrationLimit is { } sml
+                ? Loading(simulation, grid, stages, repeatedUse?.JudgedValue ?? final, sml, watcher, cancellation)
+                : null,
             PartitionConvention = settings.PartitionConvention,
         };
     }
@@ -82,12 +85,21 @@ internal static class FoodContactAssessment
     }
 
     /// <summary>
-    /// The problem is linear in the initial state, so c_food(end) is affine in a factor s on the loaded layers'
-    /// initial concentrations: offset from a run with them empty (skipped when everything else starts empty, where
-    /// the offset is exactly zero), slope from the actual run.
+    /// The problem is linear in the initial state, so the judged food concentration is affine in a factor s on the
+    /// loaded layers' initial concentrations: offset from a run with them empty (skipped when everything else starts
+    /// empty, where the offset is exactly zero), slope from the actual run. The judged concentration is the food's at
+    /// the end, or, for an article in repeated use, at the end of the judged contact (renewals bring fresh portions at
+    /// fixed concentrations and layers put on come as the case loads them, so it stays affine in s).
     /// </summary>
+    /// <param name="simulation">The case as read.</param>
+    /// <param name="grid">Its grid.</param>
+    /// <param name="stages">Its stages.</param>
+    /// <param name="judged">The judged food concentration of the actual run, kg/kg.</param>
+    /// <param name="limit">The specific migration limit, kg/kg.</param>
+    /// <param name="watcher">The run's watcher of the food.</param>
+    /// <param name="cancellation">Stops the offset run.</param>
     private static MaximumLoading? Loading(
-        SimulationCase simulation, Grid grid, IReadOnlyList<StageSystem> stages, double final, double limit,
+        SimulationCase simulation, Grid grid, IReadOnlyList<StageSystem> stages, double judged, double limit,
         FoodConcentrationWatcher watcher, CancellationToken cancellation)
     {
         var loaded = simulation.Stack.Layers.Where(layer => layer.InitialConcentrationKgPerCubicMeter > 0).ToArray();
@@ -97,17 +109,19 @@ internal static class FoodContactAssessment
         }
 
         var offset = 0.0;
-        if (!OnlyLoadedLayersCarrySubstance(simulation))
+        var emptied = new LayerStack(simulation.Stack.Layers.Select(layer => layer with { InitialConcentrationKgPerCubicMeter = 0 }));
+        if (!OnlyLoadedLayersCarrySubstance(simulation) && simulation.Schedule is { ChangesMass: true })
         {
-            var empty = simulation.WithFirstStageDiffusivities() with
-            {
-                Stack = new LayerStack(simulation.Stack.Layers.Select(layer => layer with { InitialConcentrationKgPerCubicMeter = 0 })),
-            };
-            var start = DiffusionSystemBuilder.Build(empty, grid).InitialState;
+            // Renewals and layers put on are state events of a whole run: the offset comes from one, judged the same way.
+            offset = JudgedValue(simulation with { Stack = emptied }, cancellation);
+        }
+        else if (!OnlyLoadedLayersCarrySubstance(simulation))
+        {
+            var start = DiffusionSystemBuilder.Build(simulation.WithFirstStageDiffusivities() with { Stack = emptied }, grid).InitialState;
             offset = FinalValue(stages, start, grid, simulation, watcher, cancellation);
         }
 
-        var slope = final - offset;
+        var slope = judged - offset;
         var factor = slope > 0 ? Math.Max(0, (limit - offset) / slope) : double.PositiveInfinity;
         return new MaximumLoading(
             offset,
@@ -118,6 +132,29 @@ internal static class FoodContactAssessment
                 layer.InitialConcentrationKgPerCubicMeter * factor,
                 layer.DensityKgPerCubicMeter is { } rho ? layer.InitialConcentrationKgPerCubicMeter * factor / rho : (double?)null))
             .ToArray());
+    }
+
+    /// <summary>
+    /// The judged food concentration of a run of the case with its schedule's events, kg/kg: at the judged contact for an
+    /// article in repeated use, else at the end; NaN when the run does not complete.
+    /// </summary>
+    private static double JudgedValue(SimulationCase simulation, CancellationToken cancellation)
+    {
+        var (samples, statistics) = Simulator.RunTimeSeries(simulation, cancellation);
+        if (statistics.StopReason != StopReason.Completed)
+        {
+            return double.NaN;
+        }
+
+        if (ScheduleAnalysis.Of(simulation, samples)?.RepeatedUse is { } verdict)
+        {
+            return verdict.JudgedValue;
+        }
+
+        var food = simulation.FoodContact!;
+        var density = ((CompartmentFace)simulation.Face(food.FoodSide)).DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
+        var end = samples[^1];
+        return (food.FoodSide == Side.Left ? end.Left : end.Right)!.ConcentrationKgPerCubicMeter / density;
     }
 
     private static bool OnlyLoadedLayersCarrySubstance(SimulationCase simulation)

@@ -109,6 +109,7 @@ public static class Simulator
             statistics = statistics with { StopReason = reason };
         }
 
+        var schedule = ScheduleAnalysis.Of(simulation, recorder.Samples);
         return new SimulationResult
         {
             Case = simulation,
@@ -128,12 +129,12 @@ public static class Simulator
             WorstMassBalanceError = recorder.WorstMassBalanceError,
             DispersedLayers = undissolved?.Summaries ?? [],
             DiffusionCell = DiffusionCellAnalysis.Of(model.Case, recorder.Samples, sampling),
-            Schedule = ScheduleAnalysis.Of(simulation, recorder.Samples),
+            Schedule = schedule,
             Statistics = statistics,
             FailureReason = failure,
             FoodContact = watcher is null || statistics.StopReason != StopReason.Completed
                 ? null
-                : FoodContactAssessment.Assess(simulation, model, stages, watcher, cancellation),
+                : FoodContactAssessment.Assess(simulation, model, stages, watcher, schedule?.RepeatedUse, cancellation),
         };
     }
 

@@ -60,13 +60,32 @@ public sealed class NewPortionFoodContactTests
         }
     }
 
-    private static SimulationResult Run(string stages, string schedule)
+    [Theory]
+    [InlineData("0 mg/L")]
+    [InlineData("0.2 mg/L")]
+    public void The_maximum_loading_brings_the_judged_contact_to_the_limit(string freshFood)
+    {
+        // Fick's law is linear in the initial state and each fresh portion comes at a fixed concentration, so the judged
+        // (third of five) contact is affine in the loading: loaded at the reported maximum it sits on the limit.
+        const string stages = """ "stages": [ { "name": "test", "duration": "25 d", "temperature": "40 degC" } ] """;
+        const string schedule = """[ { "name": "contact", "duration": "5 d", "renew": ["right"], "repeat": 5 } ]""";
+        var first = Run(stages, schedule, freshFood: freshFood);
+        var loading = first.FoodContact!.MaximumLoading!;
+        Assert.Equal(3, first.Schedule!.RepeatedUse!.JudgedContact);
+        Assert.Equal(freshFood == "0 mg/L", loading.OffsetConcentration == 0);
+
+        var again = Run(stages, schedule, freshFood: freshFood, loading: $"{loading.Layers[0].KgPerCubicMeter * 1e3:R} mg/L");
+
+        Tolerance.Relative(60e-6, again.Schedule!.RepeatedUse!.JudgedValue, 1e-6, "judged contact at the maximum loading");
+    }
+
+    private static SimulationResult Run(string stages, string schedule, string freshFood = "0 mg/L", string loading = "500 mg/kg")
     {
         var json = $$"""
             {
-              "layers": [ { "name": "source", "thickness": "50 um", "diffusionCoefficient": "1e-9 cm2/s", "initialConcentration": "500 mg/kg", "density": "0.9 g/cm3" } ],
+              "layers": [ { "name": "source", "thickness": "50 um", "diffusionCoefficient": "1e-9 cm2/s", "initialConcentration": "{{loading}}", "density": "0.9 g/cm3" } ],
               "left": { "kind": "closed" },
-              "right": { "kind": "compartment", "name": "simulant", "mass": "1 kg", "density": "1 g/cm3", "area": "6 dm2" },
+              "right": { "kind": "compartment", "name": "simulant", "mass": "1 kg", "density": "1 g/cm3", "area": "6 dm2", "initialConcentration": "{{freshFood}}" },
               "schedule": {{schedule}},
               "foodContact": { {{stages}}, "specificMigrationLimit": "60 mg/kg" }
             }
