@@ -75,12 +75,25 @@ public static class FoodContactTables
         Add("food", $"{food.FoodName} ({(food.FoodSide == Side.Left ? "left" : "right")} face), {DisplayFormat.Number(food.AreaPerFoodMassSquareMetersPerKilogram * 100)} dm2 per kg"
             + (food.FoodDensityAssumed ? ", density taken as 1 kg/L" : string.Empty));
         Add("in the food at the end", $"{MgPerKg(food.FinalConcentration)}, {MgPerDm2(food.FinalMigrationPerArea)}");
-        if (food.SpecificMigrationLimit is { } limit)
+        if (food.SpecificMigrationLimit is { } limit && result.Schedule?.RepeatedUse is { } repeated)
         {
+            // An article in repeated use is judged at one contact, each with a fresh portion of food: the verdict reads that
+            // contact, and a limit reached earlier is said to be so.
+            var judged = repeated.JudgedValue;
             Add("specific migration limit", MgPerKg(limit));
+            Add($"verdict (model, contact {repeated.JudgedContact})", judged <= limit
+                ? $"below the limit: {DisplayFormat.Percent(judged / limit)} of it, margin {MgPerKg(limit - judged)}"
+                : $"EXCEEDS the limit: {DisplayFormat.Percent(judged / limit)} of it");
+            Add("limit first reached at", food.LimitReachedSeconds is { } t
+                ? $"{format.Time(t)}, in contact {ContactAt(result.Case, food.FoodSide, t)}"
+                : "not within the history");
+        }
+        else if (food.SpecificMigrationLimit is { } single)
+        {
+            Add("specific migration limit", MgPerKg(single));
             Add("verdict (model)", food.MeetsLimit == true
-                ? $"below the limit: {DisplayFormat.Percent(food.FinalConcentration / limit)} of it, margin {MgPerKg(food.LimitMargin!.Value)}"
-                : $"EXCEEDS the limit: {DisplayFormat.Percent(food.FinalConcentration / limit)} of it");
+                ? $"below the limit: {DisplayFormat.Percent(food.FinalConcentration / single)} of it, margin {MgPerKg(food.LimitMargin!.Value)}"
+                : $"EXCEEDS the limit: {DisplayFormat.Percent(food.FinalConcentration / single)} of it");
             Add("limit reached at", food.LimitReachedSeconds is { } t ? format.Time(t) : "not within the history");
         }
 
@@ -120,6 +133,10 @@ public static class FoodContactTables
 
         return new TextTable("Food contact", ["quantity", "value"], rows);
     }
+
+    /// <summary>Which contact with a fresh portion of food a time falls in, from 1.</summary>
+    private static int ContactAt(SimulationCase simulation, Side foodSide, double timeSeconds)
+        => simulation.Schedule!.Contacts(foodSide).TakeWhile(contact => contact.StartSeconds <= timeSeconds).Count();
 
     private static string MgPerKg(double massFraction) => $"{DisplayFormat.Number(massFraction * 1e6)} mg/kg";
 

@@ -55,6 +55,23 @@ public sealed class RepeatedUseTests
         Assert.Equal(verdict.JudgedMigrationKgPerSquareMeter, row.FoodMigrationKgPerSquareMeter);
     }
 
+    [Fact]
+    public void The_food_contact_table_gives_the_verdict_of_the_judged_contact_and_where_the_limit_was_first_reached()
+    {
+        var result = Run(barrier: null, limit: "1 mg/kg", contacts: 5);
+
+        var verdict = result.Schedule!.RepeatedUse!;
+        var rows = Layers.Core.Reports.FoodContactTables.For(result).SelectMany(table => table.Rows).ToDictionary(row => row[0], row => row[1]);
+        var judged = rows["verdict (model, contact 3)"];
+        Assert.StartsWith(verdict.LimitExceeded ? "EXCEEDS" : "below", judged, StringComparison.Ordinal);
+        Assert.DoesNotContain("verdict (model)", rows.Keys);
+
+        // The first contact starts from the loaded wall and reaches the limit first, within its own contact.
+        var first = result.FoodContact!.LimitReachedSeconds!.Value;
+        Assert.True(first < result.Case.Schedule!.Periods[0].EndSeconds);
+        Assert.EndsWith("in contact 1", rows["limit first reached at"], StringComparison.Ordinal);
+    }
+
     private static SimulationResult Run(string? barrier, string limit, int contacts = 3)
     {
         var layers = barrier is null
