@@ -60,6 +60,20 @@ public sealed class NewPortionFoodContactTests
         }
     }
 
+    [Fact]
+    public void A_stage_reports_the_food_at_its_own_end_when_the_schedule_splits_it()
+    {
+        // A film kept in a reel for 5 d, then filled: the one temperature stage is run in two parts, and its report reads
+        // the food at its end, not at the end of the first part (where the food, out of contact, holds nothing).
+        var result = Run(
+            """ "stages": [ { "name": "storage", "duration": "15 d", "temperature": "40 degC" } ] """,
+            """[ { "name": "reel", "duration": "5 d", "close": ["right"] }, { "name": "filled", "duration": "10 d", "open": ["right"] } ]""");
+
+        var food = result.FoodContact!;
+        Assert.True(food.FinalConcentration > 0);
+        Assert.Equal(food.FinalConcentration, food.Stages.Single().FoodConcentrationAtEnd);
+    }
+
     [Theory]
     [InlineData("0 mg/L")]
     [InlineData("0.2 mg/L")]
