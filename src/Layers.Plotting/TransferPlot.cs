@@ -107,8 +107,9 @@ public static class TransferPlot
     }
 
     /// <summary>
-    /// True when the compartment's concentration is c0 + m / (V/A) for the amount m it received: not so once samples or
-    /// first-order removal take some of it out, since m counts what they took and the compartment no longer holds it.
+    /// True when the compartment's concentration is c0 + m / (V/A) for the amount m it received: not so once samples,
+    /// first-order removal or a schedule's renewals take some of it out, since m counts what they took and the
+    /// compartment no longer holds it.
     /// </summary>
     private static bool KeepsWhatItReceives(CompartmentFace compartment, Side side, SimulationCase simulation)
         => compartment.Sampling is null && compartment.RemovalRatePerSecond <= 0 && simulation.Schedule?.Renews(side) != true;
