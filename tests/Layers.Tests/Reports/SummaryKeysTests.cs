@@ -18,7 +18,7 @@ public sealed partial class SummaryKeysTests
         [
             "laminate-fatty-food", "patch-on-skin", "diffusion-cell-membrane", "two-liquid-layers", "membrane-time-lag",
             "hot-fill-barrier-shelf-life", "skin-diffusion-cell-sampling", "dispersed-matrix-patch", "reusable-container-three-contacts",
-            "daily-patch-week",
+            "daily-patch-week", "donor-concentration-steps",
         ];
 
     [Fact]
