@@ -74,6 +74,27 @@ public sealed class FoodContactVerificationTests
         Assert.False(result.MeetsLimit);
     }
 
+    [Theory]
+    [InlineData(1.0)]
+    [InlineData(1000.0)]
+    public void Time_the_detection_limit_is_reached_long_before_the_first_report_matches_the_root_of_the_series(double kFilmOverFood)
+    {
+        // At the default accuracy: 0.01 mg/kg in the food is reached within seconds of a 10 d run reported at its end, and
+        // the mesh resolves that time too.
+        const double diffusivity = 1e-14;
+        var result = Simulator.Run(FoodCases.Film(kFilmOverFood, [new TemperatureStage("storage", 10 * Day, 298.15)], new GivenDiffusivity(diffusivity)));
+        var food = result.FoodContact!;
+
+        // Root of c_food(t) / detection limit - 1 on the series (Crank eq. 4.37, with its short-time form 4.38; from
+        // memory), by Math.NET's Brent method, time in seconds.
+        double Excess(double seconds) => (FoodCases.FoodConcentration(PlaneSheetIntoLimitedVolume.TransferredMassPerArea(
+            diffusivity, FoodCases.Thickness, FoodCases.InitialConcentration, FoodCases.VolumePerArea, kFilmOverFood, seconds)) / food.DetectionLimit) - 1;
+        var expected = Brent.FindRoot(Excess, 1e-6, 10 * Day, 1e-12);
+        Assert.True(expected < 1e-4 * result.Case.DurationSeconds);
+        Tolerance.Relative(expected, food.DetectionReachedSeconds!.Value, 1e-3, "time the detection limit is reached");
+        Assert.DoesNotContain(result.NumericalError!.AboveAccuracy, error => error.Figure.Path == "$.foodContact.detectionReachedSeconds");
+    }
+
     [Fact]
     public void Maximum_initial_concentration_meets_the_limit_exactly_when_used()
     {
