@@ -38,6 +38,8 @@ public static class VerificationSuite
             {
                 results.AddRange(MultiLayerStacks(cancellation));
                 results.Add(RenewedVolume(cancellation));
+                results.Add(NewPortion(cancellation));
+                results.Add(DonorSteps(cancellation));
             }
         }
 
@@ -101,6 +103,70 @@ public static class VerificationSuite
             $"{Crank}, eq. 4.37 (from memory), its eigenfunction expansion restarted at each renewal",
             "mass into the third fresh solution, D T/L^2 = 0.2 per contact, kg/m2",
             expected[^1], result.Schedule!.Periods[^1].Media.Single().ReceivedKgPerSquareMeter, DefaultTolerance);
+    }
+
+    /// <summary>
+    /// A sheet left in a first limited volume until it is at equilibrium with it (D T/L^2 = 20), then renewed with a
+    /// portion of another volume and K (a schedule's renewal with new properties; finite volumes only): the second
+    /// contact starts from a uniform sheet, so it is Crank's limited volume again, with the second portion's alpha.
+    /// </summary>
+    private static BenchmarkResult NewPortion(CancellationToken cancellation)
+    {
+        const double thickness = 50e-6, diffusivity = 4e-14, c0 = 920, firstVolume = 0.5 * thickness, secondVolume = 3 * thickness, secondK = 2;
+        var scale = thickness * thickness / diffusivity;
+        var (first, second) = (20 * scale, 0.1 * scale);
+        var portion = new CompartmentFace("solution", secondVolume, 1, secondK, 0, null);
+        var periods = new[]
+        {
+            new SchedulePeriod("first portion", (0, 0), 1, 1, 0, first, []),
+            new SchedulePeriod("second portion", (1, 0), 1, 1, first, second, [Side.Right]) { NewMedia = new Dictionary<Side, FaceCondition> { [Side.Right] = portion } },
+        };
+        var simulation = Case(new ClosedFace(), new CompartmentFace("solution", firstVolume, 1, 1, 0, null), first + second, [Layer("sheet", thickness, diffusivity, 1, c0)])
+            with
+            {
+                Schedule = new ContactSchedule(periods),
+            };
+        var result = Simulator.Run(simulation, cancellation);
+
+        // At equilibrium with the first portion (K 1): c_sheet = c0 L / (L + V/A); Crank's K is c_sheet / c_solution = 1 / K_medium.
+        var sheet = c0 * thickness / (thickness + firstVolume);
+        var expected = PlaneSheetIntoLimitedVolume.TransferredMassPerArea(diffusivity, thickness, sheet, secondVolume, 1 / secondK, second);
+        return new BenchmarkResult(
+            "plane sheet renewed with a portion of another volume and K, alpha 6",
+            $"{Crank}, eq. 4.37 (from memory), from the sheet at equilibrium with the first portion",
+            "mass into the second portion at D T/L^2 = 0.1, kg/m2",
+            expected, result.Schedule!.Periods[^1].Media.Single().ReceivedKgPerSquareMeter, DefaultTolerance);
+    }
+
+    /// <summary>
+    /// A membrane between a sink and a donor bath whose level is raised at D t/L^2 = 0.3 (a schedule's renewal of a
+    /// bath; finite volumes only): by the linearity of Fick's law the amount passed is the time-lag solution of the first
+    /// level plus that of the step, started when the level changes.
+    /// </summary>
+    private static BenchmarkResult DonorSteps(CancellationToken cancellation)
+    {
+        const double thickness = 20e-6, diffusivity = 3e-13, k = 4, low = 5, high = 12;
+        var scale = thickness * thickness / diffusivity;
+        var (change, end) = (0.3 * scale, 1.5 * scale);
+        var periods = new[]
+        {
+            new SchedulePeriod("low", (0, 0), 1, 1, 0, change, []),
+            new SchedulePeriod("high", (1, 0), 1, 1, change, end - change, [Side.Left]) { NewMedia = new Dictionary<Side, FaceCondition> { [Side.Left] = new BathFace("source", high, 1, null) } },
+        };
+        var simulation = Case(new BathFace("source", low, 1, null), new BathFace("sink", 0, 1, null), end, [Layer("membrane", thickness, diffusivity, k, 0)])
+            with
+            {
+                Schedule = new ContactSchedule(periods),
+            };
+        var result = Simulator.Run(simulation, cancellation);
+        double Analytic(double t) => MembraneTimeLag.CumulativeMassPerArea(diffusivity, thickness, k, low, t)
+            + (t > change ? MembraneTimeLag.CumulativeMassPerArea(diffusivity, thickness, k, high - low, t - change) : 0);
+        var curve = Curve(result, "D t / L^2 [-]", "Q [kg/m2]", scale, sample => sample.Right!.TransferredIntoMediumPerArea, Analytic);
+        return new BenchmarkResult(
+            "membrane with a donor raised in steps",
+            $"Daynes-Barrer; {Crank}, eq. 4.24a (from memory), the first level plus the step",
+            "cumulative amount Q at D t/L^2 = 1.5, kg/m2",
+            Analytic(end), result.Reports[^1].Sample.Right!.TransferredIntoMediumPerArea, DefaultTolerance, curve);
     }
 
     private static IEnumerable<BenchmarkResult> Membrane(Pass pass, CancellationToken cancellation)
