@@ -25,7 +25,7 @@ public static class InputLabels
     /// <summary>The label of the value at the parsed steps of a path.</summary>
     internal static string Of(JsonObject? root, IReadOnlyList<object> steps)
     {
-        if (ByLayerName(root, steps) is { } named)
+        if ((ByLayerName(root, steps) ?? ByRenewal(root, steps)) is { } named)
         {
             return named;
         }
@@ -62,6 +62,29 @@ public static class InputLabels
         _ => null,
     };
 
+    /// <summary>
+    /// A property of the fresh portion a schedule's renewal brings, named by its medium and its period:
+    /// <c>$.schedule[1].renew[0].volume</c> is "simulant volume at refill"; null for other paths.
+    /// </summary>
+    private static string? ByRenewal(JsonObject? root, IReadOnlyList<object> steps)
+    {
+        var at = steps.Count switch
+        {
+            5 when steps is ["schedule", int, "renew", int, string] => 2,
+            7 when steps is ["schedule", int, "periods", int, "renew", int, string] => 4,
+            _ => -1,
+        };
+        if (at < 0)
+        {
+            return null;
+        }
+
+        var renewal = root is null ? null : JsonPathSteps.Find(root, [.. steps.Take(at + 2)]);
+        var side = renewal is JsonObject entry && entry["face"] is JsonValue face && face.TryGetValue<string>(out var text) ? text : null;
+        var medium = side is "left" or "right" ? Of(root, [side]) : "fresh portion";
+        return $"{medium} {Words((string)steps[^1])} at {Of(root, [.. steps.Take(at)])}";
+    }
+
     /// <summary>The name of the object reached by step <paramref name="i"/> when people know it by one, else null.</summary>
     private static string? OwnerName(IReadOnlyList<object> steps, int i, JsonNode? node)
     {
@@ -74,6 +97,8 @@ public static class InputLabels
             (1, int index) when steps[0] is "layers" => own ?? $"layer {index + 1}",
             (0, "left" or "right") => own ?? $"{steps[0]} medium",
             (2, int index) when steps[0] is "foodContact" && steps[1] is "stages" => own ?? $"stage {index + 1}",
+            (1, int index) when steps[0] is "schedule" => own ?? $"period {index + 1}",
+            (3, int index) when steps[0] is "schedule" && steps[2] is "periods" => own ?? $"period {index + 1}",
             (0, "referenceMedium") => own ?? "reference medium",
             _ => null,
         };

@@ -21,6 +21,11 @@ public sealed class InputLabelsTests
             "layerDiffusion": { "sealant": { "referenceTemperature": "23 degC", "activationEnergy": "80 kJ/mol" } }
           },
           "reportTimes": [ "1 d", "10 d" ],
+          "schedule": [
+            { "name": "first fill", "duration": "5 d" },
+            { "name": "refill", "duration": "5 d", "renew": [ { "face": "right", "volume": "2 L" } ] },
+            { "repeat": 2, "periods": [ { "duration": "1 d", "renew": [ { "face": "right", "partitionCoefficient": 2 } ] } ] }
+          ],
           "duration": "10 d"
         }
         """)!.AsObject();
@@ -36,6 +41,9 @@ public sealed class InputLabelsTests
     [InlineData("$.foodContact.stages[0].temperature", "hot fill temperature")]
     [InlineData("$.foodContact.stages[0].diffusionCoefficients.sealant", "sealant diffusion coefficient in hot fill")]
     [InlineData("$.foodContact.layerDiffusion.sealant.activationEnergy", "sealant activation energy")]
+    [InlineData("$.schedule[0].duration", "first fill duration")]
+    [InlineData("$.schedule[1].renew[0].volume", "olive oil volume at refill")]
+    [InlineData("$.schedule[2].periods[0].renew[0].partitionCoefficient", "olive oil partition coefficient at period 1")]
     public void Names_the_owner_and_the_quantity_in_words(string path, string expected) =>
         Assert.Equal(expected, InputLabels.Of(Document, path));
 
