@@ -20,8 +20,9 @@ public static class ScheduleTables
             return [];
         }
 
+        // The peak and trough matter where periods repeat (doses) or where the media change (a donor raised in steps).
         var tables = new List<TextTable> { Periods(result, schedule) };
-        if (schedule.PeriodicSteadyStates.Count > 0)
+        if (schedule.PeriodicSteadyStates.Count > 0 || result.Case.Schedule is { ChangesMedia: true })
         {
             tables.Add(Fluxes(result, schedule));
         }

@@ -130,6 +130,30 @@ public sealed class NewMediumTests
         Tolerance.Relative(floor, figure.NegligibleBelow, 1e-12, "the key figure's floor");
     }
 
+    [Fact]
+    public void The_donor_raised_in_steps_demo_reaches_each_level_s_steady_flux_and_tables_it()
+    {
+        // 12 h periods on a membrane whose diffusion time L^2/D is 5.6 h: each level settles to D K c / L (the steady
+        // flux of a membrane, Crank 1975, ch. 4, from eq. 4.24a, from memory) well within its period.
+        var read = Layers.Core.Studies.CaseDocument.ReadFile(RepoRoot.File("cases", "donor-concentration-steps.json"));
+        Assert.True(read.IsValid, read.FormatErrors());
+        var result = Simulator.Run(read.Case!);
+        Assert.True(result.Completed, result.FailureReason);
+
+        var membrane = read.Case!.Stack.Layers.Single();
+        var levels = read.Case.Schedule!.MediaByPeriod(Side.Left, read.Case.Left).Cast<BathFace>().Select(bath => bath.ConcentrationKgPerCubicMeter).ToArray();
+        Assert.Equal([1.0, 3.0, 9.0], levels.Select(level => Math.Round(level, 9)));
+        foreach (var (outcome, level) in result.Schedule!.Periods.Zip(levels))
+        {
+            var steady = membrane.DiffusivitySquareMetersPerSecond * membrane.PartitionCoefficient * level / membrane.ThicknessMeters;
+            var receptor = outcome.Media.Single(medium => medium.Side == Side.Right);
+            Tolerance.Relative(steady, receptor.HighestFluxKgPerSquareMeterSecond, 1e-3, $"highest flux in {outcome.Period.Label}");
+        }
+
+        Assert.Contains(Layers.Core.Reports.ScheduleTables.For(result), table => table.Title.StartsWith("Flux into each medium", StringComparison.Ordinal));
+        Assert.Null(result.Permeation!.LagTimeSeconds);
+    }
+
     private static SimulationCase TwoContacts(CompartmentFace first, CompartmentFace second, NumericsSettings numerics)
         => Cases.Make(Cases.Closed, first, EquilibratingSeconds + SecondSeconds, null, numerics, Cases.Layer("sheet", Thickness, Diffusivity, 1, InitialConcentration)) with
         {
