@@ -45,7 +45,7 @@ public static class SweepPlot
         var names = sweep.CaseNames.ToHashSet(StringComparer.Ordinal);
         var points = rows
             .Where(row => names.Contains(row.Name) && row.Parameters.Count > 0)
-            .Select(row => (Row: row, X: row.Parameters[0].Number, Y: BatchTradeUnits.In(unit, row.Results?.Pick(sweep.Result))))
+            .Select(row => (Row: row, X: row.Parameters[0].Number, Y: BatchTradeUnits.In(unit, Value(sweep, row))))
             .Where(point => point.Y is { } y && double.IsFinite(y) && double.IsFinite(point.X))
             .ToList();
         if (points.Count == 0)
@@ -54,7 +54,9 @@ public static class SweepPlot
         }
 
         var first = points[0].Row.Parameters[0];
-        var resultName = NamedResults.Words(sweep.Result);
+        var resultName = NamedResults.IsReadInPeriod(sweep.Result)
+            ? new Layers.Core.Studies.ResultMeasure(sweep.Result) { Period = sweep.ResultPeriod }.Label
+            : NamedResults.Words(sweep.Result);
         var xTitle = first.Unit.Length > 0 ? $"{first.Label} ({DisplayText.Unit(first.Unit)})" : first.Label;
         var limits = points.Select(point => point.Row.Limit).OfType<LimitCheck>().Where(limit => limit.Result == sweep.Result)
             .Select(limit => unit.FromSi(limit.LimitSi)).Distinct().Order().ToList();
@@ -142,4 +144,9 @@ public static class SweepPlot
 
     private static bool Spans(IReadOnlyList<double> values) =>
         values.All(value => value > 0) && values.Max() / values.Min() >= LogSpan;
+
+    /// <summary>The swept result of a row, SI: a figure of one period from the row's own, the others from its key results.</summary>
+    private static double? Value(SweepGroup sweep, BatchRow row) => NamedResults.IsReadInPeriod(sweep.Result)
+        ? row.PeriodFigure?.ValueSi
+        : row.Results?.Pick(sweep.Result);
 }

@@ -1,5 +1,7 @@
 using Layers.Core.Cases;
 using Layers.Core.Files;
+using Layers.Core.Results;
+using Layers.Core.Studies;
 
 namespace Layers.Core.Batch;
 
@@ -87,8 +89,9 @@ public static class BatchCollector
             return [new BatchItem(name, file, null, expansion.Errors, [])];
         }
 
-        sweeps.Add(new SweepGroup(name, file, result, expansion.Variants.Select(variant => variant.Name).ToList()));
-        return expansion.Variants.Select(variant => new BatchItem(variant.Name, file, variant.Json, [], variant.Values));
+        sweeps.Add(new SweepGroup(name, file, result, expansion.Variants.Select(variant => variant.Name).ToList()) { ResultPeriod = expansion.ResultPeriod });
+        var figure = NamedResults.IsReadInPeriod(result) ? new ResultMeasure(result) { Period = expansion.ResultPeriod } : null;
+        return expansion.Variants.Select(variant => new BatchItem(variant.Name, file, variant.Json, [], variant.Values) { PeriodFigure = figure });
     }
 
     /// <summary>

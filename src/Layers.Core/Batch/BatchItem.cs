@@ -1,5 +1,6 @@
 using Layers.Core.Cases;
 using Layers.Core.Results;
+using Layers.Core.Studies;
 
 namespace Layers.Core.Batch;
 
@@ -18,6 +19,12 @@ public sealed record BatchItem(
 {
     /// <summary>The inputs that differ between the plain case files of the batch (<see cref="VariedInputs"/>); empty for a sub-case.</summary>
     public IReadOnlyList<SweepValue> Inputs { get; init; } = [];
+
+    /// <summary>
+    /// For a sub-case of a sweep that plots a figure of one period of a schedule, that figure (its row holds it, as a
+    /// batch summary has no column per period); null otherwise.
+    /// </summary>
+    public ResultMeasure? PeriodFigure { get; init; }
 }
 
 /// <summary>The sub-cases of one sweep file, for its plot.</summary>
@@ -25,7 +32,11 @@ public sealed record BatchItem(
 /// <param name="File">The sweep file.</param>
 /// <param name="Result">The key result to plot against the first parameter.</param>
 /// <param name="CaseNames">The names of its sub-cases, in expansion order.</param>
-public sealed record SweepGroup(string Name, string File, NamedResult Result, IReadOnlyList<string> CaseNames);
+public sealed record SweepGroup(string Name, string File, NamedResult Result, IReadOnlyList<string> CaseNames)
+{
+    /// <summary>For a figure of one period, the label of the period; null for the last period, and for other results.</summary>
+    public string? ResultPeriod { get; init; }
+}
 
 /// <summary>Everything a batch will run, ordered by name.</summary>
 /// <param name="Items">The cases, ordered by name then file.</param>

@@ -26,6 +26,9 @@ public sealed record BatchRow(
     /// <summary>The verdict against a limit given in the case; always null until the case format has a limit key.</summary>
     public LimitCheck? Limit { get; init; }
 
+    /// <summary>The figure of one period a sweep plots, read from this sub-case's run; null for other rows.</summary>
+    public PeriodFigureValue? PeriodFigure { get; init; }
+
     /// <summary>Wall time of the solve, s: shown in summary.md and timing.csv, never in summary.csv or summary.json.</summary>
     public double? SolveSeconds { get; init; }
 

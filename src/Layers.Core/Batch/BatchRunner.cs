@@ -85,6 +85,7 @@ public static class BatchRunner
                 SolveSeconds = outcome.SolveSeconds,
                 Limit = outcome.Limit,
                 Inputs = item.Inputs,
+                PeriodFigure = item.PeriodFigure is { } figure ? new PeriodFigureValue(figure, figure.Read(outcome.Result!)) : null,
             },
             CaseRunStatus.Invalid => Row(item, BatchStatus.Invalid, outcome.Message),
             CaseRunStatus.SolverFailed or CaseRunStatus.OutputFailed => Row(item, BatchStatus.Failed, outcome.Message),

@@ -63,6 +63,7 @@ public static class BatchSummaryJson
                 entry.GetProperty("results") is { ValueKind: JsonValueKind.Object } results ? ReadResults(results) : null)
             {
                 Inputs = entry.TryGetProperty("inputs", out var inputs) ? Values(inputs) : [],
+                PeriodFigure = entry.TryGetProperty("periodFigure", out var figure) ? ReadPeriodFigure(figure) : null,
                 Limit = entry.TryGetProperty("limit", out var limit) && limit.ValueKind == JsonValueKind.Object
                     ? new LimitCheck(
                         LimitCheck.ParseQuantity(limit.GetProperty("quantity").GetString()!)
@@ -104,6 +105,23 @@ public static class BatchSummaryJson
         else
         {
             json.WriteNull("results");
+        }
+
+        if (row.PeriodFigure is { } figure)
+        {
+            json.WriteStartObject("periodFigure");
+            json.WriteString("name", figure.Measure.Name);
+            if (figure.Measure.Period is { } period)
+            {
+                json.WriteString("period", period);
+            }
+            else
+            {
+                json.WriteNull("period");
+            }
+
+            SummaryJson.WriteNullable(json, "value", figure.ValueSi);
+            json.WriteEndObject();
         }
 
         if (row.Limit is { } limit)
@@ -149,6 +167,20 @@ public static class BatchSummaryJson
                 return value.TryGetProperty("label", out var label) ? read with { Label = label.GetString()! } : read;
             })
             .ToList();
+
+    private static PeriodFigureValue ReadPeriodFigure(JsonElement figure)
+    {
+        var name = figure.GetProperty("name").GetString()!;
+        var result = NamedResults.All.Where(NamedResults.IsReadInPeriod).FirstOrDefault(candidate => NamedResults.Name(candidate) == name, (NamedResult)(-1));
+        if (!Enum.IsDefined(result))
+        {
+            throw new JsonException($"unknown figure of one period '{name}'");
+        }
+
+        var period = figure.GetProperty("period") is { ValueKind: JsonValueKind.String } label ? label.GetString() : null;
+        var value = figure.GetProperty("value") is { ValueKind: JsonValueKind.Number } number ? number.GetDouble() : (double?)null;
+        return new PeriodFigureValue(new Studies.ResultMeasure(result) { Period = period }, value);
+    }
 
     private static BatchKeyResults ReadResults(JsonElement results)
     {

@@ -20,11 +20,15 @@ public static partial class SweepExpander
 
     private static readonly string[] SweepKeys = ["parameters", "result"];
 
-    // A sweep plots a result that every sub-case's row of the batch summary holds, so it accepts exactly those.
+    // A sweep plots a result that every sub-case's row of the batch summary holds, or a figure of one period of a
+    // schedule, which the row of a sweep's sub-case holds as well.
     private static readonly Dictionary<string, NamedResult> ResultNames =
-        NamedResults.InBatchSummary.ToDictionary(NamedResults.Name, result => result, StringComparer.Ordinal);
+        NamedResults.InBatchSummary.Concat(NamedResults.All.Where(NamedResults.IsReadInPeriod))
+            .ToDictionary(NamedResults.Name, result => result, StringComparer.Ordinal);
 
-    /// <summary>The names <c>$.sweep.result</c> accepts: those of the results a batch summary lists.</summary>
+    private static readonly string[] ResultKeys = ["name", "period"];
+
+    /// <summary>The names <c>$.sweep.result</c> accepts: those of the results a batch summary lists, and the figures of one period.</summary>
     public static IReadOnlyCollection<string> ResultNamesAccepted => ResultNames.Keys;
 
     /// <summary>True when <paramref name="json"/> is a JSON object with a top-level <c>sweep</c> member.</summary>
@@ -70,7 +74,7 @@ public static partial class SweepExpander
             }
         }
 
-        var result = ReadResult(sweep, errors);
+        var (result, period) = ReadResult(sweep, errors);
         var parameters = ReadParameters(root, sweep, errors);
         if (errors.Count > 0)
         {
@@ -106,27 +110,76 @@ public static partial class SweepExpander
             variants.Add(variant with { Json = copy.ToJsonString(new JsonSerializerOptions { WriteIndented = true }) });
         }
 
-        return new SweepExpansion(variants, result, []);
+        if (result is { } named && NamedResults.IsReadInPeriod(named) && PeriodProblem(variants[0].Json, fileName, named, period) is { } problem)
+        {
+            return Failed(problem);
+        }
+
+        return new SweepExpansion(variants, result, []) { ResultPeriod = period };
     }
 
     private static SweepExpansion Failed(CaseError error) => new([], null, [error]);
 
-    private static NamedResult? ReadResult(JsonObject sweep, List<CaseError> errors)
+    /// <summary>
+    /// <c>$.sweep.result</c>: a result's name, or <c>{ "name", "period" }</c> for a figure of one period of a schedule
+    /// (without <c>period</c>, the last).
+    /// </summary>
+    private static (NamedResult? Result, string? Period) ReadResult(JsonObject sweep, List<CaseError> errors)
     {
         var expected = string.Join(", ", ResultNames.Keys);
-        if (sweep["result"] is null)
+        switch (sweep["result"])
         {
-            errors.Add(new CaseError("$.sweep.result", $"is required; one of {expected}"));
+            case null:
+                errors.Add(new CaseError("$.sweep.result", $"is required; one of {expected}"));
+                return (null, null);
+            case JsonValue value when value.TryGetValue<string>(out var name) && ResultNames.TryGetValue(name, out var result):
+                return (result, null);
+            case JsonObject entry:
+                foreach (var (key, _) in entry.Where(pair => !ResultKeys.Contains(pair.Key)))
+                {
+                    errors.Add(new CaseError($"$.sweep.result.{key}", $"unknown key; expected one of {string.Join(", ", ResultKeys)}"));
+                }
+
+                if (entry["name"] is not JsonValue named || !named.TryGetValue<string>(out var periodName)
+                    || !ResultNames.TryGetValue(periodName, out var periodResult) || !NamedResults.IsReadInPeriod(periodResult))
+                {
+                    var periodNames = string.Join(", ", ResultNames.Where(pair => NamedResults.IsReadInPeriod(pair.Value)).Select(pair => pair.Key));
+                    errors.Add(new CaseError("$.sweep.result.name", $"must be a figure of one period, one of {periodNames}; got {entry["name"]?.ToJsonString() ?? "nothing"}"));
+                    return (null, null);
+                }
+
+                if (entry["period"] is { } given && (given is not JsonValue label || !label.TryGetValue<string>(out _)))
+                {
+                    errors.Add(new CaseError("$.sweep.result.period", $"expected the label of a period, e.g. \"dose 7 of 7\"; got {given.ToJsonString()}"));
+                    return (null, null);
+                }
+
+                return (periodResult, entry["period"]?.GetValue<string>());
+            default:
+                errors.Add(new CaseError("$.sweep.result", $"must be one of {expected}; got {sweep["result"]!.ToJsonString()}"));
+                return (null, null);
+        }
+    }
+
+    /// <summary>
+    /// Why a figure of one period cannot be read from the sweep's cases, judged on the first sub-case: no schedule, or no
+    /// period of the label given; null when it can.
+    /// </summary>
+    private static CaseError? PeriodProblem(string json, string fileName, NamedResult result, string? period)
+    {
+        if (CaseReader.ReadText(json, fileName).Case is not { } first)
+        {
             return null;
         }
 
-        if (sweep["result"] is JsonValue value && value.TryGetValue<string>(out var name) && ResultNames.TryGetValue(name, out var result))
+        if (first.Schedule is not { } schedule)
         {
-            return result;
+            return new CaseError("$.sweep.result", $"{NamedResults.Name(result)} needs $.schedule");
         }
 
-        errors.Add(new CaseError("$.sweep.result", $"must be one of {expected}; got {sweep["result"]!.ToJsonString()}"));
-        return null;
+        return period is null || schedule.Periods.Any(candidate => candidate.Label == period)
+            ? null
+            : new CaseError("$.sweep.result.period", $"no period is labelled '{period}' in the first sub-case; the last is '{schedule.Periods[^1].Label}'");
     }
 
     private static List<SweepParameter> ReadParameters(JsonObject root, JsonObject sweep, List<CaseError> errors)

@@ -8,6 +8,12 @@ namespace Layers.Core.Cases;
 /// <param name="Errors">Problems in <c>$.sweep</c>, each with its JSON path.</param>
 public sealed record SweepExpansion(IReadOnlyList<SweepVariant> Variants, NamedResult? Result, IReadOnlyList<CaseError> Errors)
 {
+    /// <summary>
+    /// For a figure of one period of a schedule (<see cref="NamedResults.IsReadInPeriod"/>), the label of the period it
+    /// is read in, e.g. "dose 7 of 7"; null for the last period, and for the other results.
+    /// </summary>
+    public string? ResultPeriod { get; init; }
+
     /// <summary>True when the sweep could be expanded.</summary>
     public bool IsValid => Errors.Count == 0;
 }

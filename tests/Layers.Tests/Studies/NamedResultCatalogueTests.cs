@@ -77,13 +77,15 @@ public sealed class NamedResultCatalogueTests
     }
 
     [Fact]
-    public void Sweeps_accept_exactly_the_names_of_the_catalogue_that_a_batch_summary_lists()
+    public void Sweeps_accept_exactly_the_names_of_the_catalogue_that_a_batch_summary_lists_and_the_figures_of_one_period()
     {
         var json = CaseJson.With(BatchCases.Membrane, ("$.sweep", """{ "parameters": [ { "path": "$.layers[0].thickness", "values": ["20 um"] } ], "result": "flux" }"""));
 
         var errors = SweepExpander.Expand(json, "sweep.json").Errors.Select(error => $"{error.JsonPath}: {error.Message}").ToList();
 
-        Assert.Equal(NamedResults.InBatchSummary.Select(NamedResults.Name), Listed(errors, "$.sweep.result: must be one of "));
+        Assert.Equal(
+            NamedResults.InBatchSummary.Concat(NamedResults.All.Where(NamedResults.IsReadInPeriod)).Select(NamedResults.Name),
+            Listed(errors, "$.sweep.result: must be one of "));
         Assert.Equal(
             [
                 "leftReceivedKgPerSquareMeter", "rightReceivedKgPerSquareMeter", "steadyFluxKgPerSquareMeterSecond", "lagTimeSeconds", "timeTo90PercentSeconds",
@@ -102,7 +104,9 @@ public sealed class NamedResultCatalogueTests
 
         Assert.Equal(NamedResults.All.Select(NamedResults.Name), Enum(schema["$defs"]!["studyResult"]!["oneOf"]![0]!["enum"]));
         Assert.Equal(NamedResults.All.Select(NamedResults.Name), Enum(schema["$defs"]!["studyResult"]!["oneOf"]![1]!["properties"]!["name"]!["enum"]));
-        Assert.Equal(NamedResults.InBatchSummary.Select(NamedResults.Name), Enum(schema["properties"]!["sweep"]!["properties"]!["result"]!["enum"]));
+        var periodFigures = NamedResults.All.Where(NamedResults.IsReadInPeriod).Select(NamedResults.Name).ToList();
+        Assert.Equal(NamedResults.InBatchSummary.Select(NamedResults.Name).Concat(periodFigures), Enum(schema["properties"]!["sweep"]!["properties"]!["result"]!["oneOf"]![0]!["enum"]));
+        Assert.Equal(periodFigures, Enum(schema["properties"]!["sweep"]!["properties"]!["result"]!["oneOf"]![1]!["properties"]!["name"]!["enum"]));
     }
 
     [Fact]
