@@ -1,5 +1,6 @@
 using Layers.Core.Domain;
 using Layers.Core.Results;
+using Layers.Core.Simulation;
 using Layers.Core.Units;
 using OxyPlot;
 using OxyPlot.Annotations;
@@ -133,7 +134,7 @@ internal static class PermeationPlot
 
     private static IEnumerable<string> Subtitle(SimulationResult result, string receiver, UnitDefinition timeUnit, UnitDefinition massUnit)
     {
-        yield return result.Case.Schedule is { ChangesMedia: true }
+        yield return !Simulator.LagTimeDefined(result.Case)
             ? $"Cumulative amount received by {receiver}"
             : $"Cumulative amount received by {receiver}, with the steady-state asymptote";
         if (result.Permeation is not { } permeation)
@@ -146,7 +147,7 @@ internal static class PermeationPlot
         var duration = result.Case.DurationSeconds;
         var lagText = permeation.LagTimeSeconds switch
         {
-            null when result.Case.Schedule is { ChangesMedia: true } => "no lag time: the schedule changes a medium during the run",
+            null when !Simulator.LagTimeDefined(result.Case) => "no lag time: the schedule changes a medium during the run",
             null => $"steady state not reached within {DisplayText.Time(result.FinalState.HorizonSeconds, result.Case.Display.Time)}: no lag time",
             { } lag when lag >= duration => $"lag time {DisplayText.Time(lag, result.Case.Display.Time)}, beyond the {DisplayText.Time(duration, result.Case.Display.Time)} simulated",
             { } lag => $"lag time {DisplayText.Time(lag, result.Case.Display.Time)}",
@@ -154,7 +155,7 @@ internal static class PermeationPlot
         var analytic = permeation.AnalyticLagTimeSeconds is { } reference
             ? $" (single membrane, L\u00B2/6D: {DisplayText.Time(reference, result.Case.Display.Time)})"
             : string.Empty;
-        var which = result.Case.Schedule is { ChangesMedia: true } ? "steady flux with the last period's media" : "steady flux";
+        var which = !Simulator.LagTimeDefined(result.Case) ? "steady flux with the last period's media" : "steady flux";
         yield return $"{which} J = {fluxText};  {lagText}{analytic}";
     }
 }

@@ -291,10 +291,9 @@ public static class TransferPlot
             return [];
         }
 
-        var media = schedule.MediaByPeriod(side, simulation.Face(side));
-        return Enumerable.Range(1, schedule.Periods.Count - 1)
-            .Where(p => schedule.Periods[p].Renewed.Contains(side) && media[p] is CompartmentFace)
-            .Select(p => (schedule.Periods[p].StartSeconds, ((CompartmentFace)media[p]).InitialConcentrationKgPerCubicMeter))
+        return schedule.Renewals(side, simulation.Face(side))
+            .Where(renewal => renewal.Fresh is CompartmentFace)
+            .Select(renewal => (renewal.TimeSeconds, ((CompartmentFace)renewal.Fresh).InitialConcentrationKgPerCubicMeter))
             .ToArray();
     }
 

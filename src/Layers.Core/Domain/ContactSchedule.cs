@@ -88,6 +88,21 @@ public sealed record ContactSchedule(IReadOnlyList<SchedulePeriod> Periods)
     }
 
     /// <summary>
+    /// Each renewal of the medium on a side after t = 0: its time, the portion that leaves and the fresh one that comes
+    /// (the same medium again, or one with other properties).
+    /// </summary>
+    /// <param name="side">The face.</param>
+    /// <param name="first">The medium the case writes on that face.</param>
+    public IReadOnlyList<(double TimeSeconds, FaceCondition Old, FaceCondition Fresh)> Renewals(Side side, FaceCondition first)
+    {
+        var media = MediaByPeriod(side, first);
+        return Enumerable.Range(1, Periods.Count - 1)
+            .Where(p => Periods[p].Renewed.Contains(side))
+            .Select(p => (Periods[p].StartSeconds, media[p - 1], media[p]))
+            .ToArray();
+    }
+
+    /// <summary>
     /// The medium on a side during the period that runs at <paramref name="timeSeconds"/>, the later one at a boundary
     /// (the medium a period brings stands from its start).
     /// </summary>

@@ -27,13 +27,13 @@ public static class ResultTables
         headers.Add("toward final state");
         // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
         var amountFloor = Simulation.NegligibleFloor.AmountPerArea(result);
+        var concentrationFloors = media.Select(medium => Simulation.NegligibleFloor.ConcentrationIn(result, medium.Side)).ToArray();
         var rows = result.Reports.Select(report =>
         {
             var row = new List<string> { format.TimeValue(report.Sample.TimeSeconds) };
-            foreach (var (side, face) in media)
+            foreach (var ((side, face), concentrationFloor) in media.Zip(concentrationFloors))
             {
                 var sample = (side == Side.Left ? report.Sample.Left : report.Sample.Right)!;
-                var concentrationFloor = Simulation.NegligibleFloor.ConcentrationIn(result, side);
                 row.Add(DisplayFormat.OrFloor(sample.ConcentrationKgPerCubicMeter, concentrationFloor, value => format.MediumConcentrationValue(value, face)));
                 row.Add(DisplayFormat.OrFloor(sample.TransferredIntoMediumPerArea, amountFloor, format.MassPerAreaValue));
             }

@@ -75,8 +75,9 @@ public static class ScheduleTables
         // Below the run's reporting floor a figure has no known accuracy: "< floor" stands in for its digits.
         var amountFloor = NegligibleFloor.AmountPerArea(result);
         string Received(double value) => DisplayFormat.OrFloor(value, amountFloor, format.MassPerAreaValue);
+        var concentrationFloors = new[] { NegligibleFloor.ConcentrationIn(result, Side.Left), NegligibleFloor.ConcentrationIn(result, Side.Right) };
         string AtEnd(double value, Side side, FaceCondition face) =>
-            DisplayFormat.OrFloor(value, NegligibleFloor.ConcentrationIn(result, side), concentration => format.MediumConcentrationValue(concentration, face));
+            DisplayFormat.OrFloor(value, concentrationFloors[(int)side], concentration => format.MediumConcentrationValue(concentration, face));
         var rows = schedule.Periods.Select(outcome => (IReadOnlyList<string>)
         [
             outcome.Period.Label,

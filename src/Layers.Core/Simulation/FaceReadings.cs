@@ -18,31 +18,21 @@ internal sealed class FaceReadings
     }
 
     /// <summary>
-    /// Flux into the medium on a side, kg/(m2 s), for a state in the case's own u = c/K. An output at the boundary of
-    /// two stages reads the stage that ends there (the flux jumps with D at that instant, and the state is the one
-    /// before that moment's changes); a time past the last stage (the search beyond the duration) reads the last.
+    /// The flux into the medium on a side, kg/(m2 s), and its concentration, kg/m3 (a compartment's content over the
+    /// volume of the portion in contact, a bath's own level; null for a closed face), for a state in the case's own
+    /// u = c/K. An output at the boundary of two stages reads the stage that ends there (the flux jumps with D at that
+    /// instant, and the state is the one before that moment's changes); a time past the last stage (the search beyond
+    /// the duration) reads the last.
     /// </summary>
-    public double IntoMedium(Side side, double timeSeconds, ReadOnlySpan<double> state)
+    public (double FluxKgPerSquareMeterSecond, double? ConcentrationKgPerCubicMeter) Read(Side side, double timeSeconds, ReadOnlySpan<double> state)
     {
         var stage = StageAt(timeSeconds);
-        return stage.System.FluxIntoMedium(side, InStage(stage, state));
-    }
-
-    /// <summary>
-    /// Concentration in the medium on a side, kg/m3, for a state in the case's own u = c/K: a compartment's content over
-    /// the volume of the portion in contact, a bath's own level; null for a closed face. The stage as for
-    /// <see cref="IntoMedium"/>.
-    /// </summary>
-    public double? InMedium(Side side, double timeSeconds, ReadOnlySpan<double> state)
-    {
-        var stage = StageAt(timeSeconds);
+        var inStage = InStage(stage, state);
         var node = stage.System.CompartmentNode(side);
-        if (node >= 0)
-        {
-            return stage.System.ConcentrationOf(node, stage.ToStage is { } factors ? state[node] * factors[node] : state[node]);
-        }
-
-        return (stage.Case.Face(side) as BathFace)?.ConcentrationKgPerCubicMeter;
+        var concentration = node >= 0
+            ? stage.System.ConcentrationOf(node, inStage[node])
+            : (stage.Case.Face(side) as BathFace)?.ConcentrationKgPerCubicMeter;
+        return (stage.System.FluxIntoMedium(side, inStage), concentration);
     }
 
     private static ReadOnlySpan<double> InStage(StageSystem stage, ReadOnlySpan<double> state)

@@ -109,16 +109,14 @@ internal static class FoodContactAssessment
         }
 
         var offset = 0.0;
-        var emptied = new LayerStack(simulation.Stack.Layers.Select(layer => layer with { InitialConcentrationKgPerCubicMeter = 0 }));
-        if (!OnlyLoadedLayersCarrySubstance(simulation) && simulation.Schedule is { ChangesMass: true })
+        if (!OnlyLoadedLayersCarrySubstance(simulation))
         {
-            // Renewals and layers put on are state events of a whole run: the offset comes from one, judged the same way.
-            offset = JudgedValue(simulation with { Stack = emptied }, cancellation);
-        }
-        else if (!OnlyLoadedLayersCarrySubstance(simulation))
-        {
-            var start = DiffusionSystemBuilder.Build(simulation.WithFirstStageDiffusivities() with { Stack = emptied }, grid).InitialState;
-            offset = FinalValue(stages, start, grid, simulation, watcher, cancellation);
+            // Renewals and layers put on are state events of a whole run: the offset then comes from one, judged the same
+            // way; otherwise the stages are integrated from the emptied state alone.
+            var emptied = new LayerStack(simulation.Stack.Layers.Select(layer => layer with { InitialConcentrationKgPerCubicMeter = 0 }));
+            offset = simulation.Schedule is { ChangesMass: true }
+                ? JudgedValue(simulation with { Stack = emptied }, cancellation)
+                : FinalValue(stages, DiffusionSystemBuilder.Build(simulation.WithFirstStageDiffusivities() with { Stack = emptied }, grid).InitialState, grid, simulation, watcher, cancellation);
         }
 
         var slope = judged - offset;

@@ -137,14 +137,18 @@ internal sealed class Observables
             var transferred = (_system.Capacity[node] * (state[node] - _initialState[node]))
                 + (_sampling?.RemovedPerArea(side) ?? 0)
                 - bathInflow;
-            return new FaceSample(
-                transferred, _readings.InMedium(side, time, state)!.Value, _readings.IntoMedium(side, time, state), CompartmentFraction(side, state));
+            var (flux, concentration) = _readings.Read(side, time, state);
+            return new FaceSample(transferred, concentration!.Value, flux, CompartmentFraction(side, state));
+        }
+
+        if (_case.Face(side) is not BathFace)
+        {
+            return null;
         }
 
         // 0 - x rather than -x, so that no exchange reads 0, not -0, in the files.
-        return _case.Face(side) is BathFace
-            ? new FaceSample(0 - bathInflow, _readings.InMedium(side, time, state)!.Value, _readings.IntoMedium(side, time, state), null)
-            : null;
+        var (intoBath, level) = _readings.Read(side, time, state);
+        return new FaceSample(0 - bathInflow, level!.Value, intoBath, null);
     }
 
     private double DistanceToFinal(ReadOnlySpan<double> state)

@@ -35,7 +35,10 @@ internal sealed class SamplingEvents : IStateEvents
 
             if (simulation.Face(side) is CompartmentFace && simulation.Schedule is { } schedule && schedule.Renews(side))
             {
-                _renewed[(int)side] = new Renewed(Portions(schedule, side, simulation.Face(side)), system.CompartmentNode(side));
+                var portions = schedule.Renewals(side, simulation.Face(side))
+                    .Select(renewal => (renewal.TimeSeconds, (CompartmentFace)renewal.Old, (CompartmentFace)renewal.Fresh))
+                    .ToArray();
+                _renewed[(int)side] = new Renewed(portions, system.CompartmentNode(side));
             }
         }
 
@@ -92,14 +95,14 @@ internal sealed class SamplingEvents : IStateEvents
 
         foreach (var renewed in _renewed)
         {
-            if (renewed is null || !renewed.TimesSeconds.Any(time => Math.Abs(time - timeSeconds) <= 1e-9 * time))
+            if (renewed?.Portions.FirstOrDefault(portion => Math.Abs(portion.TimeSeconds - timeSeconds) <= 1e-9 * portion.TimeSeconds)
+                is not (_, { } old, { } fresh))
             {
                 continue;
             }
 
             // The node's u is in the case's own variable, whose storage times u is the content whatever portion is in
             // contact: the old portion leaves with its content, the fresh one brings c_fresh over its own volume.
-            var (_, old, fresh) = renewed.Portions.First(portion => Math.Abs(portion.TimeSeconds - timeSeconds) <= 1e-9 * portion.TimeSeconds);
             var storage = _system.Capacity[renewed.Node];
             var content = storage * state[renewed.Node];
             var brought = fresh.InitialMassPerArea;
@@ -121,16 +124,6 @@ internal sealed class SamplingEvents : IStateEvents
             sampled.RemovedPerArea += sampled.Sampling.VolumeCubicMeters * concentration / compartment.ContactAreaSquareMeters;
             state[sampled.Node] *= (compartment.VolumeCubicMeters - sampled.Sampling.VolumeCubicMeters) / compartment.VolumeCubicMeters;
         }
-    }
-
-    /// <summary>Each renewal of the medium on a side: its time, the portion that leaves and the fresh one that comes.</summary>
-    private static (double TimeSeconds, CompartmentFace Old, CompartmentFace Fresh)[] Portions(ContactSchedule schedule, Side side, FaceCondition first)
-    {
-        var media = schedule.MediaByPeriod(side, first);
-        return Enumerable.Range(1, schedule.Periods.Count - 1)
-            .Where(p => schedule.Periods[p].Renewed.Contains(side))
-            .Select(p => (schedule.Periods[p].StartSeconds, (CompartmentFace)media[p - 1], (CompartmentFace)media[p]))
-            .ToArray();
     }
 
     private sealed class Renewed((double TimeSeconds, CompartmentFace Old, CompartmentFace Fresh)[] portions, int node)

@@ -62,7 +62,7 @@ public static class ScheduleAnalysis
         }
 
         return new ScheduleSummary(
-            outcomes, SteadyStates(outcomes, simulation.Numerics.Accuracy), RepeatedUse(simulation, schedule, series), Renewed(simulation, schedule, series))
+            outcomes, SteadyStates(outcomes, simulation.Numerics.Accuracy), RepeatedUse(simulation, schedule, series, mediaBySide), Renewed(simulation, schedule, series))
         {
             LayerMoves = LayerMoves(simulation, schedule, series),
         };
@@ -109,12 +109,11 @@ public static class ScheduleAnalysis
                 continue;
             }
 
-            var media = schedule.MediaByPeriod(side, compartment);
-            var renewals = Enumerable.Range(1, schedule.Periods.Count - 1).Where(p => schedule.Periods[p].Renewed.Contains(side)).ToArray();
-            var carried = renewals.Sum(p => At(series, schedule.Periods[p].StartSeconds) is { } sample && Face(sample, side) is { } face
-                ? (face.ConcentrationKgPerCubicMeter * ((CompartmentFace)media[p - 1]).VolumePerAreaMeters) - media[p].InitialMassPerArea
+            var renewals = schedule.Renewals(side, compartment);
+            var carried = renewals.Sum(renewal => At(series, renewal.TimeSeconds) is { } sample && Face(sample, side) is { } face
+                ? (face.ConcentrationKgPerCubicMeter * ((CompartmentFace)renewal.Old).VolumePerAreaMeters) - renewal.Fresh.InitialMassPerArea
                 : double.NaN);
-            result.Add(new RenewedMedium(side, compartment.Name, renewals.Length, carried));
+            result.Add(new RenewedMedium(side, compartment.Name, renewals.Count, carried));
         }
 
         return result;
@@ -154,7 +153,8 @@ public static class ScheduleAnalysis
     /// concentration at the end of each contact (a portion's whole stay), judged as <see cref="RepeatedUseVerdict"/>
     /// states. A rise counts when it exceeds the run's accuracy, so that round-off between equal contacts is not one.
     /// </summary>
-    private static RepeatedUseVerdict? RepeatedUse(SimulationCase simulation, ContactSchedule schedule, IReadOnlyList<StateSample> series)
+    private static RepeatedUseVerdict? RepeatedUse(
+        SimulationCase simulation, ContactSchedule schedule, IReadOnlyList<StateSample> series, IReadOnlyList<FaceCondition>[] mediaBySide)
     {
         if (!simulation.JudgesRepeatedUse)
         {
@@ -167,6 +167,7 @@ public static class ScheduleAnalysis
         var density = compartment.DensityKgPerCubicMeter ?? FoodContactSettings.DefaultFoodDensity;
         var contacts = new List<double>();
         var migration = new List<double>();
+        var periodStarting = Enumerable.Range(0, schedule.Periods.Count).ToDictionary(p => schedule.Periods[p].StartSeconds);
         foreach (var (startSeconds, endSeconds) in schedule.Contacts(food.FoodSide))
         {
             if (At(series, endSeconds) is not { } end || Face(end, food.FoodSide) is not { } face)
@@ -175,7 +176,7 @@ public static class ScheduleAnalysis
             }
 
             // Each contact's portion of food may have a volume and a fresh concentration of its own.
-            var portion = (CompartmentFace)schedule.MediumFrom(food.FoodSide, compartment, startSeconds);
+            var portion = (CompartmentFace)mediaBySide[(int)food.FoodSide][periodStarting[startSeconds]];
             contacts.Add(face.ConcentrationKgPerCubicMeter / density);
             migration.Add((face.ConcentrationKgPerCubicMeter - portion.InitialConcentrationKgPerCubicMeter) * portion.VolumePerAreaMeters);
         }

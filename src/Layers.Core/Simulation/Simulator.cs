@@ -142,7 +142,7 @@ public static class Simulator
     /// Whether the lag time of the amount received means anything: not when a schedule changes a medium during the run
     /// (a donor raised in steps), as the straight line it is the intercept of belongs to one level from t = 0.
     /// </summary>
-    internal static bool LagTimeDefined(SimulationCase simulation) => simulation.Schedule is not { ChangesMedia: true };
+    public static bool LagTimeDefined(SimulationCase simulation) => simulation.Schedule is not { ChangesMedia: true };
 
     /// <summary>
     /// Solves a case up to its duration and no further, and returns only the integral quantities at its output
